@@ -1,0 +1,43 @@
+package aequa.project;
+
+import java.util.List;
+
+/**
+ * A statistics source: a CSV file, or a table or view in a SQLite/GeoPackage file.
+ *
+ * @param file            path relative to the project folder ({@code .csv}, {@code .tsv}, {@code .sqlite}, {@code .gpkg})
+ * @param table           table or view name, for database files
+ * @param key             column holding the region key
+ * @param layout          {@code wide} (a column per indicator) or {@code long} (key, indicator, period, value rows)
+ * @param indicatorColumn long layout: the column naming the indicator
+ * @param periodColumn    the column naming the period the figure refers to, or empty for a single period
+ * @param valueColumn     long layout: the column holding the value
+ * @param delimiter       CSV field separator: {@code ","}, {@code ";"} or {@code "\t"}; empty to detect
+ * @param decimal         the decimal mark, {@code "."} or {@code ","}
+ * @param thousands       the thousands separator, or empty for none
+ * @param missing         cell texts that mean "no data"
+ * @param suppressed      cell texts that mean "withheld", for example for confidentiality
+ * @param notApplicable   cell texts that mean "not applicable"
+ * @param keyMatching     {@code exact} or {@code relaxed} (opt-in: case, whitespace and leading zeros ignored)
+ */
+public record FigureSourceSpec(String file, String table, String key, String layout, String indicatorColumn,
+                               String periodColumn, String valueColumn, String delimiter, String decimal,
+                               String thousands, List<String> missing, List<String> suppressed,
+                               List<String> notApplicable, String keyMatching) {
+
+    public FigureSourceSpec {
+        table = table == null ? "" : table;
+        key = key == null ? "key" : key;
+        layout = layout == null ? "wide" : layout;
+        indicatorColumn = indicatorColumn == null ? "indicator" : indicatorColumn;
+        periodColumn = periodColumn == null ? "" : periodColumn;
+        valueColumn = valueColumn == null ? "value" : valueColumn;
+        delimiter = delimiter == null ? "" : delimiter;
+        decimal = decimal == null ? "." : decimal;
+        thousands = thousands == null ? "" : thousands;
+        missing = missing == null ? List.of("", "NA", "..") : List.copyOf(missing);
+        suppressed = suppressed == null ? List.of() : List.copyOf(suppressed);
+        notApplicable = notApplicable == null ? List.of() : List.copyOf(notApplicable);
+        keyMatching = keyMatching == null ? "exact" : keyMatching;
+    }
+}

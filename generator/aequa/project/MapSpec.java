@@ -1,0 +1,51 @@
+package aequa.project;
+
+import java.util.List;
+
+/**
+ * One map as the project file describes it.
+ *
+ * @param id          a short, URL-safe identifier; names the map's page and files
+ * @param title       the map's title
+ * @param regions     id of a geometry source
+ * @param figures     id of a statistics source
+ * @param indicator   the indicator (wide layout: its column) to map
+ * @param periods     the periods to show; empty for the latest; several make small multiples with shared classes
+ * @param measure     {@code rate} (already a rate or share) or {@code count} (a number of things or people)
+ * @param normalise   {@code none}, {@code area} (per km2 of geodesic area) or {@code column} (per {@code per})
+ * @param per         the denominator column when normalising by column
+ * @param multiplier  what the normalised value is multiplied by (for example 1000 for "per 1,000 people")
+ * @param unit        the unit readers see, for example "clinics per 1,000 km2"
+ * @param display     {@code choropleth} or {@code circles} (proportional symbols, for counts)
+ * @param classes     the classification
+ * @param colours     the colour ramp
+ * @param projection  projection settings overriding the project-wide ones
+ * @param eventsColumn the column holding the count a rate was built from, to flag unreliable rates
+ * @param marginColumn the column holding the margin of error of each value
+ * @param notes       notes shown under the map
+ * @param source      the credit for the figures
+ * @param asOf        the date or period the figures refer to, as readers should see it
+ */
+public record MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
+                      String measure, String normalise, String per, Double multiplier, String unit, String display,
+                      ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
+                      String marginColumn, String notes, String source, String asOf) {
+
+    public MapSpec {
+        title = title == null ? id : title;
+        periods = periods == null ? List.of() : List.copyOf(periods);
+        measure = measure == null ? "rate" : measure;
+        normalise = normalise == null ? "none" : normalise;
+        per = per == null ? "" : per;
+        multiplier = multiplier == null ? 1.0 : multiplier;
+        unit = unit == null ? "" : unit;
+        display = display == null ? "choropleth" : display;
+        classes = classes == null ? ClassesSpec.DEFAULT : classes;
+        colours = colours == null ? ColoursSpec.DEFAULT : colours;
+        eventsColumn = eventsColumn == null ? "" : eventsColumn;
+        marginColumn = marginColumn == null ? "" : marginColumn;
+        notes = notes == null ? "" : notes;
+        source = source == null ? "" : source;
+        asOf = asOf == null ? "" : asOf;
+    }
+}

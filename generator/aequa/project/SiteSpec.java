@@ -1,0 +1,21 @@
+package aequa.project;
+
+/**
+ * @param title     the site's title
+ * @param publisher who publishes it
+ * @param notice    a sentence shown on every page (for example that the data is invented), or empty
+ * @param theme     a theme name from themes/ or the project's own themes/ folder
+ * @param language  the pages' language tag (BCP 47)
+ */
+public record SiteSpec(String title, String publisher, String notice, String theme, String language) {
+
+    static final SiteSpec DEFAULT = new SiteSpec(null, null, null, null, null);
+
+    public SiteSpec {
+        title = title == null ? "Maps" : title;
+        publisher = publisher == null ? "" : publisher;
+        notice = notice == null ? "" : notice;
+        theme = theme == null ? "daylight" : theme;
+        language = language == null ? "en" : language;
+    }
+}

@@ -1,0 +1,31 @@
+package aequa.projection;
+
+import java.util.List;
+
+/**
+ * The projection chosen for a map, with the evidence for the choice: angular distortion (Tissot's omega,
+ * the maximum angular deformation at a point) over the data's footprint, the runners-up and a plain reason.
+ *
+ * @param projection   the chosen projection
+ * @param omegaMaxDeg  the largest omega over the footprint's sample points, in degrees
+ * @param omegaMeanDeg the area-weighted mean omega over the footprint, in degrees
+ * @param worstLonDeg  longitude of the sample point where omega is largest
+ * @param worstLatDeg  latitude of that point
+ * @param runnersUp    the best other candidates, best first
+ * @param reason       one plain-language sentence saying why this projection was chosen
+ */
+public record ProjectionChoice(EqualAreaProjection projection, double omegaMaxDeg, double omegaMeanDeg,
+                               double worstLonDeg, double worstLatDeg, List<Candidate> runnersUp, String reason) {
+
+    public ProjectionChoice {
+        runnersUp = List.copyOf(runnersUp);
+    }
+
+    /** A candidate that was evaluated and not chosen. */
+    public record Candidate(ProjectionFamily family, List<ProjectionParameter> parameters,
+                            double omegaMaxDeg, double omegaMeanDeg) {
+        public Candidate {
+            parameters = List.copyOf(parameters);
+        }
+    }
+}

@@ -1,0 +1,42 @@
+package aequa.projection;
+
+import java.util.Arrays;
+import java.util.Locale;
+import java.util.Optional;
+
+/**
+ * The equal-area projection families aequa can draw with. Every family is exactly equal-area on the
+ * WGS 84 ellipsoid. {@link #configName()} is the name used in project files and report.json.
+ */
+public enum ProjectionFamily {
+    LAMBERT_AZIMUTHAL("lambert-azimuthal", "Lambert azimuthal equal-area"),
+    ALBERS_CONIC("albers-conic", "Albers equal-area conic"),
+    CYLINDRICAL("cylindrical", "Lambert cylindrical equal-area"),
+    CYLINDRICAL_TRANSVERSE("cylindrical-transverse", "Transverse cylindrical equal-area"),
+    CYLINDRICAL_OBLIQUE("cylindrical-oblique", "Oblique cylindrical equal-area"),
+    EQUAL_EARTH("equal-earth", "Equal Earth"),
+    MOLLWEIDE("mollweide", "Mollweide");
+
+    private final String configName;
+    private final String displayName;
+
+    ProjectionFamily(String configName, String displayName) {
+        this.configName = configName;
+        this.displayName = displayName;
+    }
+
+    /** Kebab-case name used in project files, report.json and {@code explain --json}. */
+    public String configName() {
+        return configName;
+    }
+
+    /** The name readers see in captions. */
+    public String displayName() {
+        return displayName;
+    }
+
+    public static Optional<ProjectionFamily> fromConfigName(String name) {
+        String wanted = name.trim().toLowerCase(Locale.ROOT);
+        return Arrays.stream(values()).filter(f -> f.configName.equals(wanted)).findFirst();
+    }
+}
