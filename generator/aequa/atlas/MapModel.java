@@ -1,0 +1,35 @@
+package aequa.atlas;
+
+import java.util.List;
+
+import aequa.classes.Classification;
+import aequa.colour.ColourRamp;
+import aequa.planar.AreaAudit;
+import aequa.project.MapSpec;
+import aequa.projection.ProjectionChoice;
+
+/**
+ * Everything needed to draw and describe one map; immutable.
+ *
+ * @param spec           the map as the project file describes it (title, unit, notes, source, date, display)
+ * @param periods        the periods shown, oldest first; more than one makes small multiples with shared classes
+ * @param projection     the chosen projection and the evidence for it
+ * @param regions        the regions, sorted by key
+ * @param classification classes shared by all periods (computed from the pooled values)
+ * @param ramp           the class fills
+ * @param areaAudit      the area proof
+ * @param notices        the findings about this map a reader should see (missing figures, dropped islands)
+ */
+public record MapModel(MapSpec spec, List<String> periods, ProjectionChoice projection, List<MapRegion> regions,
+                       Classification classification, ColourRamp ramp, AreaAudit areaAudit, List<String> notices) {
+
+    public MapModel {
+        periods = List.copyOf(periods);
+        regions = List.copyOf(regions);
+        notices = List.copyOf(notices);
+    }
+
+    public String id() {
+        return spec.id();
+    }
+}
