@@ -1,0 +1,39 @@
+package aequa.cli;
+
+import java.nio.file.Path;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+
+import aequa.findings.Findings;
+import aequa.project.LoadedProject;
+import aequa.project.ProjectLoader;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** Runs step 1 of a build (load and check everything) and prints the findings; writes nothing. */
+@Command(name = "audit", mixinStandardHelpOptions = true,
+        description = "Check every input and print the join, area and projection findings, without writing pages.")
+final class AuditCommand implements Callable<Integer> {
+
+    @Parameters(paramLabel = "PROJECT_DIR", defaultValue = "data-demo", description = "The project folder (default: ${DEFAULT-VALUE}).")
+    Path projectDir;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        Findings findings = new Findings();
+        Optional<LoadedProject> project = ProjectLoader.load(projectDir, findings);
+        var err = spec.commandLine().getErr();
+        if (project.isEmpty()) {
+            FindingsPrinter.print(findings.list(), err, true);
+            return ExitCode.USAGE.code;
+        }
+        FindingsPrinter.print(findings.list(), err, true);
+        spec.commandLine().getOut().println("Audit of " + projectDir + ": " + FindingsPrinter.tally(findings.list()) + ".");
+        return findings.hasErrors() ? ExitCode.DATA_PROBLEMS.code : ExitCode.OK.code;
+    }
+}

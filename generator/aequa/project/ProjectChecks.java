@@ -1,0 +1,158 @@
+package aequa.project;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.regex.Pattern;
+
+import aequa.findings.Finding;
+import aequa.findings.Findings;
+
+/**
+ * Checks a bound project file for what its types cannot say: ids that other sections refer to, files that
+ * must exist, and the words allowed for each setting. Every finding names the line and column of the value.
+ * Names that belong to later stages (projection families, class methods) are checked by those stages,
+ * through {@link ProjectPlaces}.
+ */
+final class ProjectChecks {
+
+    private static final Pattern MAP_ID = Pattern.compile("[a-z0-9][a-z0-9-]{0,62}");
+
+    private final Path projectDir;
+    private final ProjectFile project;
+    private final YamlLocations locations;
+    private final Findings findings;
+
+    ProjectChecks(Path projectDir, ProjectFile project, YamlLocations locations, Findings findings) {
+        this.projectDir = projectDir;
+        this.project = project;
+        this.locations = locations;
+        this.findings = findings;
+    }
+
+    void run() {
+        project.regions().forEach((id, source) -> checkRegionSource("/regions/" + id, source));
+        project.figures().forEach((id, source) -> checkFigureSource("/figures/" + id, source));
+        checkChecks();
+        if (project.maps().isEmpty()) {
+            error("project-no-maps", "/maps", "The project file defines no maps.",
+                    "Add a 'maps:' list; 'aequa scaffold' writes an example.");
+        }
+        Set<String> ids = new HashSet<>();
+        for (int i = 0; i < project.maps().size(); i++) {
+            checkMap("/maps/" + i, project.maps().get(i), ids);
+        }
+    }
+
+    private void checkRegionSource(String at, RegionSourceSpec source) {
+        checkFile(at, source.file(), List.of(".geojson", ".json", ".gpkg"));
+        if (source.key().isBlank()) {
+            error("project-missing-key", at + "/key", "The region source has an empty 'key'.",
+                    "Name the property that holds each region's code, or '" + RegionSourceSpec.FEATURE_ID + "' for the feature id.");
+        }
+    }
+
+    private void checkFigureSource(String at, FigureSourceSpec source) {
+        checkFile(at, source.file(), List.of(".csv", ".tsv", ".txt", ".sqlite", ".db", ".gpkg"));
+        oneOf(at + "/layout", source.layout(), List.of("wide", "long"));
+        oneOf(at + "/decimal", source.decimal(), List.of(".", ","));
+        oneOf(at + "/delimiter", source.delimiter(), List.of("", ",", ";", "\t", "|"));
+        oneOf(at + "/key-matching", source.keyMatching(), List.of("exact", "relaxed"));
+    }
+
+    private void checkChecks() {
+        ChecksSpec checks = project.checks();
+        if (!(checks.areaTolerance() > 0)) {
+            error("project-bad-value", "/checks/area-tolerance", "'area-tolerance' must be a positive number.",
+                    "The default, 1e-4, allows 0.01 % between a region's drawn and true area.");
+        }
+        oneOf("/checks/missing-figures", checks.missingFigures(), List.of("warning", "error"));
+    }
+
+    private void checkMap(String at, MapSpec map, Set<String> ids) {
+        if (map.id() == null || !MAP_ID.matcher(map.id()).matches()) {
+            error("project-bad-map-id", at + "/id", "The map id '" + map.id() + "' is missing or not URL-safe.",
+                    "Use lower-case letters, digits and hyphens, for example 'clinic-density'.");
+        } else if (!ids.add(map.id())) {
+            error("project-duplicate-map-id", at + "/id", "The map id '" + map.id() + "' is used twice.",
+                    "Give every map its own id; it names the map's page and files.");
+        }
+        reference(at + "/regions", map.regions(), project.regions(), "regions");
+        reference(at + "/figures", map.figures(), project.figures(), "figures");
+        if (map.indicator() == null || map.indicator().isBlank()) {
+            error("project-missing-key", at + "/indicator", "Map '" + map.id() + "' names no indicator.",
+                    "Set 'indicator' to the column (wide layout) or indicator name (long layout) to map.");
+        }
+        oneOf(at + "/measure", map.measure(), List.of("rate", "count"));
+        oneOf(at + "/normalise", map.normalise(), List.of("none", "area", "column"));
+        if ("column".equals(map.normalise()) && map.per().isBlank()) {
+            error("project-missing-key", at + "/per", "Map '" + map.id() + "' normalises by a column but names none.",
+                    "Set 'per' to the denominator column, for example 'population'.");
+        }
+        oneOf(at + "/display", map.display(), List.of("choropleth", "circles"));
+        checkClasses(at + "/classes", map.classes());
+        oneOf(at + "/colours/scheme", map.colours().scheme(), List.of("sequential", "diverging", "qualitative"));
+        if (map.colours().hue() < 0 || map.colours().hue() > 360) {
+            error("project-bad-value", at + "/colours/hue", "'hue' must be between 0 and 360 degrees.", "");
+        }
+    }
+
+    private void checkClasses(String at, ClassesSpec classes) {
+        if (classes.count() < 2 || classes.count() > 9) {
+            error("project-bad-value", at + "/count", "'count' must be between 2 and 9 classes.",
+                    "Readers tell apart at most about seven shades of one hue (common practice).");
+        }
+        if ("manual".equals(classes.method())) {
+            List<Double> breaks = classes.breaks();
+            boolean ascending = !breaks.isEmpty();
+            for (int i = 1; i < breaks.size(); i++) {
+                ascending &= breaks.get(i) > breaks.get(i - 1);
+            }
+            if (!ascending) {
+                error("project-bad-value", at + "/breaks", "Manual classes need 'breaks' in ascending order.",
+                        "List the inner class limits, for example [10, 20, 50].");
+            }
+        }
+    }
+
+    private void reference(String at, String id, Map<String, ?> section, String sectionName) {
+        if (id == null || !section.containsKey(id)) {
+            error("project-unknown-reference", at,
+                    "'" + id + "' is not a source defined under '" + sectionName + "'.",
+                    section.isEmpty() ? "Define the source under '" + sectionName + ":' first."
+                            : "Defined: " + String.join(", ", section.keySet()) + ".");
+        }
+    }
+
+    private void checkFile(String at, String file, List<String> extensions) {
+        if (file == null || file.isBlank()) {
+            error("project-missing-key", at + "/file", "The source names no 'file'.", "");
+            return;
+        }
+        Path path = projectDir.resolve(file).normalize();
+        if (!path.startsWith(projectDir.normalize())) {
+            error("project-file-outside", at + "/file", "'" + file + "' lies outside the project folder.",
+                    "Keep data files inside the project folder, so the project can be moved and rebuilt.");
+        } else if (!Files.isRegularFile(path)) {
+            error("project-file-not-found", at + "/file", "The file '" + file + "' does not exist.",
+                    "Paths are relative to the folder that holds " + ProjectFile.FILE_NAME + ".");
+        } else if (extensions.stream().noneMatch(e -> file.toLowerCase(java.util.Locale.ROOT).endsWith(e))) {
+            error("project-file-type", at + "/file", "'" + file + "' has an unsupported file type.",
+                    "Supported here: " + String.join(", ", extensions) + ".");
+        }
+    }
+
+    private void oneOf(String at, String value, List<String> allowed) {
+        if (!allowed.contains(value)) {
+            error("project-unknown-value", at, "'" + value + "' is not a known value here.",
+                    "Use one of: " + String.join(", ", allowed.stream().map(v -> v.equals("\t") ? "\"\\t\"" : "'" + v + "'").toList()) + ".");
+        }
+    }
+
+    private void error(String code, String pointer, String message, String hint) {
+        findings.add(Finding.error(code, ProjectFile.FILE_NAME, locations.place(pointer), message, hint));
+    }
+}
