@@ -1,0 +1,76 @@
+package aequa.architecture;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.Test;
+
+/**
+ * Keeps the pipeline readable as a data flow: a stage's package may use the stages before it, never the
+ * ones after it, and each third-party library stays in the one package that owns it (DEVELOPERS.md).
+ */
+class StageOrderTest {
+
+    /** The stages in data-flow order; the index is the rank. */
+    private static final List<String> STAGES = List.of("findings", "project", "inputs", "ellipsoid", "projection",
+            "planar", "statistics", "classes", "colour", "atlas", "drawing", "pages", "publish", "cli");
+
+    /** Libraries confined to one stage. */
+    private static final Map<String, String> LIBRARY_OWNERS = Map.of(
+            "org.apache.sis", "projection",
+            "net.sf.geographiclib", "ellipsoid",
+            "org.jfree", "drawing",
+            "freemarker", "pages",
+            "picocli", "cli");
+
+    private static final Pattern IMPORT = Pattern.compile("^import (?:static )?([\\w.]+)", Pattern.MULTILINE);
+    private static final Pattern QUALIFIED_USE = Pattern.compile("\\baequa\\.(\\w+)\\.[A-Z]");
+
+    @Test
+    void stagesUseOnlyEarlierStagesAndOwnTheirLibraries() throws IOException {
+        Path root = Path.of("generator/aequa");
+        List<String> violations = new ArrayList<>();
+        try (Stream<Path> files = Files.walk(root)) {
+            for (Path file : files.filter(f -> f.toString().endsWith(".java")).toList()) {
+                String stage = root.relativize(file).getName(0).toString();
+                int rank = STAGES.indexOf(stage);
+                assertTrue(rank >= 0, "package not in the stage list: " + stage + " (" + file + ")");
+                String source = Files.readString(file);
+                Matcher imports = IMPORT.matcher(source);
+                while (imports.find()) {
+                    check(file, stage, rank, imports.group(1), violations);
+                }
+                Matcher uses = QUALIFIED_USE.matcher(source);
+                while (uses.find()) {
+                    check(file, stage, rank, "aequa." + uses.group(1) + ".X", violations);
+                }
+            }
+        }
+        assertEquals(List.of(), violations);
+    }
+
+    private static void check(Path file, String stage, int rank, String name, List<String> violations) {
+        if (name.startsWith("aequa.")) {
+            String used = name.split("\\.")[1];
+            int usedRank = STAGES.indexOf(used);
+            if (usedRank > rank) {
+                violations.add(file + ": stage '" + stage + "' uses later stage '" + used + "'");
+            }
+        }
+        LIBRARY_OWNERS.forEach((library, owner) -> {
+            if (name.startsWith(library + ".") && !stage.equals(owner)) {
+                violations.add(file + ": " + library + " belongs to stage '" + owner + "', used in '" + stage + "'");
+            }
+        });
+    }
+}
