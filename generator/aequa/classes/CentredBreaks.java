@@ -1,6 +1,7 @@
 package aequa.classes;
 
 import java.math.BigDecimal;
+import java.math.MathContext;
 import java.math.RoundingMode;
 
 /**
@@ -64,8 +65,9 @@ final class CentredBreaks {
         int half = classCount / 2;
         boolean odd = classCount % 2 == 1;
         double stepsPerSide = odd ? half + 0.5 : half;
-        BigDecimal step = BigDecimal.valueOf(
-                ReadableBreaks.round(reach / stepsPerSide, ReadableBreaks.MIN_SIGNIFICANT, RoundingMode.CEILING));
+        // divided in decimal so that, say, 8 / 2.5 is 3.2 and not 3.2000000000000002 rounded up to 3.3
+        BigDecimal step = new BigDecimal(reach).divide(BigDecimal.valueOf(stepsPerSide),
+                new MathContext(ReadableBreaks.MIN_SIGNIFICANT, RoundingMode.CEILING));
         BigDecimal centre = new BigDecimal(midpoint);
         double[] limits = new double[classCount + 1];
         for (int i = 0; i <= classCount; i++) {
