@@ -134,6 +134,20 @@ class ColourRampsTest {
         }
     }
 
+    @Test
+    void continuousColoursRunThroughTheFills() {
+        ColourRamp ramp = generate("sequential", 200, 0, 5, WHITE).ramp().orElseThrow();
+        assertEquals(ramp.fills().get(0), ramp.colourAt(0));
+        assertEquals(ramp.fills().get(2), ramp.colourAt(0.5));
+        assertEquals(ramp.fills().get(4), ramp.colourAt(1));
+        assertEquals(ramp.fills().get(4), ramp.colourAt(7)); // clamped
+        // between two fills: lightness between theirs (OKLab interpolation is linear in L)
+        double l = OkLab.fromRgb(ramp.colourAt(0.125)).lightness();
+        double l0 = OkLab.fromRgb(ramp.fills().get(0)).lightness();
+        double l1 = OkLab.fromRgb(ramp.fills().get(1)).lightness();
+        assertEquals((l0 + l1) / 2, l, 0.005);
+    }
+
     private static String failed(ColourRamp ramp) {
         return ramp.checks().stream().filter(c -> !c.passed()).map(Object::toString).collect(Collectors.joining("; "));
     }
