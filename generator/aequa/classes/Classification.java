@@ -7,8 +7,10 @@ import java.util.List;
  *
  * <p>Class {@code i} holds the values v with {@code limits[i] <= v < limits[i+1]}, except the last class,
  * which also holds its upper limit. {@code limits} has one more entry than there are classes; its first
- * entry is the smallest value classified and its last the largest. For {@link ClassMethod#UNCLASSED}
- * there is one "class" spanning the data and colours are interpolated.
+ * entry is at or below the smallest value classified and its last at or above the largest (the data
+ * extremes rounded outwards to 3 significant figures; for std-dev and diverging classes the symmetric
+ * layout may reach further, leaving end classes empty). For {@link ClassMethod#UNCLASSED} there is one
+ * "class" spanning the data and colours are interpolated. Made by {@link Classifier#classify}.
  *
  * @param method the method that produced the limits
  * @param limits the class limits, ascending, rounded for readers, length = number of classes + 1

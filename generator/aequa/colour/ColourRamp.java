@@ -23,6 +23,30 @@ public record ColourRamp(String scheme, List<Rgb> fills, List<Rgb> labelColours,
     }
 
     /**
+     * The colour at {@code position} along the ramp, for unclassed (continuous) maps: 0 is the first fill,
+     * 1 the last, positions between are interpolated linearly in OKLab (Ottosson 2020 designs the space
+     * for such blends), then rounded to 8-bit sRGB (channels clamped: a blend of two
+     * in-gamut fills strays outside sRGB only slightly). Positions outside [0, 1] are clamped; NaN is an error
+     * (no data is never a ramp colour).
+     */
+    public Rgb colourAt(double position) {
+        if (Double.isNaN(position)) {
+            throw new IllegalArgumentException("no data has no ramp colour");
+        }
+        if (fills.size() == 1) {
+            return fills.get(0);
+        }
+        double scaled = Math.max(0, Math.min(1, position)) * (fills.size() - 1);
+        int lower = Math.min((int) Math.floor(scaled), fills.size() - 2);
+        double t = scaled - lower;
+        OkLab from = OkLab.fromRgb(fills.get(lower));
+        OkLab to = OkLab.fromRgb(fills.get(lower + 1));
+        OkLab mixed = new OkLab(from.lightness() + t * (to.lightness() - from.lightness()),
+                from.a() + t * (to.a() - from.a()), from.b() + t * (to.b() - from.b()));
+        return mixed.toLinearSrgb().toRgb();
+    }
+
+    /**
      * One check of a ramp.
      *
      * @param name      what was checked, for example {@code adjacent-deltaE-deuteranopia}

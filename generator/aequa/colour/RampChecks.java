@@ -1,0 +1,110 @@
+package aequa.colour;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import aequa.colour.ColourRamp.RampCheck;
+
+/**
+ * The checks every generated ramp carries in {@link ColourRamp#checks()}.
+ *
+ * <ul>
+ *   <li>{@code adjacent-deltaE-<vision>} (ordered schemes) or {@code pairwise-deltaE-<vision>} (qualitative):
+ *       the smallest OKLab difference between neighbouring classes (every pair, for qualitative sets), for
+ *       normal vision and as simulated for protanopia, deuteranopia and tritanopia ({@link ColourVision}),
+ *       at least {@value #DISTINGUISHABLE_DELTA_E}.</li>
+ *   <li>{@code lightness-monotonic} (ordered schemes): the smallest step of OKLab L away from the quiet end
+ *       (the centre, for diverging ramps) is positive.</li>
+ *   <li>{@code label-contrast}: the smallest WCAG 2.2 contrast of each fill's label colour, at least 4.5.</li>
+ *   <li>{@code border-contrast-background}, {@code hatch-contrast-background}, {@code border-contrast-fills},
+ *       {@code hatch-contrast-fills}: WCAG 2.2 non-text contrast (SC 1.4.11), at least 3.</li>
+ * </ul>
+ *
+ * <p>Threshold {@value #DISTINGUISHABLE_DELTA_E}: three just-noticeable differences in OKLab (the JND is
+ * 0.02, CSS Color Module Level 4, section 13.2). One JND is measured on large, touching patches; map
+ * classes are often small and apart, and the difference needed to tell colours apart grows as marks
+ * shrink (Stone, Szafir and Setlur 2014, "An engineering model for color difference as a function of
+ * size", Color and Imaging Conference), so a few JNDs are asked for. Dichromat simulations compress the
+ * colour plane to a surface, so meeting the threshold there mostly rests on lightness steps.
+ */
+final class RampChecks {
+
+    static final double DISTINGUISHABLE_DELTA_E = 0.06;
+
+    private RampChecks() {
+    }
+
+    static List<RampCheck> run(String scheme, List<Rgb> fills, List<Rgb> labels, NonTextColours nonText) {
+        boolean qualitative = "qualitative".equals(scheme);
+        List<RampCheck> checks = new ArrayList<>();
+        for (ColourVision vision : ColourVision.values()) {
+            double smallest = qualitative ? smallestPairwise(fills, vision) : smallestAdjacent(fills, vision);
+            String name = (qualitative ? "pairwise-deltaE-" : "adjacent-deltaE-") + vision.label();
+            checks.add(atLeast(name, smallest, DISTINGUISHABLE_DELTA_E));
+        }
+        if (!qualitative) {
+            double step = smallestLightnessStep(fills, "diverging".equals(scheme), NonTextColours.isLight(nonText.background()));
+            checks.add(new RampCheck("lightness-monotonic", step > 0, step, 0));
+        }
+        double label = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < fills.size(); i++) {
+            label = Math.min(label, WcagContrast.ratio(fills.get(i), labels.get(i)));
+        }
+        checks.add(atLeast("label-contrast", label, WcagContrast.TEXT_MINIMUM));
+        checks.add(atLeast("border-contrast-background",
+                WcagContrast.ratio(nonText.border(), nonText.background()), WcagContrast.NON_TEXT_MINIMUM));
+        checks.add(atLeast("hatch-contrast-background",
+                WcagContrast.ratio(nonText.noDataHatch(), nonText.noDataGround()), WcagContrast.NON_TEXT_MINIMUM));
+        checks.add(atLeast("border-contrast-fills", smallestContrast(nonText.border(), fills),
+                WcagContrast.NON_TEXT_MINIMUM));
+        checks.add(atLeast("hatch-contrast-fills", smallestContrast(nonText.noDataHatch(), fills),
+                WcagContrast.NON_TEXT_MINIMUM));
+        return checks;
+    }
+
+    private static RampCheck atLeast(String name, double measured, double threshold) {
+        return new RampCheck(name, measured >= threshold, measured, threshold);
+    }
+
+    static double smallestAdjacent(List<Rgb> fills, ColourVision vision) {
+        double smallest = Double.POSITIVE_INFINITY;
+        for (int i = 1; i < fills.size(); i++) {
+            smallest = Math.min(smallest, vision.seen(fills.get(i - 1)).deltaE(vision.seen(fills.get(i))));
+        }
+        return smallest;
+    }
+
+    static double smallestPairwise(List<Rgb> fills, ColourVision vision) {
+        double smallest = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < fills.size(); i++) {
+            for (int j = i + 1; j < fills.size(); j++) {
+                smallest = Math.min(smallest, vision.seen(fills.get(i)).deltaE(vision.seen(fills.get(j))));
+            }
+        }
+        return smallest;
+    }
+
+    private static double smallestContrast(Rgb line, List<Rgb> fills) {
+        return fills.stream().mapToDouble(f -> WcagContrast.ratio(line, f)).min().orElse(Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * The smallest step of OKLab L in the loud direction (down on a light page, up on a dark one): along the
+     * ramp for sequential ramps; outwards from the middle on both arms for diverging ones.
+     */
+    static double smallestLightnessStep(List<Rgb> fills, boolean diverging, boolean lightPage) {
+        double sign = lightPage ? -1 : 1;
+        int n = fills.size();
+        double smallest = Double.POSITIVE_INFINITY;
+        for (int i = 1; i < n; i++) {
+            double step = OkLab.fromRgb(fills.get(i)).lightness() - OkLab.fromRgb(fills.get(i - 1)).lightness();
+            boolean lowArm = diverging && i <= n / 2;
+            double outward = lowArm ? -step : step;
+            if (diverging && n % 2 == 0 && i == n / 2) {
+                continue; // the two middle classes of an even diverging ramp share one lightness
+            }
+            smallest = Math.min(smallest, sign * outward);
+        }
+        return smallest;
+    }
+}

@@ -1,0 +1,93 @@
+package aequa.colour;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Generates class fills from hue and lightness parameters in OKLCh (Ottosson 2020), then gamut-maps them
+ * into sRGB by reducing chroma ({@link GamutMapping}). No palette is stored anywhere: every colour comes
+ * from these formulas.
+ *
+ * <p>Lightness runs linearly in OKLab L, whose steps Ottosson 2020 fits to perceived lightness, from the
+ * "quiet" end (close to the page: light on a light page) to the "loud" end. Chroma grows with distance from
+ * the quiet end, so the quietest class is a faint tint and the loudest the most saturated.
+ */
+final class RampShapes {
+
+    /** Share of the maximum chroma kept at the quiet end of a sequential ramp, so it is a tint, not grey. */
+    private static final double QUIET_CHROMA_SHARE = 0.15;
+
+    private RampShapes() {
+    }
+
+    /**
+     * The lightness range and chroma of a ramp.
+     *
+     * @param quietLightness OKLab L of the end closest to the page colour
+     * @param loudLightness  OKLab L of the end furthest from it
+     * @param maxChroma      OKLCh chroma at the loud end, before gamut mapping
+     */
+    record Shape(double quietLightness, double loudLightness, double maxChroma) {
+
+        double lightnessAt(double t) {
+            return quietLightness + (loudLightness - quietLightness) * t;
+        }
+    }
+
+    /** {@code count} fills of one hue, quiet to loud: lightness strictly monotonic. */
+    static List<Rgb> sequential(double hueDeg, int count, Shape shape) {
+        List<Rgb> fills = new ArrayList<>(count);
+        for (int i = 0; i < count; i++) {
+            double t = count == 1 ? 1 : (double) i / (count - 1);
+            double chroma = shape.maxChroma() * (QUIET_CHROMA_SHARE + (1 - QUIET_CHROMA_SHARE) * t);
+            fills.add(GamutMapping.toRgb(new OkLch(shape.lightnessAt(t), chroma, hueDeg)));
+        }
+        return fills;
+    }
+
+    /**
+     * {@code count} fills from loud {@code lowHueDeg} through a neutral quiet midpoint to loud
+     * {@code highHueDeg}. An odd count has a neutral (chroma 0) middle class at the quiet lightness; an even
+     * count puts the neutral between the two middle classes, which are the faintest tints of each hue.
+     * Arm step {@code j} (1 = next to the centre) of {@code h} sits at {@code t = j / h} (odd count) or
+     * {@code t = (2j - 1) / (2h - 1)} (even count) along the lightness range.
+     */
+    static List<Rgb> diverging(double lowHueDeg, double highHueDeg, int count, Shape shape) {
+        int half = count / 2;
+        boolean odd = count % 2 == 1;
+        List<Rgb> low = new ArrayList<>(half);
+        List<Rgb> high = new ArrayList<>(half);
+        for (int j = 1; j <= half; j++) {
+            double t = odd ? (double) j / half : (2.0 * j - 1) / (2.0 * half - 1);
+            double lightness = shape.lightnessAt(t);
+            double chroma = shape.maxChroma() * t;
+            low.add(GamutMapping.toRgb(new OkLch(lightness, chroma, lowHueDeg)));
+            high.add(GamutMapping.toRgb(new OkLch(lightness, chroma, highHueDeg)));
+        }
+        List<Rgb> fills = new ArrayList<>(count);
+        for (int j = half - 1; j >= 0; j--) {
+            fills.add(low.get(j));
+        }
+        if (odd) {
+            fills.add(GamutMapping.toRgb(new OkLch(shape.quietLightness(), 0, 0)));
+        }
+        fills.addAll(high);
+        return fills;
+    }
+
+    /**
+     * {@code count} fills with hues spread evenly round the circle from {@code startHueDeg}, at one lightness
+     * and chroma; with {@code alternate}, every other fill moves to {@code otherLightness}, which keeps
+     * neighbours apart for readers who cannot separate the hues.
+     */
+    static List<Rgb> qualitative(double startHueDeg, int count, double lightness, double otherLightness,
+                                 double chroma, boolean alternate) {
+        List<Rgb> fills = new ArrayList<>(count);
+        for (int i = 0; i < count; i++) {
+            double hue = (startHueDeg + 360.0 * i / count) % 360;
+            double l = alternate && i % 2 == 1 ? otherLightness : lightness;
+            fills.add(GamutMapping.toRgb(new OkLch(l, chroma, hue)));
+        }
+        return fills;
+    }
+}

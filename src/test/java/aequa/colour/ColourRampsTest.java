@@ -1,0 +1,158 @@
+package aequa.colour;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.stream.Collectors;
+
+import org.junit.jupiter.api.Test;
+
+import aequa.findings.Finding;
+import aequa.project.ColoursSpec;
+
+/** Generated ramps: shape, checks, adjustments and findings. */
+class ColourRampsTest {
+
+    private static final Rgb WHITE = Rgb.fromHex("#ffffff");
+    private static final Rgb DARK_PAGE = Rgb.fromHex("#1b1b1f");
+
+    private static RampOutcome generate(String scheme, double hue, double hueLow, int count, Rgb page) {
+        return ColourRamps.generate(new ColoursSpec(scheme, hue, hueLow), count, page, "aequa.yaml", "map \"m\"");
+    }
+
+    @Test
+    void sequentialRampsUpToSevenClassesPassEveryCheckForEveryHue() {
+        for (double hue = 0; hue < 360; hue += 30) {
+            for (int count = 2; count <= 7; count++) {
+                ColourRamp ramp = generate("sequential", hue, 0, count, WHITE).ramp().orElseThrow();
+                assertEquals(count, ramp.fills().size(), "hue " + hue);
+                assertTrue(ramp.passes(), "hue " + hue + " count " + count + " " + failed(ramp));
+                assertEquals(List.of("adjacent-deltaE-normal", "adjacent-deltaE-protanopia",
+                                "adjacent-deltaE-deuteranopia", "adjacent-deltaE-tritanopia", "lightness-monotonic",
+                                "label-contrast", "border-contrast-background", "hatch-contrast-background",
+                                "border-contrast-fills", "hatch-contrast-fills"),
+                        ramp.checks().stream().map(ColourRamp.RampCheck::name).collect(Collectors.toList()));
+            }
+        }
+    }
+
+    @Test
+    void sequentialLightnessFallsAndHueHoldsOnALightPage() {
+        ColourRamp ramp = generate("sequential", 150, 0, 6, WHITE).ramp().orElseThrow();
+        double previous = 2;
+        for (Rgb fill : ramp.fills()) {
+            OkLch lch = OkLch.of(OkLab.fromRgb(fill));
+            assertTrue(lch.lightness() < previous, "monotonic lightness");
+            previous = lch.lightness();
+            assertEquals(150, lch.hueDeg(), 4, fill.hex()); // 8-bit rounding moves hue a little on faint tints
+        }
+        // on a dark page the order turns round: the quiet end is dark
+        ColourRamp dark = generate("sequential", 150, 0, 5, DARK_PAGE).ramp().orElseThrow();
+        assertTrue(OkLab.fromRgb(dark.fills().get(0)).lightness() < OkLab.fromRgb(dark.fills().get(4)).lightness());
+        assertTrue(dark.passes(), failed(dark));
+    }
+
+    @Test
+    void divergingRampsHaveANeutralLightMiddle() {
+        for (int count : new int[] {3, 5, 7, 9}) {
+            ColourRamp ramp = generate("diverging", 250, 40, count, WHITE).ramp().orElseThrow();
+            assertTrue(ramp.passes(), count + " " + failed(ramp));
+            OkLch middle = OkLch.of(OkLab.fromRgb(ramp.fills().get(count / 2)));
+            assertEquals(0, middle.chroma(), 0.005, "neutral middle");
+            for (Rgb fill : ramp.fills()) {
+                assertTrue(OkLab.fromRgb(fill).lightness() <= middle.lightness() + 1e-9, "middle is the lightest");
+            }
+            // the arms mirror each other in lightness
+            for (int j = 0; j < count / 2; j++) {
+                double low = OkLab.fromRgb(ramp.fills().get(j)).lightness();
+                double high = OkLab.fromRgb(ramp.fills().get(count - 1 - j)).lightness();
+                assertEquals(low, high, 0.01, "arm step " + j);
+            }
+        }
+        ColourRamp even = generate("diverging", 250, 40, 6, WHITE).ramp().orElseThrow();
+        assertTrue(even.passes(), failed(even));
+    }
+
+    @Test
+    void qualitativeSetsShareLightnessAndSpreadHues() {
+        RampOutcome outcome = generate("qualitative", 250, 0, 3, WHITE);
+        ColourRamp ramp = outcome.ramp().orElseThrow();
+        assertTrue(ramp.passes(), failed(ramp));
+        assertEquals(List.of(), codes(outcome)); // passed at equal lightness, no adjustment
+        double l0 = OkLab.fromRgb(ramp.fills().get(0)).lightness();
+        for (Rgb fill : ramp.fills()) {
+            assertEquals(l0, OkLab.fromRgb(fill).lightness(), 0.005, fill.hex());
+        }
+        assertEquals(List.of("pairwise-deltaE-normal", "pairwise-deltaE-protanopia", "pairwise-deltaE-deuteranopia",
+                        "pairwise-deltaE-tritanopia"),
+                ramp.checks().subList(0, 4).stream().map(ColourRamp.RampCheck::name).collect(Collectors.toList()));
+    }
+
+    @Test
+    void tooManyClassesAreReducedWithNotesAndAWarning() {
+        RampOutcome outcome = generate("sequential", 250, 0, 11, WHITE);
+        ColourRamp ramp = outcome.ramp().orElseThrow();
+        assertTrue(ramp.fills().size() < 11 && ramp.fills().size() >= 6, "size " + ramp.fills().size());
+        assertTrue(ramp.passes(), failed(ramp));
+        List<String> codes = codes(outcome);
+        assertEquals("colours-ramp-adjusted", codes.get(0)); // widened first
+        assertEquals("colours-fewer-classes", codes.get(codes.size() - 1));
+    }
+
+    @Test
+    void failingSetIsReturnedWithItsFailedChecksAndAWarning() {
+        // nine categories at (nearly) one lightness cannot stay apart for dichromats
+        RampOutcome outcome = generate("qualitative", 0, 0, 9, WHITE);
+        ColourRamp ramp = outcome.ramp().orElseThrow();
+        assertEquals(9, ramp.fills().size());
+        assertTrue(!ramp.passes());
+        assertEquals(List.of("colours-ramp-adjusted", "colours-ramp-fails-checks"), codes(outcome));
+    }
+
+    @Test
+    void unknownSchemeIsAnError() {
+        RampOutcome outcome = generate("rainbow", 0, 0, 5, WHITE);
+        assertTrue(outcome.ramp().isEmpty());
+        assertEquals(List.of("colours-unknown-scheme"), codes(outcome));
+    }
+
+    @Test
+    void sameInputSameColours() {
+        assertEquals(generate("diverging", 300, 120, 7, WHITE), generate("diverging", 300, 120, 7, WHITE));
+        // hues are read modulo 360
+        assertEquals(generate("sequential", 10, 0, 5, WHITE).ramp(), generate("sequential", 370, 0, 5, WHITE).ramp());
+    }
+
+    @Test
+    void nonTextColoursMeetThreeToOneOnAnyPage() {
+        for (String page : new String[] {"#ffffff", "#f4f1ea", "#777777", "#767676", "#1b1b1f", "#000000", "#203060"}) {
+            NonTextColours colours = NonTextColours.forBackground(Rgb.fromHex(page));
+            assertTrue(WcagContrast.ratio(colours.border(), colours.background()) >= 3, page);
+            assertTrue(WcagContrast.ratio(colours.noDataHatch(), colours.noDataGround()) >= 3, page);
+            assertEquals(Rgb.fromHex(page), colours.noDataGround());
+        }
+    }
+
+    @Test
+    void continuousColoursRunThroughTheFills() {
+        ColourRamp ramp = generate("sequential", 200, 0, 5, WHITE).ramp().orElseThrow();
+        assertEquals(ramp.fills().get(0), ramp.colourAt(0));
+        assertEquals(ramp.fills().get(2), ramp.colourAt(0.5));
+        assertEquals(ramp.fills().get(4), ramp.colourAt(1));
+        assertEquals(ramp.fills().get(4), ramp.colourAt(7)); // clamped
+        // between two fills: lightness between theirs (OKLab interpolation is linear in L)
+        double l = OkLab.fromRgb(ramp.colourAt(0.125)).lightness();
+        double l0 = OkLab.fromRgb(ramp.fills().get(0)).lightness();
+        double l1 = OkLab.fromRgb(ramp.fills().get(1)).lightness();
+        assertEquals((l0 + l1) / 2, l, 0.005);
+    }
+
+    private static String failed(ColourRamp ramp) {
+        return ramp.checks().stream().filter(c -> !c.passed()).map(Object::toString).collect(Collectors.joining("; "));
+    }
+
+    private static List<String> codes(RampOutcome outcome) {
+        return outcome.findings().stream().map(Finding::code).collect(Collectors.toList());
+    }
+}
