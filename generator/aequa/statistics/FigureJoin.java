@@ -57,7 +57,8 @@ final class FigureJoin {
         KeyMatcher matcher = new KeyMatcher(regionKeys);
         Map<Slot, FigureCell> joined = new HashMap<>();
         Map<String, FigureCell> unmatched = new LinkedHashMap<>();
-        Map<String, String> relaxedMatches = new LinkedHashMap<>();
+        Map<FigureCell, String> relaxedMatches = new LinkedHashMap<>();
+        Set<String> relaxedKeysSeen = new HashSet<>();
         Set<Integer> duplicateRowsReported = new HashSet<>();
         for (FigureRole role : FigureRole.values()) {
             String indicator = role.indicatorIn(settings);
@@ -81,8 +82,8 @@ final class FigureJoin {
                         continue;
                     }
                     String region = match.get().regionKey();
-                    if (match.get().relaxed() && role == FigureRole.VALUE) {
-                        relaxedMatches.putIfAbsent(cell.key(), region);
+                    if (match.get().relaxed() && role == FigureRole.VALUE && relaxedKeysSeen.add(cell.key())) {
+                        relaxedMatches.put(cell, region);
                     }
                     FigureCell first = joined.putIfAbsent(new Slot(role, period, region), cell);
                     if (first != null) {
@@ -131,11 +132,11 @@ final class FigureJoin {
                         + " are the same region." : ".")));
     }
 
-    private static void reportRelaxedMatches(FigureTable table, Map<String, String> relaxedMatches,
+    private static void reportRelaxedMatches(FigureTable table, Map<FigureCell, String> relaxedMatches,
                                              Findings findings) {
-        relaxedMatches.forEach((key, region) -> findings.add(Finding.note("join-relaxed-match", table.file(),
-                "key \"" + key + "\"",
-                "The statistics key \"" + key + "\" was matched to region \"" + region
+        relaxedMatches.forEach((cell, region) -> findings.add(Finding.note("join-relaxed-match", table.file(),
+                "row " + cell.row(),
+                "The statistics key \"" + cell.key() + "\" was matched to region \"" + region
                         + "\" ignoring case, whitespace and leading zeros.",
                 "Correct the key to match exactly if this is not the same region.")));
     }
