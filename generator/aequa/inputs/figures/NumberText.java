@@ -19,9 +19,15 @@ import java.util.regex.Pattern;
  */
 final class NumberText {
 
+    /** Digits grouped by three with a space, no-break space, narrow no-break space or apostrophe. */
+    private static final Pattern SPACE_GROUPED = Pattern.compile(
+            "[+\\-\u2212]?\\d{1,3}(?:[ '\u00A0\u202F]\\d{3})+(?:[.,]\\d+)?");
+
     private final DecimalMark decimal;
     private final String thousands;
     private final Pattern grammar;
+    private final Pattern digitsOtherMarkDigits;
+    private final Pattern groupedByOtherMark;
 
     NumberText(DecimalMark decimal, String thousands) {
         this.decimal = decimal;
@@ -30,6 +36,9 @@ final class NumberText {
         String integer = thousands.isEmpty() ? "\\d+" : "(?:\\d+|\\d{1,3}(?:" + Pattern.quote(thousands) + "\\d{3})+)";
         String exponent = "(?:[eE][+-]?\\d+)?";
         grammar = Pattern.compile("[+\\-\u2212]?(?:" + integer + "(?:" + d + "\\d+)?|" + d + "\\d+)" + exponent);
+        String other = Pattern.quote(decimal == DecimalMark.POINT ? "," : ".");
+        digitsOtherMarkDigits = Pattern.compile("[+\\-\u2212]?\\d+" + other + "\\d+");
+        groupedByOtherMark = Pattern.compile("[+\\-\u2212]?\\d{1,3}(?:" + other + "\\d{3})+");
     }
 
     /** The number {@code trimmedText} stands for, or NaN when it is not a number under this format. */
@@ -51,17 +60,15 @@ final class NumberText {
     String hint(String trimmedText) {
         boolean pointDecimal = decimal == DecimalMark.POINT;
         String other = pointDecimal ? "," : ".";
-        String digitsOtherDigits = "[+\\-\u2212]?\\d+" + Pattern.quote(other) + "\\d+";
-        if (trimmedText.matches(digitsOtherDigits)) {
-            String groupedThousands = "[+\\-\u2212]?\\d{1,3}(?:" + Pattern.quote(other) + "\\d{3})+";
+        if (digitsOtherMarkDigits.matcher(trimmedText).matches()) {
             String asDecimal = "It looks like a decimal " + (pointDecimal ? "comma" : "point")
                     + " but this source declares decimal: \"" + decimal.character() + "\"; set decimal: \""
                     + other + "\" for this source";
-            return trimmedText.matches(groupedThousands)
+            return groupedByOtherMark.matcher(trimmedText).matches()
                     ? asDecimal + ", or thousands: \"" + other + "\" if it separates thousands."
                     : asDecimal + ".";
         }
-        if (trimmedText.matches("[+\\-\u2212]?\\d{1,3}(?:[ '\u00A0\u202F]\\d{3})+(?:[.,]\\d+)?")) {
+        if (SPACE_GROUPED.matcher(trimmedText).matches()) {
             return "It looks like digits grouped by thousands; declare the separator with thousands: for this source.";
         }
         if (!thousands.isEmpty() && trimmedText.contains(thousands)) {

@@ -1,6 +1,5 @@
 package aequa.inputs.figures;
 
-import java.math.BigInteger;
 import java.util.Comparator;
 
 /**
@@ -25,7 +24,7 @@ public final class PeriodOrder implements Comparator<String> {
             if (isDigit(ca) && isDigit(cb)) {
                 int endA = digitRunEnd(a, i);
                 int endB = digitRunEnd(b, j);
-                int byNumber = new BigInteger(a.substring(i, endA)).compareTo(new BigInteger(b.substring(j, endB)));
+                int byNumber = compareDigitRuns(a, i, endA, b, j, endB);
                 if (byNumber != 0) {
                     return byNumber;
                 }
@@ -41,6 +40,27 @@ public final class PeriodOrder implements Comparator<String> {
         }
         int byRest = Integer.compare(a.length() - i, b.length() - j);
         return byRest != 0 ? byRest : a.compareTo(b);
+    }
+
+    /** Compares two runs of ASCII digits by value, at any length: fewer significant digits is smaller. */
+    private static int compareDigitRuns(String a, int startA, int endA, String b, int startB, int endB) {
+        while (startA < endA - 1 && a.charAt(startA) == '0') {
+            startA++;
+        }
+        while (startB < endB - 1 && b.charAt(startB) == '0') {
+            startB++;
+        }
+        int byLength = Integer.compare(endA - startA, endB - startB);
+        if (byLength != 0) {
+            return byLength;
+        }
+        for (int k = 0; k < endA - startA; k++) {
+            int byDigit = Character.compare(a.charAt(startA + k), b.charAt(startB + k));
+            if (byDigit != 0) {
+                return byDigit;
+            }
+        }
+        return 0;
     }
 
     private static boolean isDigit(char c) {
