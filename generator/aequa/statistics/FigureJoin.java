@@ -13,6 +13,7 @@ import java.util.TreeSet;
 import aequa.findings.Finding;
 import aequa.findings.Findings;
 import aequa.findings.Severity;
+import aequa.inputs.figures.CellStatus;
 import aequa.inputs.figures.FigureCell;
 import aequa.inputs.figures.FigureTable;
 import aequa.inputs.figures.KeyMatching;
@@ -110,7 +111,7 @@ final class FigureJoin {
             findings.add(Finding.error("join-not-a-number", table.file(), table.place(cell),
                     "The value \"" + cell.text() + "\" for region \"" + cell.key() + "\" is not a number.",
                     cell.problem()));
-        } else if (role == FigureRole.VALUE && cell.status() == FigureStatus.REPORTED
+        } else if (role == FigureRole.VALUE && cell.status() == CellStatus.REPORTED
                 && (cell.value() < settings.rangeMin() || cell.value() > settings.rangeMax())) {
             findings.add(Finding.error("join-out-of-range", table.file(), table.place(cell),
                     "The value " + cell.text().strip() + " for region \"" + cell.key()

@@ -83,9 +83,4 @@ public record MapFigureSettings(String mapId, String indicator, List<String> per
                 normalisation == Normalisation.COLUMN ? map.per() : "", multiplier, display, map.eventsColumn(),
                 map.marginColumn(), rangeMin, rangeMax, missing, checks.unreliableBelow(), checks.marginAbove());
     }
-
-    /** Whether a range was declared. */
-    public boolean hasRange() {
-        return rangeMin > Double.NEGATIVE_INFINITY || rangeMax < Double.POSITIVE_INFINITY;
-    }
 }

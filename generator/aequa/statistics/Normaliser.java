@@ -4,6 +4,7 @@ import java.util.Optional;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
+import aequa.inputs.figures.CellStatus;
 import aequa.inputs.figures.FigureCell;
 import aequa.inputs.figures.FigureTable;
 
@@ -38,8 +39,9 @@ final class Normaliser {
 
     RegionFigure figure(FigureJoin join, String period, RegionArea region) {
         Optional<FigureCell> valueCell = join.cell(FigureRole.VALUE, period, region.key());
-        if (valueCell.isEmpty() || valueCell.get().status() != FigureStatus.REPORTED) {
-            return RegionFigure.withoutFigure(valueCell.map(FigureCell::status).orElse(FigureStatus.NO_DATA));
+        if (valueCell.isEmpty() || valueCell.get().status() != CellStatus.REPORTED) {
+            return RegionFigure.withoutFigure(valueCell.map(c -> FigureStatuses.of(c.status()))
+                    .orElse(FigureStatus.NO_DATA));
         }
         FigureCell cell = valueCell.get();
         double value = cell.value();
@@ -56,8 +58,9 @@ final class Normaliser {
                         value / region.geodesicAreaKm2() * settings.multiplier(), margin, unreliable);
             case COLUMN:
                 Optional<FigureCell> denominator = join.cell(FigureRole.DENOMINATOR, period, region.key());
-                if (denominator.isEmpty() || denominator.get().status() != FigureStatus.REPORTED) {
-                    FigureStatus status = denominator.map(FigureCell::status).orElse(FigureStatus.NO_DATA);
+                if (denominator.isEmpty() || denominator.get().status() != CellStatus.REPORTED) {
+                    FigureStatus status = denominator.map(c -> FigureStatuses.of(c.status()))
+                            .orElse(FigureStatus.NO_DATA);
                     cannotNormalise(cell, "its denominator \"" + settings.denominator() + "\" is "
                             + (denominator.isEmpty() ? "absent" : describe(status)), status);
                     return RegionFigure.withoutFigure(status);
@@ -77,7 +80,7 @@ final class Normaliser {
 
     private double margin(FigureJoin join, String period, String regionKey) {
         Optional<FigureCell> cell = join.cell(FigureRole.MARGIN, period, regionKey)
-                .filter(c -> c.status() == FigureStatus.REPORTED);
+                .filter(c -> c.status() == CellStatus.REPORTED);
         if (cell.isEmpty()) {
             return Double.NaN;
         }
@@ -95,7 +98,7 @@ final class Normaliser {
             return false;
         }
         return join.cell(FigureRole.EVENTS, period, regionKey)
-                .filter(c -> c.status() == FigureStatus.REPORTED)
+                .filter(c -> c.status() == CellStatus.REPORTED)
                 .map(c -> c.value() < settings.fewestEvents())
                 .orElse(false);
     }

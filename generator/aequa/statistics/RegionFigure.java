@@ -4,7 +4,7 @@ import java.util.Objects;
 
 /**
  * What one region shows for one period, before classification. Field for field the first five
- * components of {@code aequa.atlas.RegionValue}; the class index is added there.
+ * components of the model's RegionValue (atlas stage); the class index is added there.
  *
  * @param status          reported, no data, suppressed or not applicable (a reported zero is REPORTED with 0)
  * @param value           the figure as given; NaN unless REPORTED

@@ -1,6 +1,5 @@
 package aequa.inputs.figures;
 
-import aequa.statistics.FigureStatus;
 
 /**
  * Decides what one field says: a reported number, or one of the declared markers, or a malformed text.
@@ -11,7 +10,7 @@ import aequa.statistics.FigureStatus;
 final class CellInterpreter {
 
     /** The reading of one field. {@code value} is NaN unless {@code status} is REPORTED. */
-    record Reading(FigureStatus status, double value, String problem) {
+    record Reading(CellStatus status, double value, String problem) {
     }
 
     private final FigureSourceSettings settings;
@@ -24,21 +23,21 @@ final class CellInterpreter {
 
     Reading read(SourceField field) {
         if (field.typed()) {
-            return new Reading(FigureStatus.REPORTED, field.number(), "");
+            return new Reading(CellStatus.REPORTED, field.number(), "");
         }
         String trimmed = trim(field.text());
-        FigureStatus marker = settings.markers().get(trimmed);
+        CellStatus marker = settings.markers().get(trimmed);
         if (marker != null) {
             return new Reading(marker, Double.NaN, "");
         }
         if (trimmed.isEmpty()) {
-            return new Reading(FigureStatus.NO_DATA, Double.NaN, "");
+            return new Reading(CellStatus.NO_DATA, Double.NaN, "");
         }
         double value = numbers.parse(trimmed);
         if (Double.isNaN(value)) {
-            return new Reading(FigureStatus.NO_DATA, Double.NaN, numbers.hint(trimmed));
+            return new Reading(CellStatus.NO_DATA, Double.NaN, numbers.hint(trimmed));
         }
-        return new Reading(FigureStatus.REPORTED, value, "");
+        return new Reading(CellStatus.REPORTED, value, "");
     }
 
     /** {@code text} without surrounding whitespace, counting no-break spaces as whitespace. */

@@ -2,11 +2,12 @@ package aequa.inputs.figures;
 
 /** The field separator of a delimited text file. */
 public enum FieldSeparator {
-    /** Detect from the header line: the most frequent of comma, semicolon and tab outside quotes. */
+    /** Detect from the header line: the most frequent of comma, semicolon, tab and bar outside quotes. */
     AUTO('\0'),
     COMMA(','),
     SEMICOLON(';'),
-    TAB('\t');
+    TAB('\t'),
+    PIPE('|');
 
     private final char character;
 

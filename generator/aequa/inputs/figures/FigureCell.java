@@ -2,7 +2,6 @@ package aequa.inputs.figures;
 
 import java.util.Objects;
 
-import aequa.statistics.FigureStatus;
 
 /**
  * What a statistics source says for one region key, indicator and period, with where it says it.
@@ -19,7 +18,7 @@ import aequa.statistics.FigureStatus;
  * @param problem   empty, or (for a text that is neither a number nor a declared marker) one sentence on
  *                  how to make it readable, for example about the decimal setting
  */
-public record FigureCell(String key, String indicator, String period, FigureStatus status, double value,
+public record FigureCell(String key, String indicator, String period, CellStatus status, double value,
                          String text, int row, String column, String problem) {
 
     public FigureCell {

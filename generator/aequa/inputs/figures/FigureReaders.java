@@ -17,6 +17,9 @@ import aequa.project.FigureSourceSpec;
  * ({@code .sqlite}, {@code .sqlite3}, {@code .db}, {@code .gpkg}) are read; the kind is told by the file
  * extension.
  *
+ * <p>Rows in findings and cells count records as a spreadsheet shows them (the header is row 1, blank
+ * lines count); database rows count result rows from 1.
+ *
  * <p>Every problem in the project settings or the data is added to {@code findings} (with file, row and
  * column) and reading goes on where it can; a source that cannot be read gives an empty table. Only an
  * I/O failure on a file that exists (a disk error) is thrown, as {@link UncheckedIOException}.
@@ -39,8 +42,7 @@ public final class FigureReaders {
         return read(projectDir, settings, findings);
     }
 
-    /** As {@link #read(Path, FigureSourceSpec, Findings)}, for settings already parsed. */
-    public static FigureTable read(Path projectDir, FigureSourceSettings settings, Findings findings) {
+    private static FigureTable read(Path projectDir, FigureSourceSettings settings, Findings findings) {
         Path path = projectDir.resolve(settings.file());
         String name = path.getFileName() == null ? "" : path.getFileName().toString();
         String extension = name.substring(name.lastIndexOf('.') + 1).toLowerCase(Locale.ROOT);

@@ -4,13 +4,11 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.TreeSet;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
 import aequa.project.FigureSourceSpec;
 import aequa.project.ProjectFile;
-import aequa.statistics.FigureStatus;
 
 /**
  * A {@link FigureSourceSpec} with its words parsed once into enums and checked for contradictions.
@@ -31,7 +29,7 @@ import aequa.statistics.FigureStatus;
 public record FigureSourceSettings(String file, String table, String keyColumn, TableLayout layout,
                                    String indicatorColumn, String periodColumn, String valueColumn,
                                    FieldSeparator separator, DecimalMark decimal, String thousands,
-                                   Map<String, FigureStatus> markers, KeyMatching keyMatching) {
+                                   Map<String, CellStatus> markers, KeyMatching keyMatching) {
 
     /** Thousands separators we accept: comma, point, apostrophe, space, no-break space, narrow no-break space. */
     static final Set<String> THOUSANDS_SEPARATORS = Set.of("", ",", ".", "'", " ", "\u00A0", "\u202F");
@@ -64,17 +62,12 @@ public record FigureSourceSettings(String file, String table, String keyColumn, 
                     "Numbers would be ambiguous; change one of the two."));
             thousands = "";
         }
-        Map<String, FigureStatus> markers = new LinkedHashMap<>();
-        addMarkers(markers, spec.suppressed(), FigureStatus.SUPPRESSED, where, findings);
-        addMarkers(markers, spec.notApplicable(), FigureStatus.NOT_APPLICABLE, where, findings);
-        addMarkers(markers, spec.missing(), FigureStatus.NO_DATA, where, findings);
+        Map<String, CellStatus> markers = new LinkedHashMap<>();
+        addMarkers(markers, spec.suppressed(), CellStatus.SUPPRESSED, where, findings);
+        addMarkers(markers, spec.notApplicable(), CellStatus.NOT_APPLICABLE, where, findings);
+        addMarkers(markers, spec.missing(), CellStatus.NO_DATA, where, findings);
         return new FigureSourceSettings(spec.file(), spec.table(), spec.key(), layout, spec.indicatorColumn(),
                 spec.periodColumn(), spec.valueColumn(), separator, decimal, thousands, markers, keyMatching);
-    }
-
-    /** The marker texts, sorted, for messages. */
-    public Set<String> markerTexts() {
-        return new TreeSet<>(markers.keySet());
     }
 
     private static FieldSeparator parseSeparator(String text, String place, Findings findings) {
@@ -89,10 +82,12 @@ public record FigureSourceSettings(String file, String table, String keyColumn, 
             case "\\t":
             case "tab":
                 return FieldSeparator.TAB;
+            case "|":
+                return FieldSeparator.PIPE;
             default:
                 findings.add(Finding.error("project-unknown-value", ProjectFile.FILE_NAME, place,
                         "Unknown field separator \"" + text + "\".",
-                        "Use \",\", \";\" or \"\\t\" (tab), or leave it empty to detect it."));
+                        "Use \",\", \";\", \"|\" or \"\\t\" (tab), or leave it empty to detect it."));
                 return FieldSeparator.AUTO;
         }
     }
@@ -109,11 +104,11 @@ public record FigureSourceSettings(String file, String table, String keyColumn, 
         return DecimalMark.POINT;
     }
 
-    private static void addMarkers(Map<String, FigureStatus> markers, List<String> texts, FigureStatus status,
+    private static void addMarkers(Map<String, CellStatus> markers, List<String> texts, CellStatus status,
                                    String where, Findings findings) {
         for (String raw : texts) {
             String text = CellInterpreter.trim(raw);
-            FigureStatus earlier = markers.putIfAbsent(text, status);
+            CellStatus earlier = markers.putIfAbsent(text, status);
             if (earlier != null && earlier != status) {
                 findings.add(Finding.error("project-conflicting-setting", ProjectFile.FILE_NAME,
                         where + specKey(status),
@@ -124,11 +119,11 @@ public record FigureSourceSettings(String file, String table, String keyColumn, 
         }
     }
 
-    private static String specKey(FigureStatus status) {
-        return status == FigureStatus.NO_DATA ? "missing" : SpecWords.of(status);
+    private static String specKey(CellStatus status) {
+        return status == CellStatus.NO_DATA ? "missing" : SpecWords.of(status);
     }
 
-    static String describe(FigureStatus status) {
+    static String describe(CellStatus status) {
         switch (status) {
             case SUPPRESSED:
                 return "suppressed";

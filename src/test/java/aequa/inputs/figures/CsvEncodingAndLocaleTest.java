@@ -15,7 +15,6 @@ import org.junit.jupiter.api.io.TempDir;
 
 import aequa.findings.Findings;
 import aequa.project.FigureSourceSpec;
-import aequa.statistics.FigureStatus;
 
 /** Encodings, separators, number conventions and status markers. */
 class CsvEncodingAndLocaleTest {
@@ -96,12 +95,20 @@ class CsvEncodingAndLocaleTest {
     }
 
     @Test
+    void barSeparatedDetected() throws IOException {
+        FigureTable table = read(utf8("key|name|rate\nA|\"x, y; z\"|4\n"), SourceSpecBuilder.file("b.csv").build(),
+                new Findings());
+        assertEquals(4.0, cell(table, "rate", "A").value());
+        assertEquals("x, y; z", cell(table, "name", "A").text());
+    }
+
+    @Test
     void decimalCommaUndeclaredGivesAHint() throws IOException {
         // The issue's example: "12,5" read with the default decimal point.
         String csv = "key;rate\nA;12,5\n";
         FigureTable table = read(utf8(csv), SourceSpecBuilder.file("x.csv").build(), new Findings());
         FigureCell cell = cell(table, "rate", "A");
-        assertEquals(FigureStatus.NO_DATA, cell.status());
+        assertEquals(CellStatus.NO_DATA, cell.status());
         assertTrue(cell.malformed());
         assertTrue(cell.problem().contains("decimal: \",\""), cell.problem());
         assertEquals("row 2, column \"rate\"", table.place(cell));
@@ -113,13 +120,13 @@ class CsvEncodingAndLocaleTest {
         FigureSourceSpec spec = SourceSpecBuilder.file("m.csv").suppressed("x").notApplicable("-").build();
         Findings findings = new Findings();
         FigureTable table = read(utf8(csv), spec, findings);
-        assertEquals(FigureStatus.REPORTED, cell(table, "rate", "A").status());
+        assertEquals(CellStatus.REPORTED, cell(table, "rate", "A").status());
         assertEquals(0.0, cell(table, "rate", "A").value());
-        assertEquals(FigureStatus.NO_DATA, cell(table, "rate", "B").status());
-        assertEquals(FigureStatus.NO_DATA, cell(table, "rate", "C").status());
-        assertEquals(FigureStatus.SUPPRESSED, cell(table, "rate", "D").status());
-        assertEquals(FigureStatus.NOT_APPLICABLE, cell(table, "rate", "E").status());
-        assertEquals(FigureStatus.NO_DATA, cell(table, "rate", "F").status());
+        assertEquals(CellStatus.NO_DATA, cell(table, "rate", "B").status());
+        assertEquals(CellStatus.NO_DATA, cell(table, "rate", "C").status());
+        assertEquals(CellStatus.SUPPRESSED, cell(table, "rate", "D").status());
+        assertEquals(CellStatus.NOT_APPLICABLE, cell(table, "rate", "E").status());
+        assertEquals(CellStatus.NO_DATA, cell(table, "rate", "F").status());
         assertTrue(table.cells().stream().noneMatch(FigureCell::malformed));
         assertEquals(List.of(), findings.list());
     }
@@ -142,12 +149,21 @@ class CsvEncodingAndLocaleTest {
     @Test
     void unknownSettingsAreReportedOnTheProjectFile() throws IOException {
         Findings findings = new Findings();
-        read(utf8("key,rate\nA,1\n"), SourceSpecBuilder.file("s.csv").layout("tall").delimiter("|")
+        read(utf8("key,rate\nA,1\n"), SourceSpecBuilder.file("s.csv").layout("tall").delimiter("/")
                 .decimal(",").thousands(",").build(), findings);
         List<String> codes = findings.list().stream().map(f -> f.code() + "@" + f.file() + ":" + f.place()).toList();
         assertEquals(List.of("project-unknown-value@aequa.yaml:figures \"s.csv\", layout",
                 "project-unknown-value@aequa.yaml:figures \"s.csv\", delimiter",
                 "project-conflicting-setting@aequa.yaml:figures \"s.csv\", thousands"), codes);
+    }
+
+    @Test
+    void aMarkerDeclaredTwiceIsAConflict() throws IOException {
+        Findings findings = new Findings();
+        FigureTable table = read(utf8("key,rate\nA,x\n"), SourceSpecBuilder.file("c.csv").missing("x").suppressed("x")
+                .build(), findings);
+        assertEquals("project-conflicting-setting", findings.list().get(0).code());
+        assertEquals(CellStatus.SUPPRESSED, cell(table, "rate", "A").status(), "the first declaration stands");
     }
 
     @Test

@@ -14,7 +14,6 @@ import org.junit.jupiter.api.io.TempDir;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
-import aequa.statistics.FigureStatus;
 
 /**
  * The rules of RFC 4180 ("Common Format and MIME Type for Comma-Separated Values (CSV) Files", 2005),
@@ -120,6 +119,6 @@ class CsvRfc4180Test {
         FigureTable table = read("key,a,b\nA,1\n", findings);
         assertEquals("figures-row-ragged", findings.list().get(0).code());
         assertEquals("row 2", findings.list().get(0).place());
-        assertEquals(FigureStatus.NO_DATA, only(table, "b", "A").status());
+        assertEquals(CellStatus.NO_DATA, only(table, "b", "A").status());
     }
 }

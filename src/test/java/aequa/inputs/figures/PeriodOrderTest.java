@@ -27,5 +27,7 @@ class PeriodOrderTest {
         assertEquals(-1, Integer.signum(PeriodOrder.OLDEST_FIRST.compare("07", "7")));
         assertEquals(1, Integer.signum(PeriodOrder.OLDEST_FIRST.compare("7", "07")));
         assertEquals(0, PeriodOrder.OLDEST_FIRST.compare("2020", "2020"));
+        // digit runs longer than a long still compare by value
+        assertEquals(-1, Integer.signum(PeriodOrder.OLDEST_FIRST.compare("99999999999999999999", "100000000000000000000")));
     }
 }

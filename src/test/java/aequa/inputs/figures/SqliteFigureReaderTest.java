@@ -18,7 +18,6 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 import aequa.findings.Findings;
-import aequa.statistics.FigureStatus;
 
 /**
  * A real SQLite database file, written in the test through sqlite-jdbc, read back through a view whose
@@ -68,10 +67,10 @@ class SqliteFigureReaderTest {
         assertEquals(12.0, cell(table, "births", "A").value(), "INTEGER taken as typed");
         assertEquals(1.25, cell(table, "rate", "A").value(), "REAL taken as typed, not through decimal ','");
         assertEquals(7.5, cell(table, "note", "A").value(), "TEXT read with the declared decimal comma");
-        assertEquals(FigureStatus.NO_DATA, cell(table, "births", "B").status(), "NULL is no data");
-        assertEquals(FigureStatus.SUPPRESSED, cell(table, "note", "B").status());
-        assertEquals(FigureStatus.NOT_APPLICABLE, cell(table, "note", "7").status(), "integer key read as text");
-        assertEquals(FigureStatus.REPORTED, cell(table, "births", "7").status());
+        assertEquals(CellStatus.NO_DATA, cell(table, "births", "B").status(), "NULL is no data");
+        assertEquals(CellStatus.SUPPRESSED, cell(table, "note", "B").status());
+        assertEquals(CellStatus.NOT_APPLICABLE, cell(table, "note", "7").status(), "integer key read as text");
+        assertEquals(CellStatus.REPORTED, cell(table, "births", "7").status());
         assertEquals(0.0, cell(table, "births", "7").value());
         assertTrue(cell(table, "shape", "A").malformed(), "a BLOB is not a figure");
         assertEquals("table \"" + VIEW + "\", row 1, column \"rate\"", table.place(cell(table, "rate", "A")));
