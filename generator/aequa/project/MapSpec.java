@@ -52,4 +52,13 @@ public record MapSpec(String id, String title, String regions, String figures, S
         asOf = asOf == null ? "" : asOf;
         range = range == null ? List.of() : List.copyOf(range);
     }
+
+    /** A map without a declared range (the record's shape before {@code range} was added). */
+    public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
+                   String measure, String normalise, String per, Double multiplier, String unit, String display,
+                   ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
+                   String marginColumn, String notes, String source, String asOf) {
+        this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
+                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, null);
+    }
 }
