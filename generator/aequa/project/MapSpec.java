@@ -11,7 +11,8 @@ import java.util.List;
  * @param figures     id of a statistics source
  * @param indicator   the indicator (wide layout: its column) to map
  * @param periods     the periods to show; empty for the latest; several make small multiples with shared classes
- * @param measure     {@code rate} (already a rate or share) or {@code count} (a number of things or people)
+ * @param measure     {@code rate} (already a rate or share), {@code count} (a number of things or people), or
+ *                    empty (undeclared: taken as a rate unless the values look like counts)
  * @param normalise   {@code none}, {@code area} (per km2 of geodesic area) or {@code column} (per {@code per})
  * @param per         the denominator column when normalising by column
  * @param multiplier  what the normalised value is multiplied by (for example 1000 for "per 1,000 people")
@@ -25,16 +26,18 @@ import java.util.List;
  * @param notes       notes shown under the map
  * @param source      the credit for the figures
  * @param asOf        the date or period the figures refer to, as readers should see it
+ * @param range       the declared valid range {@code [min, max]} of the values as given (for example
+ *                    {@code [0, 100]} for shares in percent), or empty for no check
  */
 public record MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
                       String measure, String normalise, String per, Double multiplier, String unit, String display,
                       ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
-                      String marginColumn, String notes, String source, String asOf) {
+                      String marginColumn, String notes, String source, String asOf, List<Double> range) {
 
     public MapSpec {
         title = title == null ? id : title;
         periods = periods == null ? List.of() : List.copyOf(periods);
-        measure = measure == null ? "rate" : measure;
+        measure = measure == null ? "" : measure;
         normalise = normalise == null ? "none" : normalise;
         per = per == null ? "" : per;
         multiplier = multiplier == null ? 1.0 : multiplier;
@@ -47,5 +50,15 @@ public record MapSpec(String id, String title, String regions, String figures, S
         notes = notes == null ? "" : notes;
         source = source == null ? "" : source;
         asOf = asOf == null ? "" : asOf;
+        range = range == null ? List.of() : List.copyOf(range);
+    }
+
+    /** A map without a declared range (the record's shape before {@code range} was added). */
+    public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
+                   String measure, String normalise, String per, Double multiplier, String unit, String display,
+                   ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
+                   String marginColumn, String notes, String source, String asOf) {
+        this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
+                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, null);
     }
 }

@@ -1,0 +1,9 @@
+package aequa.statistics;
+
+/** What a region of the geometry without any figure in the statistics is. */
+public enum MissingFigures {
+    /** Reported as a warning; the region is drawn as no data. */
+    WARNING,
+    /** Reported as an error; the build stops. */
+    ERROR
+}

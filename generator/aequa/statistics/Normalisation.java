@@ -1,0 +1,11 @@
+package aequa.statistics;
+
+/** How a figure is made comparable between regions before it is mapped. */
+public enum Normalisation {
+    /** Mapped as given. */
+    NONE,
+    /** Divided by the region's geodesic area in km2, times the multiplier. */
+    AREA,
+    /** Divided by another column (the denominator, for example population), times the multiplier. */
+    COLUMN
+}

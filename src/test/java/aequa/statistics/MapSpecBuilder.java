@@ -1,0 +1,43 @@
+package aequa.statistics;
+
+import java.util.List;
+
+import aequa.project.MapSpec;
+
+/** Builds {@link MapSpec}s for tests; null fields take the record's defaults. */
+final class MapSpecBuilder {
+
+    private final String indicator;
+    private List<String> periods;
+    private String measure;
+    private String normalise;
+    private String per;
+    private Double multiplier;
+    private String display;
+    private String eventsColumn;
+    private String marginColumn;
+    private List<Double> range;
+
+    private MapSpecBuilder(String indicator) {
+        this.indicator = indicator;
+    }
+
+    static MapSpecBuilder mapOf(String indicator) {
+        return new MapSpecBuilder(indicator);
+    }
+
+    MapSpecBuilder periods(String... values) { periods = List.of(values); return this; }
+    MapSpecBuilder measure(String value) { measure = value; return this; }
+    MapSpecBuilder normalise(String value) { normalise = value; return this; }
+    MapSpecBuilder per(String value) { per = value; return this; }
+    MapSpecBuilder multiplier(double value) { multiplier = value; return this; }
+    MapSpecBuilder display(String value) { display = value; return this; }
+    MapSpecBuilder eventsColumn(String value) { eventsColumn = value; return this; }
+    MapSpecBuilder marginColumn(String value) { marginColumn = value; return this; }
+    MapSpecBuilder range(double min, double max) { range = List.of(min, max); return this; }
+
+    MapSpec build() {
+        return new MapSpec("m", null, "regions", "figures", indicator, periods, measure, normalise, per, multiplier,
+                null, display, null, null, null, eventsColumn, marginColumn, null, null, null, range);
+    }
+}
