@@ -86,7 +86,7 @@ final class ProjectChecks {
             error("project-missing-key", at + "/indicator", "Map '" + map.id() + "' names no indicator.",
                     "Set 'indicator' to the column (wide layout) or indicator name (long layout) to map.");
         }
-        oneOf(at + "/measure", map.measure(), List.of("rate", "count"));
+        oneOf(at + "/measure", map.measure(), List.of("", "rate", "count"));
         oneOf(at + "/normalise", map.normalise(), List.of("none", "area", "column"));
         if ("column".equals(map.normalise()) && map.per().isBlank()) {
             error("project-missing-key", at + "/per", "Map '" + map.id() + "' normalises by a column but names none.",
