@@ -1,0 +1,22 @@
+package aequa.atlas;
+
+import java.util.List;
+import java.util.Map;
+
+import aequa.inputs.regions.Region;
+
+/**
+ * The regions of one geometry source after validation and repair, with their geodesic areas.
+ *
+ * @param sourceId  the source's id in the project file
+ * @param file      the file as the project names it
+ * @param regions   the usable regions, in source order, RFC 7946 form (valid, counter-clockwise shells, cut at +-180)
+ * @param areaKm2ByKey geodesic area on WGS 84 of each region, by key
+ */
+record RegionLayer(String sourceId, String file, List<Region> regions, Map<String, Double> areaKm2ByKey) {
+
+    RegionLayer {
+        regions = List.copyOf(regions);
+        areaKm2ByKey = Map.copyOf(areaKm2ByKey);
+    }
+}
