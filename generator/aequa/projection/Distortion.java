@@ -28,6 +28,14 @@ public final class Distortion {
 
     private static final double MARGIN_DEG = 3 * STEP_DEG;
 
+    /** Five-point central difference: f' = (f(-2h) - 8 f(-h) + 8 f(h) - f(2h)) / (12 h), error O(h^4). */
+    private static final double[] FIVE_POINT = {-2, -1, 1, 2};
+    private static final double[] FIVE_POINT_WEIGHTS = {1.0 / 12, -8.0 / 12, 8.0 / 12, -1.0 / 12};
+
+    /** Three-point central difference: f' = (f(h) - f(-h)) / (2 h), error O(h^2). */
+    private static final double[] THREE_POINT = {-1, 1};
+    private static final double[] THREE_POINT_WEIGHTS = {-0.5, 0.5};
+
     private Distortion() {
     }
 
@@ -48,43 +56,47 @@ public final class Distortion {
     }
 
     static Tissot at(EqualAreaProjection projection, EllipsoidAxes ellipsoid, double lonDeg, double latDeg) {
-        double[] stencil = new double[16];
+        double[] stencil = new double[4 * FIVE_POINT.length];
         double[] where = new double[2];
-        fillStencil(projection.frame(), lonDeg, latDeg, stencil, 0, where);
-        projection.forward(stencil, 0, stencil, 0, 8);
-        return fromStencil(ellipsoid, stencil, 0, where[1]);
+        fillStencil(projection.frame(), lonDeg, latDeg, FIVE_POINT, stencil, 0, where);
+        projection.forward(stencil, 0, stencil, 0, 2 * FIVE_POINT.length);
+        return fromStencil(ellipsoid, FIVE_POINT, FIVE_POINT_WEIGHTS, stencil, 0, where[1]);
     }
 
     /**
      * omega in degrees at each of {@code count} (lon, lat) points, written to {@code omegaDeg[0..count)}:
-     * the batch form used by the automatic choice (one call to the projection for all points).
+     * the batch form used by the automatic choice, with one call to the projection for all points and
+     * second-order central differences (half the work; omega still good to about 1e-7 deg, which is all
+     * a comparison of candidates needs).
      */
     static void omegaDeg(EqualAreaProjection projection, double[] lonLatDeg, int count, double[] omegaDeg) {
-        double[] stencil = new double[16 * count];
+        int perPoint = 4 * THREE_POINT.length;
+        double[] stencil = new double[perPoint * count];
         double[] lats = new double[count];
         double[] where = new double[2];
         AspectFrame frame = projection.frame();
         for (int i = 0; i < count; i++) {
-            fillStencil(frame, lonLatDeg[2 * i], lonLatDeg[2 * i + 1], stencil, 16 * i, where);
+            fillStencil(frame, lonLatDeg[2 * i], lonLatDeg[2 * i + 1], THREE_POINT, stencil, perPoint * i, where);
             lats[i] = where[1];
         }
-        projection.forward(stencil, 0, stencil, 0, 8 * count);
+        projection.forward(stencil, 0, stencil, 0, 2 * THREE_POINT.length * count);
         for (int i = 0; i < count; i++) {
-            omegaDeg[i] = fromStencil(EllipsoidAxes.WGS84, stencil, 16 * i, lats[i]).omegaDeg();
+            omegaDeg[i] = fromStencil(EllipsoidAxes.WGS84, THREE_POINT, THREE_POINT_WEIGHTS, stencil, perPoint * i, lats[i]).omegaDeg();
         }
     }
 
     /**
-     * Writes the 8 stencil points (lon +-h, +-2h; lat +-h, +-2h) around the point, moved inside the frame's
-     * domain and away from the poles and the cut, into {@code stencil[offset..offset+16)}; the point actually
-     * used goes to {@code where}. A point outside the domain gets NaN coordinates.
+     * Writes the stencil points (lon + m hLon for each multiple m, then lat + m h) around the point, moved
+     * inside the frame's domain and away from the poles and the cut, into {@code stencil[offset..)}; the
+     * point actually used goes to {@code where}. A point outside the domain gets NaN coordinates.
      */
-    private static void fillStencil(AspectFrame frame, double lonDeg, double latDeg, double[] stencil, int offset,
-                                    double[] where) {
+    private static void fillStencil(AspectFrame frame, double lonDeg, double latDeg, double[] multiples,
+                                    double[] stencil, int offset, double[] where) {
         double[] f = new double[2];
         frame.toFrame(lonDeg, latDeg, f);
+        int n = multiples.length;
         if (f[1] < frame.minFrameLatDeg() || Double.isNaN(f[1])) {
-            java.util.Arrays.fill(stencil, offset, offset + 16, Double.NaN);
+            java.util.Arrays.fill(stencil, offset, offset + 4 * n, Double.NaN);
             where[0] = Double.NaN;
             where[1] = Double.NaN;
             return;
@@ -105,37 +117,43 @@ public final class Distortion {
         where[0] = lonDeg;
         where[1] = latDeg;
         double hLon = lonStepDeg(latDeg);
-        double[] multiples = {-2, -1, 1, 2};
-        for (int j = 0; j < 4; j++) {
+        for (int j = 0; j < n; j++) {
             stencil[offset + 2 * j] = lonDeg + multiples[j] * hLon;
             stencil[offset + 2 * j + 1] = latDeg;
-            stencil[offset + 8 + 2 * j] = lonDeg;
-            stencil[offset + 8 + 2 * j + 1] = latDeg + multiples[j] * STEP_DEG;
+            stencil[offset + 2 * n + 2 * j] = lonDeg;
+            stencil[offset + 2 * n + 2 * j + 1] = latDeg + multiples[j] * STEP_DEG;
         }
     }
 
-    /** The indicatrix from 8 projected stencil points (4 along lon, then 4 along lat). */
-    private static Tissot fromStencil(EllipsoidAxes ellipsoid, double[] p, int offset, double latDeg) {
+    /** The indicatrix from the projected stencil (n points along lon, then n along lat). */
+    private static Tissot fromStencil(EllipsoidAxes ellipsoid, double[] multiples, double[] weights, double[] p, int offset,
+                                      double latDeg) {
         double lat = Math.toRadians(latDeg);
         double degree = Math.PI / 180.0;
         double parallelMetresPerDeg = ellipsoid.primeVerticalRadiusM(lat) * Math.cos(lat) * degree;
         double meridianMetresPerDeg = ellipsoid.meridionalRadiusM(lat) * degree;
-        // five-point central difference: f' = (f(-2h) - 8 f(-h) + 8 f(h) - f(2h)) / (12 h)
         double hLon = lonStepDeg(latDeg);
-        double dxdLon = derivative(p[offset], p[offset + 2], p[offset + 4], p[offset + 6], hLon) / parallelMetresPerDeg;
-        double dydLon = derivative(p[offset + 1], p[offset + 3], p[offset + 5], p[offset + 7], hLon) / parallelMetresPerDeg;
-        double dxdLat = derivative(p[offset + 8], p[offset + 10], p[offset + 12], p[offset + 14], STEP_DEG) / meridianMetresPerDeg;
-        double dydLat = derivative(p[offset + 9], p[offset + 11], p[offset + 13], p[offset + 15], STEP_DEG) / meridianMetresPerDeg;
+        int n = multiples.length;
+        double dxdLon = 0;
+        double dydLon = 0;
+        double dxdLat = 0;
+        double dydLat = 0;
+        for (int j = 0; j < n; j++) {
+            dxdLon += weights[j] * p[offset + 2 * j];
+            dydLon += weights[j] * p[offset + 2 * j + 1];
+            dxdLat += weights[j] * p[offset + 2 * n + 2 * j];
+            dydLat += weights[j] * p[offset + 2 * n + 2 * j + 1];
+        }
+        dxdLon /= hLon * parallelMetresPerDeg;
+        dydLon /= hLon * parallelMetresPerDeg;
+        dxdLat /= STEP_DEG * meridianMetresPerDeg;
+        dydLat /= STEP_DEG * meridianMetresPerDeg;
         double sumSquares = dxdLon * dxdLon + dydLon * dydLon + dxdLat * dxdLat + dydLat * dydLat;
         double areaScale = Math.abs(dxdLon * dydLat - dxdLat * dydLon);
         double aPlusB = Math.sqrt(sumSquares + 2 * areaScale);
         double aMinusB = Math.sqrt(Math.max(0.0, sumSquares - 2 * areaScale));
         double omegaDeg = Math.toDegrees(2 * Math.asin(Math.min(1.0, aMinusB / aPlusB)));
         return new Tissot(areaScale, omegaDeg, (aPlusB + aMinusB) / 2, (aPlusB - aMinusB) / 2);
-    }
-
-    private static double derivative(double minus2, double minus1, double plus1, double plus2, double step) {
-        return (minus2 - 8 * minus1 + 8 * plus1 - plus2) / (12 * step);
     }
 
     private static double lonStepDeg(double latDeg) {
