@@ -9,6 +9,9 @@ package aequa.projection;
  * <p>For a normal-aspect family the frame is the geographic frame shifted by the central meridian. For an
  * azimuthal projection the frame's north pole is the projection centre, so its domain is a cap. Angles in
  * degrees; frame longitudes in [-180, 180].
+ *
+ * <p>aequa's frames rotate the authalic sphere (Snyder 1987, eq. 3-11): frame latitudes are authalic
+ * latitudes, which makes the cut and the domain exact for every family. Implementations are immutable.
  */
 public interface AspectFrame {
 
@@ -23,4 +26,11 @@ public interface AspectFrame {
 
     /** The highest frame latitude the projection may be given. */
     double maxFrameLatDeg();
+
+    /**
+     * Whether the frame antimeridian is a discontinuity of the projection. True for the cylindrical, conic
+     * and world families (geometry must be cut there); false for the azimuthal family, which is continuous
+     * everywhere inside its domain (a cap around the centre), so geometry needs clipping only.
+     */
+    boolean hasCut();
 }

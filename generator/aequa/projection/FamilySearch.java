@@ -1,0 +1,245 @@
+package aequa.projection;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import static aequa.projection.FamilyDefinitions.AZIMUTH;
+import static aequa.projection.FamilyDefinitions.CENTRE_LAT;
+import static aequa.projection.FamilyDefinitions.CENTRE_LON;
+import static aequa.projection.FamilyDefinitions.STANDARD_LINE_OFFSET;
+import static aequa.projection.FamilyDefinitions.STANDARD_PARALLEL_1;
+import static aequa.projection.FamilyDefinitions.STANDARD_PARALLEL_2;
+
+/**
+ * Finds good parameters of one family for a footprint: starts from the trade's rules of thumb, improves
+ * them with {@link NelderMead} on the {@link OmegaScore}, rounds them to readable values and polishes on
+ * that lattice. Forced parameters stay as given.
+ *
+ * <p>Starting values (common practice in the trade): azimuthal centre at the data's spherical centre (the
+ * pole when the data contain it); Albers standard parallels at 1/6 and 5/6 of the latitude range; for the
+ * cylindrical aspects, lines of true scale at distance s from the central line with cos s =
+ * sqrt(cos d_min cos d_max), which balances the scale error k = cos s / cos d (Snyder 1987, eq. 10-2) between
+ * the nearest and farthest data (d_min, d_max: the data's angular distances from the central line).
+ * Parameters that cannot change omega (the central meridian of conic and normal cylindrical maps, the
+ * latitude of the origin) are set from the data and not searched.
+ */
+final class FamilySearch {
+
+    /** Most evaluations Nelder-Mead may spend per free parameter. */
+    private static final int EVALUATIONS_PER_PARAMETER = 40;
+
+    /** Stop when the simplex's scores agree within this many degrees. */
+    private static final double TOLERANCE_DEG = 1e-4;
+
+    private final ProjectionFamily family;
+    private final Footprint footprint;
+    private final FootprintSamples samples;
+    private final Map<String, Double> forced;
+    private final double roundingStepDeg;
+
+    FamilySearch(ProjectionFamily family, Footprint footprint, FootprintSamples samples, Map<String, Double> forced,
+                 double roundingStepDeg) {
+        this.family = family;
+        this.footprint = footprint;
+        this.samples = samples;
+        this.forced = forced;
+        this.roundingStepDeg = roundingStepDeg;
+    }
+
+    /** The best parameter values found, by key, rounded to the step (forced ones as given). */
+    Map<String, Double> run() {
+        Map<String, Double> values = startValues();
+        values.putAll(forcedValues());
+        List<String> free = new ArrayList<>();
+        for (String key : searchedKeys()) {
+            if (!forced.containsKey(key)) {
+                free.add(key);
+            }
+        }
+        if (free.isEmpty()) {
+            return values;
+        }
+        double[] start = new double[free.size()];
+        double[] steps = new double[free.size()];
+        for (int i = 0; i < start.length; i++) {
+            start[i] = values.get(free.get(i));
+            steps[i] = initialStep(free.get(i));
+        }
+        double[] best = NelderMead.minimise(x -> score(values, free, x), start, steps,
+                EVALUATIONS_PER_PARAMETER * free.size(), TOLERANCE_DEG);
+        for (int i = 0; i < best.length; i++) {
+            best[i] = round(free.get(i), best[i]);
+        }
+        double bestScore = score(values, free, best);
+        // polish on the rounding lattice: move one parameter by one step while that helps
+        for (boolean improved = true; improved; ) {
+            improved = false;
+            for (int i = 0; i < best.length; i++) {
+                for (double direction : new double[] {-1, 1}) {
+                    double[] trial = best.clone();
+                    trial[i] = round(free.get(i), trial[i] + direction * roundingStepDeg);
+                    double s = score(values, free, trial);
+                    if (s < bestScore - 1e-12) {
+                        best = trial;
+                        bestScore = s;
+                        improved = true;
+                    }
+                }
+            }
+        }
+        for (int i = 0; i < best.length; i++) {
+            values.put(free.get(i), best[i]);
+        }
+        return values;
+    }
+
+    /** Builds the projection, or returns null when the values are not allowed for this family. */
+    static EqualAreaProjection build(ProjectionFamily family, Map<String, Double> values) {
+        try {
+            return Projections.create(family, values);
+        } catch (IllegalArgumentException e) {
+            return null;
+        }
+    }
+
+    private double score(Map<String, Double> fixed, List<String> free, double[] x) {
+        Map<String, Double> values = new HashMap<>(fixed);
+        for (int i = 0; i < x.length; i++) {
+            values.put(free.get(i), normalised(free.get(i), x[i]));
+        }
+        if (!allowed(values)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        EqualAreaProjection projection = build(family, values);
+        return projection == null ? Double.POSITIVE_INFINITY : OmegaScore.of(projection, samples).score();
+    }
+
+    /** Family-specific limits beyond the parameter ranges: Albers stays in the data's hemisphere. */
+    private boolean allowed(Map<String, Double> values) {
+        if (family != ProjectionFamily.ALBERS_CONIC) {
+            return true;
+        }
+        double side = footprint.maxLatDeg() + footprint.minLatDeg() >= 0 ? 1.0 : -1.0;
+        double p1 = values.get(STANDARD_PARALLEL_1) * side;
+        double p2 = values.get(STANDARD_PARALLEL_2) * side;
+        return p1 >= 0 && p2 >= 0 && p1 + p2 > 0.5 && p1 <= 89 && p2 <= 89;
+    }
+
+    private List<String> searchedKeys() {
+        switch (family) {
+            case LAMBERT_AZIMUTHAL:
+                return List.of(CENTRE_LON, CENTRE_LAT);
+            case ALBERS_CONIC:
+                return List.of(STANDARD_PARALLEL_1, STANDARD_PARALLEL_2);
+            case CYLINDRICAL:
+                return List.of(STANDARD_PARALLEL_1);
+            case CYLINDRICAL_TRANSVERSE:
+                return List.of(CENTRE_LON, STANDARD_LINE_OFFSET);
+            case CYLINDRICAL_OBLIQUE:
+                return List.of(CENTRE_LON, CENTRE_LAT, AZIMUTH, STANDARD_LINE_OFFSET);
+            default:
+                return footprint.lonSpanDeg() >= 359.9 ? List.of() : List.of(CENTRE_LON);
+        }
+    }
+
+    private Map<String, Double> startValues() {
+        Map<String, Double> v = new HashMap<>();
+        double centreLon = round(CENTRE_LON, footprint.centreLonDeg());
+        double midLat = round(CENTRE_LAT, (footprint.minLatDeg() + footprint.maxLatDeg()) / 2);
+        double range = footprint.maxLatDeg() - footprint.minLatDeg();
+        v.put(CENTRE_LON, centreLon);
+        v.put(CENTRE_LAT, midLat);
+        switch (family) {
+            case LAMBERT_AZIMUTHAL:
+                if (footprint.containsNorthPole() != footprint.containsSouthPole()) {
+                    v.put(CENTRE_LAT, footprint.containsNorthPole() ? 90.0 : -90.0);
+                } else {
+                    v.put(CENTRE_LON, footprint.sphericalCentreLonDeg());
+                    v.put(CENTRE_LAT, footprint.sphericalCentreLatDeg());
+                }
+                break;
+            case ALBERS_CONIC:
+                v.put(STANDARD_PARALLEL_1, footprint.minLatDeg() + range / 6);
+                v.put(STANDARD_PARALLEL_2, footprint.minLatDeg() + 5 * range / 6);
+                break;
+            case CYLINDRICAL: {
+                double nearest = footprint.crossesEquator() ? 0 : Math.min(Math.abs(footprint.minLatDeg()), Math.abs(footprint.maxLatDeg()));
+                double farthest = Math.min(80, Math.max(Math.abs(footprint.minLatDeg()), Math.abs(footprint.maxLatDeg())));
+                v.put(STANDARD_PARALLEL_1, balancedOffsetDeg(nearest, farthest));
+                break;
+            }
+            case CYLINDRICAL_TRANSVERSE:
+            case CYLINDRICAL_OBLIQUE: {
+                double azimuth = family == ProjectionFamily.CYLINDRICAL_TRANSVERSE ? 0.0 : normalised(AZIMUTH, footprint.orientationDeg());
+                v.put(CENTRE_LON, footprint.sphericalCentreLonDeg());
+                v.put(CENTRE_LAT, family == ProjectionFamily.CYLINDRICAL_TRANSVERSE ? midLat : footprint.sphericalCentreLatDeg());
+                v.put(AZIMUTH, azimuth);
+                v.put(STANDARD_LINE_OFFSET, balancedOffsetDeg(0, Math.min(80, farthestFromLine(v.get(CENTRE_LON),
+                        v.get(CENTRE_LAT), azimuth))));
+                break;
+            }
+            default:
+                break;
+        }
+        return v;
+    }
+
+    private Map<String, Double> forcedValues() {
+        Map<String, Double> v = new HashMap<>();
+        for (ParameterDefinition d : FamilyDefinitions.of(family)) {
+            if (forced.containsKey(d.key())) {
+                v.put(d.key(), forced.get(d.key()));
+            }
+        }
+        return v;
+    }
+
+    /** s with cos s = sqrt(cos a cos b): equal and opposite scale errors at distances a and b (degrees). */
+    static double balancedOffsetDeg(double nearestDeg, double farthestDeg) {
+        return Math.toDegrees(Math.acos(Math.sqrt(Math.cos(Math.toRadians(nearestDeg)) * Math.cos(Math.toRadians(farthestDeg)))));
+    }
+
+    /** Largest angular distance, in degrees, of a sample from the great circle through a point with an azimuth. */
+    private double farthestFromLine(double lonDeg, double latDeg, double azimuthDeg) {
+        SphereRotation rotation = SphereRotation.centredOn(lonDeg, latDeg, azimuthDeg);
+        double[] f = new double[2];
+        double farthest = 0;
+        for (int i = 0; i < samples.count(); i++) {
+            rotation.forward(Math.toRadians(samples.lonDeg(i)), Math.toRadians(samples.latDeg(i)), f);
+            farthest = Math.max(farthest, Math.abs(Math.toDegrees(f[1])));
+        }
+        return farthest;
+    }
+
+    private double initialStep(String key) {
+        double size = Math.max(footprint.maxLatDeg() - footprint.minLatDeg(), Math.min(footprint.lonSpanDeg(), 180.0) / 2);
+        switch (key) {
+            case AZIMUTH:
+                return 15.0;
+            case STANDARD_LINE_OFFSET:
+            case STANDARD_PARALLEL_1:
+            case STANDARD_PARALLEL_2:
+                return Math.max(size / 8, 5 * roundingStepDeg);
+            default:
+                return Math.max(size / 6, 5 * roundingStepDeg);
+        }
+    }
+
+    /** Longitudes wrap into [-180, 180], azimuths into [-90, 90] (the same line, drawn north-up). */
+    private static double normalised(String key, double value) {
+        if (CENTRE_LON.equals(key)) {
+            return Longitudes.normalize(value) == -180.0 && value > 0 ? 180.0 : Longitudes.normalize(value);
+        }
+        if (AZIMUTH.equals(key)) {
+            return value - 180.0 * Math.round(value / 180.0);
+        }
+        return value;
+    }
+
+    private double round(String key, double value) {
+        double perDegree = Math.rint(1.0 / roundingStepDeg);   // steps are 1/2, 1/10, 1/100, 1/1000 deg
+        return normalised(key, Math.round(normalised(key, value) * perDegree) / perDegree);
+    }
+}

@@ -1,0 +1,195 @@
+package aequa.projection;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+import org.junit.jupiter.api.Test;
+import org.locationtech.jts.geom.Geometry;
+
+/**
+ * The automatic choice on reference footprints, each checked two ways: the family is the one the trade's
+ * rules name for such an extent (common practice: Snyder 1987, "Choosing a projection"; the brief's
+ * list), and the chosen omegaMaxDeg is within 2 % of the best found by an exhaustive grid search over that
+ * family's parameters, run here.
+ */
+class ProjectionChooserTest {
+
+    private static final double WITHIN = 1.02;
+
+    @Test
+    void wholeWorldGetsAWorldFamily() {
+        Footprint world = Footprint.of(List.of(Regions.box(-180, -90, 180, 90)));
+        ProjectionChoice choice = ProjectionChooser.choose(world, ProjectionRequest.automatic());
+        ProjectionFamily family = choice.projection().family();
+        assertTrue(family == ProjectionFamily.EQUAL_EARTH || family == ProjectionFamily.MOLLWEIDE, family.toString());
+        double best = Double.POSITIVE_INFINITY;
+        for (double lon = -180; lon < 180; lon += 15) {
+            best = Math.min(best, omegaMax(family, Map.of("centre-lon", lon), world));
+        }
+        assertTrue(choice.omegaMaxDeg() <= best * WITHIN, choice.omegaMaxDeg() + " vs grid " + best);
+        assertComplete(choice, world);
+    }
+
+    @Test
+    void midLatitudeEastWestBoxGetsAConic() {
+        Footprint box = Footprint.of(List.of(Regions.box(-125, 25, -65, 50)));
+        ProjectionChoice choice = ProjectionChooser.choose(box, ProjectionRequest.automatic());
+        assertEquals(ProjectionFamily.ALBERS_CONIC, choice.projection().family(), choice.reason());
+        double best = Double.POSITIVE_INFINITY;
+        double[] bestAt = new double[2];
+        for (double p1 = 22; p1 <= 35; p1 += 1) {
+            for (double p2 = 38; p2 <= 52; p2 += 1) {
+                double omega = omegaMax(ProjectionFamily.ALBERS_CONIC, albers(p1, p2), box);
+                if (omega < best) {
+                    best = omega;
+                    bestAt = new double[] {p1, p2};
+                }
+            }
+        }
+        for (double p1 = bestAt[0] - 0.5; p1 <= bestAt[0] + 0.5; p1 += 0.1) {
+            for (double p2 = bestAt[1] - 0.5; p2 <= bestAt[1] + 0.5; p2 += 0.1) {
+                best = Math.min(best, omegaMax(ProjectionFamily.ALBERS_CONIC, albers(p1, p2), box));
+            }
+        }
+        assertTrue(choice.omegaMaxDeg() <= best * WITHIN, choice.omegaMaxDeg() + " vs grid " + best);
+        assertComplete(choice, box);
+    }
+
+    @Test
+    void polarCapGetsAPolarAzimuthal() {
+        Footprint cap = Footprint.of(List.of(Regions.box(-180, 60, 180, 90)));
+        ProjectionChoice choice = ProjectionChooser.choose(cap, ProjectionRequest.automatic());
+        assertEquals(ProjectionFamily.LAMBERT_AZIMUTHAL, choice.projection().family(), choice.reason());
+        assertEquals(90.0, value(choice, "centre-lat"), 0.0);
+        double best = Double.POSITIVE_INFINITY;
+        for (double lat = 80; lat <= 90; lat += 0.5) {
+            for (double lon = -180; lon < 180; lon += 30) {
+                best = Math.min(best, omegaMax(ProjectionFamily.LAMBERT_AZIMUTHAL, Map.of("centre-lon", lon, "centre-lat", lat), cap));
+            }
+        }
+        assertTrue(choice.omegaMaxDeg() <= best * WITHIN, choice.omegaMaxDeg() + " vs grid " + best);
+        assertTrue(choice.reason().contains("North Pole"), choice.reason());
+    }
+
+    @Test
+    void equatorialBeltGetsTheNormalCylindrical() {
+        Footprint belt = Footprint.of(List.of(Regions.box(-20, -10, 160, 10)));
+        ProjectionChoice choice = ProjectionChooser.choose(belt, ProjectionRequest.automatic());
+        assertEquals(ProjectionFamily.CYLINDRICAL, choice.projection().family(), choice.reason());
+        double best = Double.POSITIVE_INFINITY;
+        for (double parallel = 0; parallel <= 20; parallel += 0.1) {
+            best = Math.min(best, omegaMax(ProjectionFamily.CYLINDRICAL, Map.of("centre-lon", 70.0, "standard-parallel-1", parallel), belt));
+        }
+        assertTrue(choice.omegaMaxDeg() <= best * WITHIN, choice.omegaMaxDeg() + " vs grid " + best);
+    }
+
+    @Test
+    void longNorthSouthStripGetsTheTransverseAspect() {
+        Footprint strip = Footprint.of(List.of(Regions.box(10, -40, 16, 40)));
+        ProjectionChoice choice = ProjectionChooser.choose(strip, ProjectionRequest.automatic());
+        assertEquals(ProjectionFamily.CYLINDRICAL_TRANSVERSE, choice.projection().family(), choice.reason());
+        double best = Double.POSITIVE_INFINITY;
+        double[] bestAt = new double[2];
+        for (double lon = 10; lon <= 16; lon += 0.5) {
+            for (double offset = 0; offset <= 5; offset += 0.5) {
+                double omega = omegaMax(ProjectionFamily.CYLINDRICAL_TRANSVERSE, transverse(lon, offset), strip);
+                if (omega < best) {
+                    best = omega;
+                    bestAt = new double[] {lon, offset};
+                }
+            }
+        }
+        for (double lon = bestAt[0] - 0.25; lon <= bestAt[0] + 0.25; lon += 0.05) {
+            for (double offset = Math.max(0, bestAt[1] - 0.25); offset <= bestAt[1] + 0.25; offset += 0.05) {
+                best = Math.min(best, omegaMax(ProjectionFamily.CYLINDRICAL_TRANSVERSE, transverse(lon, offset), strip));
+            }
+        }
+        assertTrue(choice.omegaMaxDeg() <= best * WITHIN, choice.omegaMaxDeg() + " vs grid " + best);
+    }
+
+    @Test
+    void forcedFamilyAndParametersAreHonoured() {
+        Footprint box = Footprint.of(List.of(Regions.box(-125, 25, -65, 50)));
+        ProjectionChoice choice = ProjectionChooser.choose(box, new ProjectionRequest(
+                Optional.of(ProjectionFamily.LAMBERT_AZIMUTHAL), Map.of("centre-lon", -100.0), Optional.empty()));
+        assertEquals(ProjectionFamily.LAMBERT_AZIMUTHAL, choice.projection().family());
+        assertEquals(-100.0, value(choice, "centre-lon"), 0.0);
+        assertTrue(choice.reason().contains("project file"), choice.reason());
+        // a forced parameter without a family applies to whichever family wins
+        ProjectionChoice auto = ProjectionChooser.choose(box, new ProjectionRequest(Optional.empty(),
+                Map.of("centre-lon", -90.0), Optional.empty()));
+        assertEquals(-90.0, value(auto, "centre-lon"), 0.0);
+    }
+
+    @Test
+    void previousChoiceIsKeptUnlessClearlyWorse() {
+        Footprint box = Footprint.of(List.of(Regions.box(-125, 25, -65, 50)));
+        ProjectionChoice fresh = ProjectionChooser.choose(box, ProjectionRequest.automatic());
+        Map<String, Double> nearby = parameterMap(fresh.projection());
+        nearby.put("standard-parallel-1", nearby.get("standard-parallel-1") + 0.2);   // a little worse than the best
+        ProjectionChoice kept = ProjectionChooser.choose(box, new ProjectionRequest(Optional.empty(), Map.of(),
+                Optional.of(new ProjectionRequest.Previous(ProjectionFamily.ALBERS_CONIC, nearby))));
+        assertEquals(nearby, parameterMap(kept.projection()), kept.reason());
+        assertTrue(kept.reason().contains("previous"), kept.reason());
+        // next month's data add a small region: the map keeps last month's projection
+        Footprint grown = Footprint.of(List.of(Regions.box(-125, 25, -65, 50), Regions.box(-68, 44, -66, 47)));
+        ProjectionChoice nextMonth = ProjectionChooser.choose(grown, new ProjectionRequest(Optional.empty(), Map.of(),
+                Optional.of(new ProjectionRequest.Previous(ProjectionFamily.ALBERS_CONIC, parameterMap(fresh.projection())))));
+        assertEquals(parameterMap(fresh.projection()), parameterMap(nextMonth.projection()));
+        ProjectionChoice replaced = ProjectionChooser.choose(box, new ProjectionRequest(Optional.empty(), Map.of(),
+                Optional.of(new ProjectionRequest.Previous(ProjectionFamily.LAMBERT_AZIMUTHAL, Map.of("centre-lon", 0.0, "centre-lat", 0.0)))));
+        assertEquals(parameterMap(fresh.projection()), parameterMap(replaced.projection()));
+    }
+
+    @Test
+    void choiceIsDeterministic() {
+        List<Geometry> regions = List.of(Regions.box(5, 45, 15, 55), Regions.box(15, 40, 25, 50));
+        ProjectionChoice a = ProjectionChooser.choose(Footprint.of(regions), ProjectionRequest.automatic());
+        ProjectionChoice b = ProjectionChooser.choose(Footprint.of(regions), ProjectionRequest.automatic());
+        assertEquals(a.projection().wkt2(), b.projection().wkt2());
+        assertEquals(a.reason(), b.reason());
+        assertEquals(a.omegaMaxDeg(), b.omegaMaxDeg(), 0.0);
+    }
+
+    private static void assertComplete(ProjectionChoice choice, Footprint footprint) {
+        assertTrue(choice.omegaMaxDeg() >= choice.omegaMeanDeg() && choice.omegaMeanDeg() >= 0);
+        assertTrue(choice.worstLatDeg() >= footprint.minLatDeg() - 1e-9 && choice.worstLatDeg() <= footprint.maxLatDeg() + 1e-9);
+        assertFalse(choice.runnersUp().isEmpty());
+        for (ProjectionChoice.Candidate c : choice.runnersUp()) {
+            assertTrue(c.omegaMaxDeg() > 0 && !c.parameters().isEmpty(), c.toString());
+        }
+        assertTrue(choice.reason().startsWith(choice.projection().family().displayName()), choice.reason());
+        assertTrue(choice.reason().endsWith("."), choice.reason());
+    }
+
+    private static double omegaMax(ProjectionFamily family, Map<String, Double> parameters, Footprint footprint) {
+        EqualAreaProjection projection = FamilySearch.build(family, parameters);
+        return projection == null ? Double.POSITIVE_INFINITY : OmegaScore.of(projection, footprint.samples()).omegaMaxDeg();
+    }
+
+    private static Map<String, Double> albers(double p1, double p2) {
+        return Map.of("centre-lon", -95.0, "centre-lat", 37.5, "standard-parallel-1", p1, "standard-parallel-2", p2);
+    }
+
+    private static Map<String, Double> transverse(double lon, double offset) {
+        return Map.of("centre-lon", lon, "centre-lat", 0.0, "standard-line-offset", offset);
+    }
+
+    private static double value(ProjectionChoice choice, String key) {
+        return choice.projection().parameters().stream().filter(p -> p.key().equals(key)).findFirst().orElseThrow().value();
+    }
+
+    private static Map<String, Double> parameterMap(EqualAreaProjection projection) {
+        Map<String, Double> map = new HashMap<>();
+        for (ProjectionParameter p : projection.parameters()) {
+            map.put(p.key(), p.value());
+        }
+        return map;
+    }
+}
