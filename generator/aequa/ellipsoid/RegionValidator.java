@@ -31,7 +31,7 @@ import aequa.inputs.regions.Region;
  * <li>rings that jump across +-180 or encircle a pole: cut at the antimeridian and closed along the pole
  *     (the enclosed pole is the one nearer the ring, as the input's orientation cannot be trusted yet),
  *     note {@code antimeridian-cut} or {@code pole-ring-closed};</li>
- * <li>polygons whose exterior ring has fewer than three distinct positions (no area): left out, note
+ * <li>polygons or holes whose ring has fewer than three distinct positions (no area): left out, note
  *     {@code part-degenerate};</li>
  * <li>invalid polygons (self-intersections, bow-ties, spikes, holes outside shells): repaired with JTS
  *     GeometryFixer, which keeps every lobe (unlike buffer(0)), warning {@code geometry-repaired}; parts
@@ -102,6 +102,9 @@ public final class RegionValidator {
                 collapsed++;
                 continue;
             }
+            int holes = part.getNumInteriorRing();
+            part = withoutCollapsedHoles(part);
+            collapsed += holes - part.getNumInteriorRing();
             if (jumpsAcrossAntimeridian(part)) {
                 cut = true;
                 poleClosed |= encirclesPole(part.getExteriorRing().getCoordinates());
@@ -121,7 +124,7 @@ public final class RegionValidator {
         }
         if (collapsed > 0) {
             findings.add(Finding.note("part-degenerate", file, place,
-                    collapsed + " of its polygons enclose no area (fewer than three distinct positions); aequa left them out.",
+                    collapsed + " of its rings enclose no area (fewer than three distinct positions); aequa left them out.",
                     "Remove such slivers from the source."));
         }
         if (parts.isEmpty()) {
@@ -177,6 +180,19 @@ public final class RegionValidator {
             turned += step - 360 * Math.round(step / 360);
         }
         return Math.abs(turned) > 180;
+    }
+
+    private static Polygon withoutCollapsedHoles(Polygon polygon) {
+        List<LinearRing> holes = new ArrayList<>();
+        for (int h = 0; h < polygon.getNumInteriorRing(); h++) {
+            if (distinctPoints(polygon.getInteriorRingN(h).getCoordinates()) >= 3) {
+                holes.add(polygon.getInteriorRingN(h));
+            }
+        }
+        if (holes.size() == polygon.getNumInteriorRing()) {
+            return polygon;
+        }
+        return polygon.getFactory().createPolygon(polygon.getExteriorRing(), holes.toArray(new LinearRing[0]));
     }
 
     private static int distinctPoints(Coordinate[] ring) {
