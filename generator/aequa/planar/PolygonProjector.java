@@ -1,0 +1,286 @@
+package aequa.planar;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.CoordinateList;
+import org.locationtech.jts.geom.CoordinateSequence;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.geom.LinearRing;
+import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.geom.PrecisionModel;
+import org.locationtech.jts.geom.impl.PackedCoordinateSequence;
+import org.locationtech.jts.geom.impl.PackedCoordinateSequenceFactory;
+import org.locationtech.jts.operation.overlayng.OverlayNG;
+import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
+
+import aequa.ellipsoid.AntimeridianCutter;
+import aequa.projection.AspectFrame;
+import aequa.projection.EqualAreaProjection;
+
+/**
+ * Projects region polygons (lon/lat degrees, RFC 7946 form, already densified) to metres with an
+ * equal-area projection, cutting them at the projection's discontinuity first so nothing streaks across
+ * the map. Immutable and thread-safe.
+ *
+ * <p>Two kinds of projection are told apart by probing, once: a projection is <em>continuous</em> across its
+ * frame's antimeridian when points 1e-6 deg either side of it (at two frame latitudes inside the domain)
+ * project within 10 m of each other. Azimuthal projections are; cylindrical, conic and pseudocylindrical
+ * ones are not (there the two points land on opposite edges of the map).
+ * <ul>
+ * <li>Cut projections: a part that lies within the frame's strip and latitude band, with no vertex within
+ *     1e-9 deg of the cut, is projected as it is. Any other part goes through {@link AntimeridianCutter} in
+ *     frame coordinates (cut at frame longitude +-180, closed along frame poles, clipped to the band). Points
+ *     on the cut are placed {@value #CUT_NUDGE_DEG} deg (about 0.1 mm on the ground) inside their piece
+ *     before they are mapped back with {@link AspectFrame#fromFrame} and projected, so each lands on its
+ *     own edge of the map; the nudge is far larger than the frame round trip's error (about 1e-13 deg) and
+ *     far smaller than anything drawn. New edges along the cut are densified to the given step.</li>
+ * <li>Continuous projections: parts are projected as they are (a region around the centre needs no cut);
+ *     a part reaching beyond the frame's lowest latitude is clipped in the plane to the projected domain
+ *     boundary (a densified circle of frame latitude {@code minFrameLatDeg}). Limit: a region that contains
+ *     the centre's antipode is not supported (the chooser never picks an azimuthal projection for one).</li>
+ * </ul>
+ * Parts of a region that were cut at +-180 in the source (RFC 7946, section 3.1.9) and meet again on a map
+ * whose cut is elsewhere are merged (JTS OverlayNG union). Input vertices keep their exact lon/lat through this, so regions that share a border vertex for vertex
+ * still do after projection. Output: a Polygon or MultiPolygon in metres (packed coordinates, SRID 0),
+ * empty when nothing lies in the domain; unprojectable points (NaN) are dropped from their ring.
+ */
+public final class PolygonProjector {
+
+    static final double CUT_NUDGE_DEG = 1e-9;
+
+    private static final GeometryFactory METRES =
+            new GeometryFactory(new PrecisionModel(), 0, PackedCoordinateSequenceFactory.DOUBLE_FACTORY);
+
+    private final EqualAreaProjection projection;
+    private final AspectFrame frame;
+    private final AntimeridianCutter.Options cutOptions;
+    private final boolean continuous;
+    private final Geometry domainM;
+
+    /**
+     * @param projection     the map's projection
+     * @param newEdgeStepDeg step for edges created by cutting (use the step the regions were densified with)
+     */
+    public PolygonProjector(EqualAreaProjection projection, double newEdgeStepDeg) {
+        this.projection = projection;
+        this.frame = projection.frame();
+        this.cutOptions = new AntimeridianCutter.Options(frame.minFrameLatDeg(), frame.maxFrameLatDeg(), CUT_NUDGE_DEG,
+                newEdgeStepDeg, AntimeridianCutter.PoleRule.ORIENTATION);
+        this.continuous = probeContinuity();
+        this.domainM = continuous && frame.minFrameLatDeg() > -90 ? domainBoundary() : null;
+    }
+
+    /** True when the projection has no cut at the frame's antimeridian (azimuthal projections). */
+    public boolean continuousAcrossCut() {
+        return continuous;
+    }
+
+    /** Projects a Polygon or MultiPolygon in lon/lat degrees to metres. */
+    public Geometry project(Geometry lonLat) {
+        List<Polygon> out = new ArrayList<>();
+        for (int i = 0; i < lonLat.getNumGeometries(); i++) {
+            Polygon part = (Polygon) lonLat.getGeometryN(i);
+            if (!part.isEmpty()) {
+                projectPart(part, out);
+            }
+        }
+        if (out.isEmpty()) {
+            return METRES.createPolygon();
+        }
+        if (out.size() == 1) {
+            return out.get(0);
+        }
+        Geometry parts = METRES.createMultiPolygon(out.toArray(new Polygon[0]));
+        // RFC 7946 pieces cut at +-180 meet again when the map's cut is elsewhere: merge them into one
+        // polygon so the region stays a valid MultiPolygon and draws without a seam
+        return touchesAntimeridian(lonLat) ? OverlayNGRobust.union(parts) : parts;
+    }
+
+    private static boolean touchesAntimeridian(Geometry lonLat) {
+        boolean[] found = {false};
+        lonLat.apply((org.locationtech.jts.geom.CoordinateSequenceFilter) new org.locationtech.jts.geom.CoordinateSequenceFilter() {
+            @Override
+            public void filter(CoordinateSequence seq, int i) {
+                found[0] |= Math.abs(seq.getX(i)) == 180;
+            }
+
+            @Override
+            public boolean isDone() {
+                return found[0];
+            }
+
+            @Override
+            public boolean isGeometryChanged() {
+                return false;
+            }
+        });
+        return found[0];
+    }
+
+    private void projectPart(Polygon part, List<Polygon> out) {
+        Map<Coordinate, Coordinate> geoByFrame = new HashMap<>();
+        Polygon framePart = toFrame(part, geoByFrame);
+        if (continuous) {
+            Polygon projected = projectRings(part);
+            if (projected == null) {
+                return;
+            }
+            boolean inside = framePart.getEnvelopeInternal().getMinY() >= frame.minFrameLatDeg();
+            Geometry clipped = inside || domainM == null ? projected
+                    : OverlayNGRobust.overlay(projected, domainM, OverlayNG.INTERSECTION);
+            for (int i = 0; i < clipped.getNumGeometries(); i++) {
+                if (clipped.getGeometryN(i) instanceof Polygon && !clipped.getGeometryN(i).isEmpty()) {
+                    out.add((Polygon) clipped.getGeometryN(i));
+                }
+            }
+            return;
+        }
+        if (AntimeridianCutter.fitsFrame(framePart, cutOptions)) {
+            Polygon projected = projectRings(part);
+            if (projected != null) {
+                out.add(projected);
+            }
+            return;
+        }
+        for (Polygon piece : AntimeridianCutter.cut(framePart, cutOptions, METRES)) {
+            Polygon projected = projectRings(fromFrame(piece, geoByFrame));
+            if (projected != null) {
+                out.add(projected);
+            }
+        }
+    }
+
+    private Polygon toFrame(Polygon lonLat, Map<Coordinate, Coordinate> geoByFrame) {
+        LinearRing shell = toFrame(lonLat.getExteriorRing().getCoordinates(), geoByFrame);
+        LinearRing[] holes = new LinearRing[lonLat.getNumInteriorRing()];
+        for (int h = 0; h < holes.length; h++) {
+            holes[h] = toFrame(lonLat.getInteriorRingN(h).getCoordinates(), geoByFrame);
+        }
+        return METRES.createPolygon(shell, holes);
+    }
+
+    private LinearRing toFrame(Coordinate[] ring, Map<Coordinate, Coordinate> geoByFrame) {
+        double[] xy = new double[2];
+        Coordinate[] out = new Coordinate[ring.length];
+        for (int i = 0; i < ring.length; i++) {
+            frame.toFrame(ring[i].x, ring[i].y, xy);
+            out[i] = new Coordinate(xy[0], xy[1]);
+            geoByFrame.put(out[i], ring[i]);
+        }
+        out[ring.length - 1] = out[0];
+        return METRES.createLinearRing(out);
+    }
+
+    /** Frame coordinates back to lon/lat: exact input vertices where the piece kept them, else {@link AspectFrame#fromFrame}. */
+    private Polygon fromFrame(Polygon piece, Map<Coordinate, Coordinate> geoByFrame) {
+        LinearRing shell = fromFrame(piece.getExteriorRing().getCoordinates(), geoByFrame);
+        LinearRing[] holes = new LinearRing[piece.getNumInteriorRing()];
+        for (int h = 0; h < holes.length; h++) {
+            holes[h] = fromFrame(piece.getInteriorRingN(h).getCoordinates(), geoByFrame);
+        }
+        return METRES.createPolygon(shell, holes);
+    }
+
+    private LinearRing fromFrame(Coordinate[] ring, Map<Coordinate, Coordinate> geoByFrame) {
+        double[] lonLat = new double[2];
+        Coordinate[] out = new Coordinate[ring.length];
+        for (int i = 0; i < ring.length; i++) {
+            Coordinate geo = geoByFrame.get(ring[i]);
+            if (geo == null) {
+                frame.fromFrame(ring[i].x, ring[i].y, lonLat);
+                geo = new Coordinate(lonLat[0], lonLat[1]);
+            }
+            out[i] = geo;
+        }
+        out[ring.length - 1] = out[0];
+        return METRES.createLinearRing(out);
+    }
+
+    /** Projects each ring with one batch call; drops NaN points and repeated points; null when the shell collapses. */
+    private Polygon projectRings(Polygon lonLat) {
+        LinearRing shell = projectRing(lonLat.getExteriorRing().getCoordinateSequence());
+        if (shell == null) {
+            return null;
+        }
+        List<LinearRing> holes = new ArrayList<>();
+        for (int h = 0; h < lonLat.getNumInteriorRing(); h++) {
+            LinearRing hole = projectRing(lonLat.getInteriorRingN(h).getCoordinateSequence());
+            if (hole != null) {
+                holes.add(hole);
+            }
+        }
+        return METRES.createPolygon(shell, holes.toArray(new LinearRing[0]));
+    }
+
+    private LinearRing projectRing(CoordinateSequence ring) {
+        int n = ring.size();
+        double[] xy = new double[2 * n];
+        for (int i = 0; i < n; i++) {
+            xy[2 * i] = ring.getX(i);
+            xy[2 * i + 1] = ring.getY(i);
+        }
+        projection.forward(xy, 0, xy, 0, n);
+        int kept = 0;
+        for (int i = 0; i < n; i++) {
+            double x = xy[2 * i];
+            double y = xy[2 * i + 1];
+            boolean repeated = kept > 0 && x == xy[2 * kept - 2] && y == xy[2 * kept - 1];
+            if (Double.isFinite(x) && Double.isFinite(y) && !repeated) {
+                xy[2 * kept] = x;
+                xy[2 * kept + 1] = y;
+                kept++;
+            }
+        }
+        if (kept > 0 && (xy[0] != xy[2 * kept - 2] || xy[1] != xy[2 * kept - 1])) {
+            xy[2 * kept] = xy[0];
+            xy[2 * kept + 1] = xy[1];
+            kept++;
+        }
+        if (kept < 4) {
+            return null;
+        }
+        return METRES.createLinearRing(new PackedCoordinateSequence.Double(java.util.Arrays.copyOf(xy, 2 * kept), 2, 0));
+    }
+
+    private boolean probeContinuity() {
+        double[] east = new double[2];
+        double[] west = new double[2];
+        double span = frame.maxFrameLatDeg() - frame.minFrameLatDeg();
+        for (double fraction : new double[] {0.25, 0.5}) {
+            double lat = frame.minFrameLatDeg() + fraction * span;
+            frame.fromFrame(180 - 1e-6, lat, east);
+            frame.fromFrame(-180 + 1e-6, lat, west);
+            double[] xy = {east[0], east[1], west[0], west[1]};
+            projection.forward(xy, 0, xy, 0, 2);
+            if (!(Math.hypot(xy[0] - xy[2], xy[1] - xy[3]) < 10)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** The projected boundary of the frame's lowest latitude, every 0.25 deg of frame longitude, as a polygon. */
+    private Geometry domainBoundary() {
+        int n = 1440;
+        double[] xy = new double[2 * n + 2];
+        double[] lonLat = new double[2];
+        for (int i = 0; i < n; i++) {
+            frame.fromFrame(-180 + 360.0 * i / n, frame.minFrameLatDeg(), lonLat);
+            xy[2 * i] = lonLat[0];
+            xy[2 * i + 1] = lonLat[1];
+        }
+        projection.forward(xy, 0, xy, 0, n);
+        xy[2 * n] = xy[0];
+        xy[2 * n + 1] = xy[1];
+        CoordinateList ring = new CoordinateList();
+        for (int i = 0; i <= n; i++) {
+            ring.add(new Coordinate(xy[2 * i], xy[2 * i + 1]), false);
+        }
+        return METRES.createPolygon(ring.toCoordinateArray());
+    }
+}
