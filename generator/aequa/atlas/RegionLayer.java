@@ -10,7 +10,8 @@ import aequa.inputs.regions.Region;
  *
  * @param sourceId  the source's id in the project file
  * @param file      the file as the project names it
- * @param regions   the usable regions, in source order, RFC 7946 form (valid, counter-clockwise shells, cut at +-180)
+ * @param regions   the usable regions, in source order, RFC 7946 form (valid, counter-clockwise shells, cut at
+ *                  +-180), densified to {@code LonLatDensifier.MAX_STEP_DEG}
  * @param areaKm2ByKey geodesic area on WGS 84 of each region, by key
  */
 record RegionLayer(String sourceId, String file, List<Region> regions, Map<String, Double> areaKm2ByKey) {

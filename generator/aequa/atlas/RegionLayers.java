@@ -1,5 +1,6 @@
 package aequa.atlas;
 
+import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -7,6 +8,7 @@ import java.util.Map;
 
 import aequa.ellipsoid.CoverageChecks;
 import aequa.ellipsoid.GeodesicArea;
+import aequa.ellipsoid.LonLatDensifier;
 import aequa.ellipsoid.RegionValidator;
 import aequa.findings.Findings;
 import aequa.inputs.regions.Region;
@@ -33,12 +35,18 @@ final class RegionLayers {
     private RegionLayer load(String sourceId) {
         RegionSourceSpec spec = project.file().regions().get(sourceId);
         List<Region> read = RegionReaders.read(project.dir(), spec, findings);
-        List<Region> usable = RegionValidator.validate(read, spec.file(), findings);
-        CoverageChecks.report(usable, spec.file(), findings);
+        List<Region> valid = RegionValidator.validate(read, spec.file(), findings);
+        CoverageChecks.report(valid, spec.file(), findings);
+        List<Region> densified = new ArrayList<>(valid.size());
         Map<String, Double> areas = new LinkedHashMap<>();
-        for (Region region : usable) {
-            areas.put(region.key(), GeodesicArea.areaKm2(region.lonLat()));
+        for (Region region : valid) {
+            // GeoJSON edges are straight in lon/lat (RFC 7946, section 3.1.1); densified, the geodesic edges
+            // between vertices follow them, so the geodesic area is the area of the region as drawn
+            Region fine = new Region(region.key(), region.name(),
+                    LonLatDensifier.densify(region.lonLat(), LonLatDensifier.MAX_STEP_DEG));
+            densified.add(fine);
+            areas.put(region.key(), GeodesicArea.areaKm2(fine.lonLat()));
         }
-        return new RegionLayer(sourceId, spec.file(), usable, areas);
+        return new RegionLayer(sourceId, spec.file(), densified, areas);
     }
 }

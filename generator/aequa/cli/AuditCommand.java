@@ -4,6 +4,10 @@ import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
+import aequa.atlas.Atlas;
+import aequa.atlas.AtlasLoader;
+import aequa.atlas.LoadOptions;
+import aequa.atlas.MapModel;
 import aequa.findings.Findings;
 import aequa.project.LoadedProject;
 import aequa.project.ProjectLoader;
@@ -32,8 +36,14 @@ final class AuditCommand implements Callable<Integer> {
             FindingsPrinter.print(findings.list(), err, true);
             return ExitCode.USAGE.code;
         }
+        Atlas atlas = AtlasLoader.load(project.get(), LoadOptions.defaults(), findings);
         FindingsPrinter.print(findings.list(), err, true);
-        spec.commandLine().getOut().println("Audit of " + projectDir + ": " + FindingsPrinter.tally(findings.list()) + ".");
+        var out = spec.commandLine().getOut();
+        for (MapModel map : atlas.maps()) {
+            out.println(MapSummary.line(map));
+        }
+        out.println("Audit of " + projectDir + ": " + atlas.maps().size() + " of " + project.get().file().maps().size()
+                + " maps ready; " + FindingsPrinter.tally(findings.list()) + ".");
         return findings.hasErrors() ? ExitCode.DATA_PROBLEMS.code : ExitCode.OK.code;
     }
 }

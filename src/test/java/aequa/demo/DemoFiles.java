@@ -40,6 +40,7 @@ final class DemoFiles {
             }
             json.writeEndArray();
             json.writeEndObject();
+            json.flush();
             out.write('\n');
         }
     }

@@ -42,7 +42,7 @@ public final class DemoGenerator {
         Random random = new Random(SEED);
         InventedNames names = new InventedNames(SEED);
 
-        List<Geometry> world = InventedCells.tile(LocalPlane.sinusoidal(0.0), new Envelope(-180, 180, -90, 90), 620,
+        List<Geometry> world = InventedCells.tile(LocalPlane.lonLat(), new Envelope(-180, 180, -90, 90), 620,
                 DemoGenerator::worldLand, 2.0, random);
         world.addAll(IceShelf.cells(random));
         List<Place> worldZones = places("WZ", world, names);

@@ -75,6 +75,11 @@ final class AuthalicCylindricalProjection implements EqualAreaProjection {
     public AspectFrame frame() {
         return new AspectFrame() {
             @Override
+            public boolean hasCut() {
+                return true;
+            }
+
+            @Override
             public void toFrame(double lonDeg, double latDeg, double[] out) {
                 out[0] = Longitudes.normalize(lonDeg - lon0Deg);
                 out[1] = latDeg;

@@ -1,0 +1,118 @@
+package aequa.atlas;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+import org.locationtech.jts.geom.Geometry;
+
+import aequa.findings.Finding;
+import aequa.findings.Findings;
+import aequa.findings.Severity;
+import aequa.inputs.figures.FigureReaders;
+import aequa.inputs.figures.FigureTable;
+import aequa.inputs.regions.Region;
+import aequa.project.LoadedProject;
+import aequa.project.MapSpec;
+import aequa.project.ProjectFile;
+import aequa.projection.Footprint;
+import aequa.projection.ProjectionChoice;
+import aequa.projection.ProjectionChooser;
+import aequa.projection.ProjectionRequest;
+import aequa.statistics.MapFigures;
+import aequa.statistics.MapStatistics;
+import aequa.statistics.RegionArea;
+
+/**
+ * Builds the {@link MapModel} of each map. Geometry sources, statistics sources, projection choices and
+ * planar layers are computed once and shared by every map that uses the same ones.
+ */
+final class MapAssembler {
+
+    private final LoadedProject project;
+    private final LoadOptions options;
+    private final Findings findings;
+    private final RegionLayers layers;
+    private final Map<String, FigureTable> tables = new HashMap<>();
+    private final Map<String, Footprint> footprints = new HashMap<>();
+    private final Map<String, ProjectionChoice> choices = new HashMap<>();
+    private final Map<String, PlanarLayer> planarLayers = new HashMap<>();
+
+    MapAssembler(LoadedProject project, LoadOptions options, Findings findings) {
+        this.project = project;
+        this.options = options;
+        this.findings = findings;
+        this.layers = new RegionLayers(project, findings);
+    }
+
+    Optional<MapModel> assemble(int mapIndex, MapSpec map) {
+        RegionLayer layer = layers.get(map.regions());
+        if (layer.regions().isEmpty()) {
+            findings.add(Finding.error("map-no-regions", layer.file(), "", "Map '" + map.id() + "' has no usable regions.",
+                    "See the findings above for why each feature was left out."));
+            return Optional.empty();
+        }
+        FigureTable table = tables.computeIfAbsent(map.figures(),
+                id -> FigureReaders.read(project.dir(), project.file().figures().get(id), findings));
+        List<RegionArea> areas = layer.regions().stream()
+                .map(r -> new RegionArea(r.key(), layer.areaKm2ByKey().get(r.key()))).toList();
+        int before = findings.list().size();
+        MapFigures figures = MapStatistics.compute(map, table, areas, project.file().checks(), findings);
+        List<String> notices = readerNotices(findings.list().subList(before, findings.list().size()));
+
+        Optional<ProjectionRequest> request = ProjectionRequests.of(project, mapIndex, map,
+                Optional.ofNullable(options.previousProjections().get(map.id())), findings);
+        if (request.isEmpty()) {
+            return Optional.empty();
+        }
+        Footprint footprint = footprints.computeIfAbsent(layer.sourceId(),
+                id -> Footprint.of(layer.regions().stream().map(Region::lonLat).toList()));
+        ProjectionChoice choice;
+        try {
+            choice = choices.computeIfAbsent(layer.sourceId() + "|" + request.get(),
+                    key -> ProjectionChooser.choose(footprint, request.get()));
+        } catch (IllegalArgumentException e) {
+            findings.add(Finding.error("projection-parameters-invalid", ProjectFile.FILE_NAME,
+                    project.places().place("/maps/" + mapIndex + "/projection"),
+                    "The projection settings of map '" + map.id() + "' cannot be used: " + e.getMessage(),
+                    "Remove the forced parameters to let aequa choose, or see 'aequa explain' for valid values."));
+            return Optional.empty();
+        }
+        PlanarLayer planar = planarLayers.computeIfAbsent(layer.sourceId() + "|" + choice.projection().wkt2(),
+                key -> PlanarLayer.of(layer, choice.projection(), footprint, project.file().checks().areaTolerance()));
+        if (!planar.audit().passed()) {
+            findings.add(Finding.error("area-audit-failed", layer.file(), "feature \"" + planar.audit().worstKey() + "\"",
+                    String.format(java.util.Locale.ROOT, "On map '%s' the drawn area differs from the true area by %.2e, more than the allowed %.1e.",
+                            map.id(), planar.audit().maxRelativeError(), planar.audit().tolerance()),
+                    "This region's outline is probably broken (see findings above); the threshold is 'checks: area-tolerance'."));
+        }
+        boolean circles = "circles".equals(map.display());
+        Optional<ClassedFigures> classed = ClassedFigures.of(map, "/maps/" + mapIndex, figures, options.pageBackground(),
+                circles, findings);
+        if (classed.isEmpty()) {
+            return Optional.empty();
+        }
+        List<MapRegion> regions = new ArrayList<>();
+        for (Region region : layer.regions()) {
+            Geometry drawn = planar.simplifiedM().get(region.key());
+            regions.add(new MapRegion(region.key(), region.name(), layer.areaKm2ByKey().get(region.key()),
+                    planar.mapAreaRatio().get(region.key()), drawn, classed.get().values(figures.figures(region.key()))));
+        }
+        regions.sort(Comparator.comparing(MapRegion::key));
+        List<String> allNotices = new ArrayList<>(notices);
+        allNotices.addAll(planar.droppedIslands());
+        return Optional.of(new MapModel(map, figures.periods(), choice, regions, classed.get().classification(),
+                classed.get().ramp(), planar.audit(), allNotices));
+    }
+
+    /** The warnings of the join a reader of the map should also see (missing figures and the like). */
+    private static List<String> readerNotices(List<Finding> joinFindings) {
+        return joinFindings.stream()
+                .filter(f -> f.severity() == Severity.WARNING && f.code().startsWith("join-"))
+                .map(Finding::message)
+                .toList();
+    }
+}

@@ -1,0 +1,19 @@
+package aequa.cli;
+
+import java.util.Locale;
+
+import aequa.atlas.MapModel;
+
+/** One line per map for the terminal: projection, distortion, area proof and classes. */
+final class MapSummary {
+
+    private MapSummary() {
+    }
+
+    static String line(MapModel map) {
+        return String.format(Locale.ROOT, "  %-22s %-34s omega max %5.1f deg, mean %4.1f deg; area error %.1e; %d regions, %s %d classes",
+                map.id(), map.projection().projection().family().displayName(), map.projection().omegaMaxDeg(),
+                map.projection().omegaMeanDeg(), map.areaAudit().maxRelativeError(), map.regions().size(),
+                map.classification().method().configName(), map.classification().classCount());
+    }
+}
