@@ -31,7 +31,8 @@ import aequa.projection.ProjectionParameter;
  * {@code maps}, {@code findings}, {@code changes}. Per map: id, title, unit, asOf, periods, source, files,
  * projection (family, name, parameters, wkt2, omegaMaxDeg, omegaMeanDeg, worst point, reason, runnersUp),
  * areaAudit (maxRelativeError, worstKey, tolerance, passed), classification (method, breaks = the class
- * limits, counts), colours, notices and regions. Per region: key, name, geodesicAreaKm2, mapAreaRatio, the
+ * limits, counts), colours, notices and regions. Per region: key, name, geodesicAreaKm2, mapAreaRatio, drawn
+ * (false when simplification left no shape to draw), the
  * latest period's period, status, value, normalisedValue, class, unreliable and marginOfError, then the
  * same for every period under {@code periods}. Classes count from 1 (the lowest), as on the pages;
  * {@code class} is null when there is nothing to classify. NaN is written as null.
@@ -174,6 +175,7 @@ final class SiteReport {
         node.put("name", region.name());
         number(node, "geodesicAreaKm2", region.geodesicAreaKm2());
         number(node, "mapAreaRatio", region.mapAreaRatio());
+        node.put("drawn", !region.planarM().isEmpty());
         int count = Math.min(periods.size(), region.values().size());
         if (count > 0) {
             figure(node, periods.get(count - 1), region.values().get(count - 1));
