@@ -13,8 +13,8 @@ public interface PublishProgress {
     enum Stage {
         PREPARE("reading the previous edition"),
         MAPS("drawing maps"),
-        PAGES("writing pages"),
         REPORT("writing report.json"),
+        PAGES("writing pages"),
         SWAP("publishing");
 
         private final String label;

@@ -16,7 +16,8 @@ import java.util.Locale;
  * @param filesWritten  files written new
  * @param filesKept     files carried over unchanged from the previous edition (same bytes and mtime)
  * @param filesRemoved  files of the previous edition that the new one no longer has
- * @param changedMaps   maps listed on the changes page (added, removed or changed)
+ * @param changedMaps   maps listed on the changes page (added, removed or changed); -1 when the report was
+ *                      carried over unchanged from the previous edition
  * @param elapsed       wall time of the publish, for the terminal only
  */
 public record PublishResult(Path outDir, boolean replaced, List<String> mapsDrawn, List<String> mapsReused,

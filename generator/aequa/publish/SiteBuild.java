@@ -64,7 +64,6 @@ final class SiteBuild {
                     + " (?no_esc, noautoesc, auto_esc=false or outputformat). Remove it: aequa escapes all data.");
         }
         previous = OutputManifest.read(out, json);
-        Optional<JsonNode> previousReport = SiteReport.readPrevious(out, json);
         List<String> ids = atlas.maps().stream().map(MapModel::id).toList();
         List<MapFiles> files = SafePaths.distinctFileSafeIds(ids).stream().map(MapFiles::of).toList();
         byte[] themeCss = ThemeStyles.find(atlas.projectDir(), atlas.project().site().theme());
@@ -75,24 +74,36 @@ final class SiteBuild {
         try (StagingFolder folder = StagingFolder.create(out)) {
             staging = folder;
             int count = atlas.maps().size();
+            Sha256 edition = new Sha256();
             for (int i = 0; i < count; i++) {
                 progress.step(Stage.MAPS, i, count);
-                buildMap(atlas.maps().get(i), files.get(i), renderer, site, siteHash);
+                String fingerprint = MapFingerprint.of(atlas.maps().get(i));
+                edition.add(files.get(i).fileId()).add(fingerprint);
+                buildMap(atlas.maps().get(i), fingerprint, files.get(i), renderer, site, siteHash);
             }
             progress.step(Stage.MAPS, count, count);
 
             progress.step(Stage.REPORT, 0, 1);
-            ArrayNode maps = SiteReport.maps(atlas, files, json);
-            String digest = SiteReport.digest(maps, json);
-            JsonNode changes = EditionChanges.compare(previousReport, maps, digest, json);
-            String pagesHash = new Sha256().add(siteHash).add(digest).hex();
-            put(SiteReport.FILE_NAME, SiteReport.write(atlas, maps, digest, findings, changes, json), pagesHash);
-            progress.step(Stage.REPORT, 1, 1);
-
-            progress.step(Stage.PAGES, 0, 1);
-            put("index.html", utf8(renderer.renderIndex(site, SiteViews.index(atlas, files))), pagesHash);
-            put("method.html", utf8(renderer.renderMethod(site, SiteViews.method(atlas, files))), pagesHash);
-            put("changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files))), pagesHash);
+            String digest = edition.hex();
+            String pagesHash = new Sha256().add(siteHash).add(digest).add(findings.toString()).hex();
+            List<String> sitePages = List.of(SiteReport.FILE_NAME, "index.html", "method.html", "changes.html");
+            int changedMaps;
+            if (reusable(sitePages, pagesHash)) {
+                sitePages.forEach(path -> carryOver(path, pagesHash));
+                changedMaps = -1;
+                progress.step(Stage.REPORT, 1, 1);
+            } else {
+                ArrayNode maps = SiteReport.maps(atlas, files, json);
+                Optional<JsonNode> previousReport = SiteReport.readPrevious(out, json);
+                JsonNode changes = EditionChanges.compare(previousReport, maps, digest, json);
+                changedMaps = changes.path("maps").size();
+                put(SiteReport.FILE_NAME, SiteReport.write(atlas, maps, digest, findings, changes, json), pagesHash);
+                progress.step(Stage.REPORT, 1, 1);
+                progress.step(Stage.PAGES, 0, 1);
+                put("index.html", utf8(renderer.renderIndex(site, SiteViews.index(atlas, files))), pagesHash);
+                put("method.html", utf8(renderer.renderMethod(site, SiteViews.method(atlas, files))), pagesHash);
+                put("changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files))), pagesHash);
+            }
             for (String asset : PageRenderer.ASSET_NAMES) {
                 put(asset, renderer.source(asset), siteHash);
             }
@@ -112,15 +123,14 @@ final class SiteBuild {
                 staging.commit();
             }
             progress.step(Stage.SWAP, 1, 1);
-            int changedMaps = changes.path("maps").size();
             return new PublishResult(out, !unchanged, mapsDrawn, mapsReused, written, kept, removed, changedMaps,
                     Duration.ofNanos(System.nanoTime() - startNanos));
         }
     }
 
-    private void buildMap(MapModel map, MapFiles files, PageRenderer renderer, SiteView site, String siteHash)
-            throws IOException {
-        String drawHash = new Sha256().add(MapFingerprint.of(map)).add(artwork.fingerprint())
+    private void buildMap(MapModel map, String fingerprint, MapFiles files, PageRenderer renderer, SiteView site,
+                          String siteHash) throws IOException {
+        String drawHash = new Sha256().add(fingerprint).add(artwork.fingerprint())
                 .add(Integer.toString(options.pngWidthPx())).hex();
         String pageHash = new Sha256().add(drawHash).add(siteHash).hex();
         String webSvg = null;

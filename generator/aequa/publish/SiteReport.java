@@ -1,15 +1,12 @@
 package aequa.publish;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
-import com.fasterxml.jackson.core.util.DefaultIndenter;
-import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -37,7 +34,7 @@ import aequa.projection.ProjectionParameter;
  * same for every period under {@code periods}. Classes count from 1 (the lowest), as on the pages;
  * {@code class} is null when there is nothing to classify. NaN is written as null.
  *
- * <p>Deterministic: no time stamps or timings, fixed key order, '\n' line ends, numbers by Jackson's
+ * <p>Deterministic: no time stamps or timings, fixed key order, compact with one final '\n', numbers by Jackson's
  * shortest round-trip form of each double.
  */
 final class SiteReport {
@@ -48,15 +45,12 @@ final class SiteReport {
     private SiteReport() {
     }
 
-    /** Jackson set up for byte-stable output: two-space indent and '\n' whatever the platform. */
+    /**
+     * Jackson set up for byte-stable output. Compact (no indentation): a report of 15,000 regions is about
+     * a third of the size and written several times faster; use a JSON viewer or {@code jq} to read it.
+     */
     static ObjectMapper jsonMapper() {
-        DefaultPrettyPrinter printer = new DefaultPrettyPrinter()
-                .withObjectIndenter(new DefaultIndenter("  ", "\n"))
-                .withArrayIndenter(new DefaultIndenter("  ", "\n"));
-        ObjectMapper mapper = new ObjectMapper();
-        mapper.setDefaultPrettyPrinter(printer);
-        mapper.enable(com.fasterxml.jackson.databind.SerializationFeature.INDENT_OUTPUT);
-        return mapper;
+        return new ObjectMapper();
     }
 
     /** The previous edition's report, if the output folder has a readable one. */
@@ -81,10 +75,6 @@ final class SiteReport {
         return maps;
     }
 
-    static String digest(ArrayNode maps, ObjectMapper json) throws IOException {
-        return Sha256.of(json.writeValueAsBytes(maps));
-    }
-
     static byte[] write(Atlas atlas, ArrayNode maps, String digest, List<Finding> findings, JsonNode changes,
                         ObjectMapper json) throws IOException {
         ObjectNode root = json.createObjectNode();
@@ -101,7 +91,10 @@ final class SiteReport {
                     .put("file", f.file()).put("place", f.place()).put("message", f.message()).put("hint", f.hint());
         }
         root.set("changes", changes);
-        return (json.writeValueAsString(root) + "\n").getBytes(StandardCharsets.UTF_8);
+        byte[] body = json.writeValueAsBytes(root);
+        byte[] file = java.util.Arrays.copyOf(body, body.length + 1);
+        file[body.length] = '\n';
+        return file;
     }
 
     private static ObjectNode map(MapModel map, MapFiles files, ObjectMapper json) {

@@ -139,4 +139,24 @@ class SitePublisherTest {
         assertEquals(List.of("map-a"), result.mapsDrawn());
         assertArrayEquals(png, Files.readAllBytes(out.resolve("maps/map-a/map-a.png")));
     }
+
+    @Test
+    void progressReachesEveryStageAndIsQuietWithoutATerminal() throws IOException {
+        List<PublishProgress.Stage> finished = new java.util.ArrayList<>();
+        PublishOptions options = PublishOptions.defaults()
+                .withProgress((stage, done, total) -> {
+                    if (done == total) {
+                        finished.add(stage);
+                    }
+                });
+        SitePublisher.publish(atlas(2), new FakeArtwork(), tmp.resolve("site"), options);
+        assertEquals(List.of(PublishProgress.Stage.values()), finished.stream().distinct().toList());
+
+        java.io.ByteArrayOutputStream terminal = new java.io.ByteArrayOutputStream();
+        // surefire runs tests without a console, like cron: the terminal progress must print nothing
+        assertEquals(null, System.console());
+        SitePublisher.publish(atlas(2), new FakeArtwork(), tmp.resolve("other"),
+                PublishOptions.defaults().withProgress(PublishProgress.forTerminal(new java.io.PrintStream(terminal))));
+        assertEquals(0, terminal.size());
+    }
 }
