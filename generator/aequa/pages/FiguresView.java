@@ -1,0 +1,45 @@
+package aequa.pages;
+
+import java.util.List;
+
+/**
+ * A map's figures as a table that needs no JavaScript. All numbers are already formatted for readers.
+ *
+ * @param id         the map's file-safe id
+ * @param title      the map's title
+ * @param unit       the unit of the normalised value
+ * @param periods    the periods, oldest first; each row has one cell per period
+ * @param rows       one row per region, sorted by key
+ * @param mapHref    link back to the map's page, relative to this page
+ * @param csvHref    link to the CSV download, relative to this page
+ */
+public record FiguresView(String id, String title, String unit, List<String> periods, List<Row> rows,
+                          String mapHref, String csvHref) {
+
+    public FiguresView {
+        periods = List.copyOf(periods);
+        rows = List.copyOf(rows);
+    }
+
+    /**
+     * @param key     the join key
+     * @param name    the region's name
+     * @param areaKm2 the geodesic area, formatted
+     * @param cells   one per period
+     */
+    public record Row(String key, String name, String areaKm2, List<Cell> cells) {
+        public Row {
+            cells = List.copyOf(cells);
+        }
+    }
+
+    /**
+     * @param status      {@code reported}, {@code zero}, {@code no data}, {@code suppressed} or {@code not applicable}
+     * @param value       the figure as given, formatted, or empty unless reported
+     * @param normalised  the value mapped, formatted, or empty unless reported
+     * @param classNumber the class, 1 = lowest, or empty
+     * @param unreliable  whether the figure rests on too few events or too wide a margin
+     */
+    public record Cell(String status, String value, String normalised, String classNumber, boolean unreliable) {
+    }
+}

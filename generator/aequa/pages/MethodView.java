@@ -1,0 +1,49 @@
+package aequa.pages;
+
+import java.util.List;
+
+/**
+ * The methodology page, written from the choices actually made for each map. Numbers are formatted.
+ *
+ * @param maps one section per map, in project-file order
+ */
+public record MethodView(List<MapMethod> maps) {
+
+    public MethodView {
+        maps = List.copyOf(maps);
+    }
+
+    /**
+     * @param id               the map's file-safe id
+     * @param title            the map's title
+     * @param projectionName   the projection family's display name
+     * @param reason           why it was chosen
+     * @param parameters       its parameters as "name: value unit"
+     * @param omegaMaxDeg      largest angular distortion over the data, formatted
+     * @param omegaMeanDeg     area-weighted mean angular distortion, formatted
+     * @param runnersUp        the best other candidates, as "name (max omega)"
+     * @param areaErrorPercent the largest relative area error found by the audit, in percent, formatted
+     * @param areaWorstKey     the region where it occurs
+     * @param areaTolerancePercent the tolerance, in percent, formatted
+     * @param areaPassed       whether the audit passed
+     * @param classMethod      the classification method's name
+     * @param limits           the class limits, formatted, ascending
+     * @param counts           regions per class
+     * @param normalisation    a sentence saying what the value was divided by
+     * @param source           the credit for the figures
+     * @param asOf             the date the figures refer to
+     * @param mapHref          link to the map's page, relative to the site root
+     */
+    public record MapMethod(String id, String title, String projectionName, String reason, List<String> parameters,
+                            String omegaMaxDeg, String omegaMeanDeg, List<String> runnersUp, String areaErrorPercent,
+                            String areaWorstKey, String areaTolerancePercent, boolean areaPassed, String classMethod,
+                            List<String> limits, List<Integer> counts, String normalisation, String source,
+                            String asOf, String mapHref) {
+        public MapMethod {
+            parameters = List.copyOf(parameters);
+            runnersUp = List.copyOf(runnersUp);
+            limits = List.copyOf(limits);
+            counts = List.copyOf(counts);
+        }
+    }
+}

@@ -1,0 +1,140 @@
+package aequa.publish;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Optional;
+import java.util.TreeSet;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+/**
+ * The {@code changes} section of report.json: what differs from the previous edition whose figures were
+ * different, compared map by map (matched on id) from the two reports' {@code maps} sections.
+ *
+ * <p>Per map it lists: the date of the figures, a projection change (family or parameters), class limits
+ * that moved, regions whose class (in the latest period) changed, and regions added or removed. Maps
+ * without change are counted, not listed. When the figures are identical to the previous edition
+ * ({@code editionDigest} equal), the previous comparison is carried over unchanged, so republishing the same
+ * inputs gives the same bytes and the page keeps showing what the last real update changed.
+ */
+final class EditionChanges {
+
+    private EditionChanges() {
+    }
+
+    static JsonNode compare(Optional<JsonNode> previous, ArrayNode maps, String digest, ObjectMapper json) {
+        if (previous.isPresent() && digest.equals(previous.get().path("editionDigest").asText())
+                && previous.get().path("changes").isObject()) {
+            return previous.get().get("changes").deepCopy();
+        }
+        ObjectNode changes = json.createObjectNode();
+        if (previous.isEmpty()) {
+            changes.putNull("comparedWith");
+            changes.putArray("maps");
+            changes.put("unchangedMaps", 0);
+            return changes;
+        }
+        JsonNode before = previous.get();
+        ObjectNode comparedWith = changes.putObject("comparedWith");
+        comparedWith.put("editionDigest", before.path("editionDigest").asText());
+        TreeSet<String> asOf = new TreeSet<>();
+        before.path("maps").forEach(m -> asOf.add(m.path("asOf").asText()));
+        asOf.forEach(comparedWith.putArray("asOf")::add);
+
+        Map<String, JsonNode> old = byId(before.path("maps"));
+        Map<String, JsonNode> now = byId(maps);
+        ArrayNode listed = changes.putArray("maps");
+        int unchanged = 0;
+        for (Map.Entry<String, JsonNode> entry : now.entrySet()) {
+            JsonNode was = old.get(entry.getKey());
+            if (was == null) {
+                listed.addObject().put("id", entry.getKey()).put("title", entry.getValue().path("title").asText())
+                        .put("state", "added");
+                continue;
+            }
+            ObjectNode diff = mapDiff(was, entry.getValue(), json);
+            if (diff == null) {
+                unchanged++;
+            } else {
+                listed.add(diff);
+            }
+        }
+        for (Map.Entry<String, JsonNode> entry : old.entrySet()) {
+            if (!now.containsKey(entry.getKey())) {
+                listed.addObject().put("id", entry.getKey()).put("title", entry.getValue().path("title").asText())
+                        .put("state", "removed");
+            }
+        }
+        changes.put("unchangedMaps", unchanged);
+        return changes;
+    }
+
+    /** The differences of one map, or null when there are none worth reporting. */
+    private static ObjectNode mapDiff(JsonNode was, JsonNode now, ObjectMapper json) {
+        ObjectNode diff = json.createObjectNode();
+        diff.put("id", now.path("id").asText()).put("title", now.path("title").asText()).put("state", "changed");
+        boolean any = false;
+        if (!was.path("asOf").equals(now.path("asOf"))) {
+            diff.putObject("asOf").put("from", was.path("asOf").asText()).put("to", now.path("asOf").asText());
+            any = true;
+        }
+        JsonNode projWas = projectionKey(was.path("projection"), json);
+        JsonNode projNow = projectionKey(now.path("projection"), json);
+        if (!projWas.equals(projNow)) {
+            ObjectNode p = diff.putObject("projection");
+            p.set("from", projWas);
+            p.set("to", projNow);
+            any = true;
+        }
+        JsonNode breaksWas = was.path("classification").path("breaks");
+        JsonNode breaksNow = now.path("classification").path("breaks");
+        if (!breaksWas.equals(breaksNow)) {
+            ObjectNode b = diff.putObject("breaks");
+            b.set("from", breaksWas.deepCopy());
+            b.set("to", breaksNow.deepCopy());
+            any = true;
+        }
+        Map<String, JsonNode> regionsWas = byKey(was.path("regions"));
+        Map<String, JsonNode> regionsNow = byKey(now.path("regions"));
+        ArrayNode classChanged = diff.putArray("classChanged");
+        ArrayNode added = diff.putArray("regionsAdded");
+        ArrayNode removed = diff.putArray("regionsRemoved");
+        for (Map.Entry<String, JsonNode> r : regionsNow.entrySet()) {
+            JsonNode before = regionsWas.get(r.getKey());
+            if (before == null) {
+                added.add(r.getKey());
+            } else if (!before.path("class").equals(r.getValue().path("class"))) {
+                ObjectNode c = classChanged.addObject().put("key", r.getKey()).put("name", r.getValue().path("name").asText());
+                c.set("from", before.path("class").deepCopy());
+                c.set("to", r.getValue().path("class").deepCopy());
+            }
+        }
+        regionsWas.keySet().stream().filter(k -> !regionsNow.containsKey(k)).forEach(removed::add);
+        any |= classChanged.size() + added.size() + removed.size() > 0;
+        return any ? diff : null;
+    }
+
+    private static JsonNode projectionKey(JsonNode projection, ObjectMapper json) {
+        ObjectNode key = json.createObjectNode();
+        key.put("family", projection.path("family").asText());
+        ArrayNode params = key.putArray("parameters");
+        projection.path("parameters").forEach(p -> params.addObject().put("key", p.path("key").asText())
+                .set("value", p.path("value").deepCopy()));
+        return key;
+    }
+
+    private static Map<String, JsonNode> byId(JsonNode maps) {
+        Map<String, JsonNode> out = new LinkedHashMap<>();
+        maps.forEach(m -> out.put(m.path("id").asText(), m));
+        return out;
+    }
+
+    private static Map<String, JsonNode> byKey(JsonNode regions) {
+        Map<String, JsonNode> out = new LinkedHashMap<>();
+        regions.forEach(r -> out.put(r.path("key").asText(), r));
+        return out;
+    }
+}

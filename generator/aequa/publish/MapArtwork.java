@@ -1,0 +1,34 @@
+package aequa.publish;
+
+import aequa.atlas.MapModel;
+
+/**
+ * What publishing needs from the drawing stage: the pictures of one map. The publisher asks for them only
+ * when the map's inputs changed since the last publish (see {@link #fingerprint()}), so an implementation
+ * may be slow.
+ *
+ * <p>Contract: {@link #webSvg} returns one {@code <svg>} element (UTF-8 text, no XML declaration, no
+ * scripts) with a {@code viewBox}, role/aria labelling, a legend and a caption inside, and one element
+ * with {@code id="r-KEY"} per drawn region. Every piece of user text in it must already be XML-escaped:
+ * the page inserts it as trusted markup. Implementations must be deterministic (same model, same bytes)
+ * and may be called from one thread at a time.
+ */
+public interface MapArtwork {
+
+    /** The map for the web page, inlined in the map's HTML page. */
+    String webSvg(MapModel map);
+
+    /** The print-ready SVG file, offered as a download. */
+    byte[] printSvg(MapModel map);
+
+    /** A PNG of the map {@code widthPx} pixels wide, used as download and as the thumbnail on the index. */
+    byte[] png(MapModel map, int widthPx);
+
+    /**
+     * Identifies the drawing code and theme. When it changes every map is redrawn; return, for example, the
+     * aequa version plus a hash of the theme file. The default (empty) means "depends on the model only".
+     */
+    default String fingerprint() {
+        return "";
+    }
+}

@@ -1,0 +1,26 @@
+package aequa.publish;
+
+import java.util.List;
+
+/**
+ * Where one map's files go, relative to the output root ('/'-separated). All names derive from the map's
+ * file-safe id ({@link SafePaths#fileSafeId}), never from raw user text.
+ */
+record MapFiles(String fileId, String page, String figures, String printSvg, String webSvg, String png, String csv) {
+
+    static MapFiles of(String fileId) {
+        String dir = "maps/" + fileId + "/";
+        return new MapFiles(fileId, dir + "index.html", dir + "figures.html", dir + fileId + ".svg",
+                dir + fileId + "-web.svg", dir + fileId + ".png", dir + fileId + ".csv");
+    }
+
+    /** The files the drawing stage makes. */
+    List<String> drawn() {
+        return List.of(webSvg, printSvg, png);
+    }
+
+    /** The files made from the model and templates, without drawing. */
+    List<String> written() {
+        return List.of(page, figures, csv);
+    }
+}

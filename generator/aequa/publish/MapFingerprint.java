@@ -1,0 +1,85 @@
+package aequa.publish;
+
+import java.io.BufferedOutputStream;
+import java.io.DataOutputStream;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.security.DigestOutputStream;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+
+import org.locationtech.jts.io.WKBWriter;
+
+import aequa.atlas.MapModel;
+import aequa.atlas.MapRegion;
+import aequa.atlas.RegionValue;
+import aequa.projection.EqualAreaProjection;
+
+/**
+ * The SHA-256 of everything in a {@link MapModel} that can change its pictures or pages, so an unchanged
+ * map is recognised without drawing it. Doubles enter as their exact bits, geometry as WKB (OGC Simple
+ * Features well-known binary, exact to the bit), text as length-prefixed UTF-8; all through one buffered
+ * stream, because a map of thousands of regions must hash in milliseconds for the no-change rebuild to stay
+ * cheap. Small nested records (spec, classification, ramp, audit) enter through their {@code toString},
+ * which prints doubles exactly ({@link Double#toString(double)} round-trips).
+ */
+final class MapFingerprint {
+
+    private MapFingerprint() {
+    }
+
+    static String of(MapModel map) {
+        MessageDigest sha;
+        try {
+            sha = MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("this Java has no SHA-256", e);
+        }
+        try (DataOutputStream out = new DataOutputStream(new BufferedOutputStream(
+                new DigestOutputStream(OutputStream.nullOutputStream(), sha), 1 << 16))) {
+            text(out, map.spec().toString());
+            text(out, map.periods().toString());
+            EqualAreaProjection projection = map.projection().projection();
+            text(out, projection.family().configName());
+            text(out, projection.parameters().toString());
+            text(out, projection.wkt2());
+            out.writeDouble(map.projection().omegaMaxDeg());
+            out.writeDouble(map.projection().omegaMeanDeg());
+            text(out, map.projection().runnersUp().toString());
+            text(out, map.projection().reason());
+            text(out, map.classification().toString());
+            text(out, map.ramp().toString());
+            text(out, map.areaAudit().toString());
+            text(out, map.notices().toString());
+            WKBWriter wkb = new WKBWriter(2);
+            for (MapRegion region : map.regions()) {
+                text(out, region.key());
+                text(out, region.name());
+                out.writeDouble(region.geodesicAreaKm2());
+                out.writeDouble(region.mapAreaRatio());
+                out.writeInt(region.values().size());
+                for (RegionValue v : region.values()) {
+                    out.writeInt(v.status().ordinal());
+                    out.writeDouble(v.value());
+                    out.writeDouble(v.normalisedValue());
+                    out.writeDouble(v.marginOfError());
+                    out.writeBoolean(v.unreliable());
+                    out.writeInt(v.classIndex());
+                }
+                wkb.write(region.planarM(), (buf, len) -> out.write(buf, 0, len));
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("hashing in memory failed", e);
+        }
+        return HexFormat.of().formatHex(sha.digest());
+    }
+
+    private static void text(DataOutputStream out, String s) throws IOException {
+        byte[] bytes = s.getBytes(StandardCharsets.UTF_8);
+        out.writeInt(bytes.length);
+        out.write(bytes);
+    }
+}

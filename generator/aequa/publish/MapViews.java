@@ -1,0 +1,144 @@
+package aequa.publish;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.stream.Collectors;
+
+import aequa.atlas.MapModel;
+import aequa.atlas.MapRegion;
+import aequa.atlas.RegionValue;
+import aequa.classes.ClassMethod;
+import aequa.classes.Classification;
+import aequa.pages.FiguresView;
+import aequa.pages.IndexView;
+import aequa.pages.MapPageView;
+import aequa.pages.NumberText;
+import aequa.projection.ProjectionParameter;
+import aequa.statistics.FigureStatus;
+
+/** Turns one {@link MapModel} into the views of its card, page and figures table. */
+final class MapViews {
+
+    private MapViews() {
+    }
+
+    static IndexView.Card card(MapModel map, MapFiles files) {
+        return new IndexView.Card(map.spec().title(), map.spec().asOf(), map.spec().unit(), files.page(), files.png(),
+                "Small map: " + map.spec().title());
+    }
+
+    static MapPageView page(MapModel map, MapFiles files, String webSvg) {
+        List<MapPageView.Download> downloads = List.of(
+                new MapPageView.Download("Map for print (SVG)", fileName(files.printSvg()), "image/svg+xml"),
+                new MapPageView.Download("Map as picture (PNG)", fileName(files.png()), "image/png"),
+                new MapPageView.Download("Figures shown (CSV)", fileName(files.csv()), "text/csv"));
+        return new MapPageView(files.fileId(), map.spec().title(), map.spec().unit(), map.spec().asOf(), caption(map),
+                summary(map), webSvg, map.spec().notes(), map.spec().source(), map.notices(), legend(map), downloads,
+                fileName(files.figures()));
+    }
+
+    static FiguresView figures(MapModel map, MapFiles files) {
+        List<FiguresView.Row> rows = new ArrayList<>();
+        for (MapRegion region : map.regions()) {
+            List<FiguresView.Cell> cells = new ArrayList<>();
+            for (int p = 0; p < map.periods().size(); p++) {
+                RegionValue v = p < region.values().size() ? region.values().get(p) : RegionValue.noData();
+                boolean reported = v.status() == FigureStatus.REPORTED;
+                cells.add(new FiguresView.Cell(FiguresCsv.statusText(v), reported ? NumberText.of(v.value()) : "",
+                        reported ? NumberText.of(v.normalisedValue()) : "",
+                        v.classIndex() < 0 ? "" : Integer.toString(v.classIndex() + 1), v.unreliable()));
+            }
+            rows.add(new FiguresView.Row(region.key(), region.name(), NumberText.of(region.geodesicAreaKm2()), cells));
+        }
+        return new FiguresView(files.fileId(), map.spec().title(), map.spec().unit(), map.periods(), rows,
+                fileName(files.page()), fileName(files.csv()));
+    }
+
+    /** "Lambert azimuthal equal-area projection (...) of the WGS 84 ellipsoid; figures: SOURCE, DATE." */
+    static String caption(MapModel map) {
+        StringBuilder text = new StringBuilder(map.projection().projection().family().displayName())
+                .append(" projection");
+        String params = map.projection().projection().parameters().stream().map(MapViews::parameterText)
+                .collect(Collectors.joining(", "));
+        if (!params.isEmpty()) {
+            text.append(" (").append(params).append(')');
+        }
+        text.append(" on the WGS 84 ellipsoid; areas are true to within ")
+                .append(percent(map.areaAudit().maxRelativeError())).append(" %.");
+        if (!map.spec().source().isEmpty()) {
+            text.append(" Figures: ").append(map.spec().source());
+            text.append(map.spec().asOf().isEmpty() ? "." : ", " + map.spec().asOf() + ".");
+        } else if (!map.spec().asOf().isEmpty()) {
+            text.append(" Figures for ").append(map.spec().asOf()).append('.');
+        }
+        return text.toString();
+    }
+
+    static String parameterText(ProjectionParameter p) {
+        String unit = "deg".equals(p.unit()) ? "°" : " " + p.unit();
+        return p.name() + " " + NumberText.of(p.value()) + unit;
+    }
+
+    static String percent(double relative) {
+        return relative < 1e-4 ? NumberText.of(relative * 100) : NumberText.fixed(relative * 100, 3);
+    }
+
+    /** The text alternative: what the map shows, in how many classes, and its extremes (latest period). */
+    static String summary(MapModel map) {
+        int latest = map.periods().size() - 1;
+        List<MapRegion> reported = map.regions().stream()
+                .filter(r -> latest >= 0 && latest < r.values().size()
+                        && r.values().get(latest).status() == FigureStatus.REPORTED)
+                .sorted(Comparator.comparingDouble((MapRegion r) -> r.values().get(latest).normalisedValue())
+                        .thenComparing(MapRegion::key))
+                .collect(Collectors.toList());
+        StringBuilder text = new StringBuilder(String.format(Locale.ROOT, "Map of %d regions", map.regions().size()));
+        if (!map.spec().unit().isEmpty()) {
+            text.append(" coloured by ").append(map.spec().unit());
+        }
+        if (map.classification().method() != ClassMethod.UNCLASSED) {
+            text.append(" in ").append(map.classification().classCount()).append(" classes");
+        }
+        if (map.periods().size() > 1) {
+            text.append(", one small map per period from ").append(map.periods().get(0)).append(" to ")
+                    .append(map.periods().get(latest));
+        }
+        text.append('.');
+        if (!reported.isEmpty()) {
+            MapRegion low = reported.get(0);
+            MapRegion high = reported.get(reported.size() - 1);
+            text.append(" Highest: ").append(high.name()).append(" (")
+                    .append(NumberText.of(high.values().get(latest).normalisedValue())).append("); lowest: ")
+                    .append(low.name()).append(" (").append(NumberText.of(low.values().get(latest).normalisedValue()))
+                    .append(").");
+        }
+        int without = map.regions().size() - reported.size();
+        if (without > 0) {
+            text.append(' ').append(without).append(without == 1 ? " region has" : " regions have")
+                    .append(" no figure to map.");
+        }
+        return text.toString();
+    }
+
+    static List<MapPageView.LegendRow> legend(MapModel map) {
+        Classification classes = map.classification();
+        List<MapPageView.LegendRow> rows = new ArrayList<>();
+        int fills = map.ramp().fills().size();
+        for (int i = 0; i < classes.classCount() && fills > 0; i++) {
+            String from = NumberText.of(classes.limits().get(i));
+            String to = NumberText.of(classes.limits().get(i + 1));
+            boolean last = i == classes.classCount() - 1;
+            String range = from + (last ? " to " : " to under ") + to;
+            int fillIndex = Math.min(i, fills - 1);
+            rows.add(new MapPageView.LegendRow(map.ramp().fills().get(fillIndex).hex(), range, classes.counts().get(i)));
+        }
+        return rows;
+    }
+
+    /** The last path segment, for links between files of the same map folder. */
+    static String fileName(String path) {
+        return path.substring(path.lastIndexOf('/') + 1);
+    }
+}

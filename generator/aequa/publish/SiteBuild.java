@@ -1,0 +1,244 @@
+package aequa.publish;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
+import java.util.stream.Stream;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+
+import aequa.atlas.Atlas;
+import aequa.atlas.MapModel;
+import aequa.findings.Finding;
+import aequa.pages.PageRenderer;
+import aequa.pages.SiteView;
+import aequa.publish.PublishProgress.Stage;
+
+/** One run of {@link SitePublisher#publish}: holds the state of a single build; used once, under the lock. */
+final class SiteBuild {
+
+    /** Kept from an existing output folder although aequa did not write it (keeps an empty folder in git). */
+    private static final String GIT_KEEP = ".gitkeep";
+
+    private final Atlas atlas;
+    private final List<Finding> findings;
+    private final MapArtwork artwork;
+    private final Path out;
+    private final PublishOptions options;
+    private final ObjectMapper json = SiteReport.jsonMapper();
+    private final Map<String, OutputManifest.Entry> next = new TreeMap<>();
+    private final List<String> mapsDrawn = new ArrayList<>();
+    private final List<String> mapsReused = new ArrayList<>();
+    private OutputManifest previous = OutputManifest.empty();
+    private StagingFolder staging;
+    private int written;
+    private int kept;
+
+    SiteBuild(Atlas atlas, List<Finding> findings, MapArtwork artwork, Path out, PublishOptions options) {
+        this.atlas = atlas;
+        this.findings = List.copyOf(findings);
+        this.artwork = artwork;
+        this.out = out;
+        this.options = options;
+    }
+
+    PublishResult run(long startNanos) throws IOException {
+        PublishProgress progress = options.progress();
+        progress.step(Stage.PREPARE, 0, 1);
+        StagingFolder.recover(out);
+        refuseForeignFolder();
+        PageRenderer renderer = new PageRenderer(atlas.projectDir().resolve("templates"));
+        List<String> unsafe = renderer.checkTemplates();
+        if (!unsafe.isEmpty()) {
+            throw new PublishRefusedException("Template " + String.join(", ", unsafe) + " switches HTML escaping off"
+                    + " (?no_esc, noautoesc, auto_esc=false or outputformat). Remove it: aequa escapes all data.");
+        }
+        previous = OutputManifest.read(out, json);
+        List<String> ids = atlas.maps().stream().map(MapModel::id).toList();
+        List<MapFiles> files = SafePaths.distinctFileSafeIds(ids).stream().map(MapFiles::of).toList();
+        byte[] themeCss = ThemeStyles.find(atlas.projectDir(), atlas.project().site().theme());
+        String siteHash = siteHash(renderer, themeCss);
+        SiteView site = SiteViews.site(atlas.project().site());
+        progress.step(Stage.PREPARE, 1, 1);
+
+        try (StagingFolder folder = StagingFolder.create(out)) {
+            staging = folder;
+            int count = atlas.maps().size();
+            Sha256 edition = new Sha256();
+            for (int i = 0; i < count; i++) {
+                progress.step(Stage.MAPS, i, count);
+                String fingerprint = MapFingerprint.of(atlas.maps().get(i));
+                edition.add(files.get(i).fileId()).add(fingerprint);
+                buildMap(atlas.maps().get(i), fingerprint, files.get(i), renderer, site, siteHash);
+            }
+            progress.step(Stage.MAPS, count, count);
+
+            progress.step(Stage.REPORT, 0, 1);
+            String digest = edition.hex();
+            String pagesHash = new Sha256().add(siteHash).add(digest).add(findings.toString()).hex();
+            List<String> sitePages = List.of(SiteReport.FILE_NAME, "index.html", "method.html", "changes.html");
+            int changedMaps;
+            if (reusable(sitePages, pagesHash)) {
+                sitePages.forEach(path -> carryOver(path, pagesHash));
+                changedMaps = -1;
+                progress.step(Stage.REPORT, 1, 1);
+            } else {
+                ArrayNode maps = SiteReport.maps(atlas, files, json);
+                Optional<JsonNode> previousReport = SiteReport.readPrevious(out, json);
+                JsonNode changes = EditionChanges.compare(previousReport, maps, digest, json);
+                changedMaps = changes.path("maps").size();
+                put(SiteReport.FILE_NAME, SiteReport.write(atlas, maps, digest, findings, changes, json), pagesHash);
+                progress.step(Stage.REPORT, 1, 1);
+                progress.step(Stage.PAGES, 0, 1);
+                put("index.html", utf8(renderer.renderIndex(site, SiteViews.index(atlas, files))), pagesHash);
+                put("method.html", utf8(renderer.renderMethod(site, SiteViews.method(atlas, files))), pagesHash);
+                put("changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files))), pagesHash);
+            }
+            for (String asset : PageRenderer.ASSET_NAMES) {
+                put(asset, renderer.source(asset), siteHash);
+            }
+            put("assets/theme.css", themeCss, siteHash);
+            progress.step(Stage.PAGES, 1, 1);
+
+            progress.step(Stage.SWAP, 0, 1);
+            OutputManifest manifest = new OutputManifest(next);
+            byte[] manifestBytes = manifest.toJson(json);
+            int removed = (int) previous.entries().keySet().stream().filter(p -> !next.containsKey(p)).count();
+            boolean unchanged = written == 0 && removed == 0 && sameBytes(OutputManifest.FILE_NAME, manifestBytes);
+            if (!unchanged) {
+                staging.write(OutputManifest.FILE_NAME, manifestBytes);
+                if (Files.isRegularFile(out.resolve(GIT_KEEP))) {
+                    staging.reuse(GIT_KEEP);
+                }
+                staging.commit();
+            }
+            progress.step(Stage.SWAP, 1, 1);
+            return new PublishResult(out, !unchanged, mapsDrawn, mapsReused, written, kept, removed, changedMaps,
+                    Duration.ofNanos(System.nanoTime() - startNanos));
+        }
+    }
+
+    private void buildMap(MapModel map, String fingerprint, MapFiles files, PageRenderer renderer, SiteView site,
+                          String siteHash) throws IOException {
+        String drawHash = new Sha256().add(fingerprint).add(artwork.fingerprint())
+                .add(Integer.toString(options.pngWidthPx())).hex();
+        String pageHash = new Sha256().add(drawHash).add(siteHash).hex();
+        String webSvg = null;
+        if (reusable(files.drawn(), drawHash)) {
+            files.drawn().forEach(path -> carryOver(path, drawHash));
+            mapsReused.add(map.id());
+        } else {
+            webSvg = artwork.webSvg(map);
+            if (webSvg.toLowerCase(Locale.ROOT).contains("<script")) {
+                throw new IllegalStateException("the web SVG of map " + map.id() + " contains a script; refusing to inline it");
+            }
+            write(files.webSvg(), utf8(webSvg), drawHash);
+            write(files.printSvg(), artwork.printSvg(map), drawHash);
+            write(files.png(), artwork.png(map, options.pngWidthPx()), drawHash);
+            mapsDrawn.add(map.id());
+        }
+        if (reusable(files.written(), pageHash)) {
+            files.written().forEach(path -> carryOver(path, pageHash));
+            return;
+        }
+        if (webSvg == null) {
+            webSvg = Files.readString(out.resolve(files.webSvg()), StandardCharsets.UTF_8);
+        }
+        write(files.page(), utf8(renderer.renderMap(site, MapViews.page(map, files, webSvg))), pageHash);
+        write(files.figures(), utf8(renderer.renderFigures(site, MapViews.figures(map, files))), pageHash);
+        write(files.csv(), FiguresCsv.write(map), pageHash);
+    }
+
+    /** True when every file is recorded with {@code inputs} and is still on disk with the recorded bytes. */
+    private boolean reusable(List<String> paths, String inputs) {
+        return paths.stream().allMatch(path -> previous.get(path)
+                .filter(entry -> entry.inputs().equals(inputs))
+                .map(entry -> onDiskMatches(path, entry.content()))
+                .orElse(false));
+    }
+
+    private boolean onDiskMatches(String path, String content) {
+        Path file = out.resolve(path);
+        try {
+            return Files.isRegularFile(file) && Sha256.of(Files.readAllBytes(file)).equals(content);
+        } catch (IOException unreadable) {
+            return false;
+        }
+    }
+
+    private boolean sameBytes(String path, byte[] bytes) {
+        return onDiskMatches(path, Sha256.of(bytes));
+    }
+
+    /** Writes a file made in this build, or carries the previous one over when its bytes are the same. */
+    private void put(String path, byte[] bytes, String inputs) throws IOException {
+        String content = Sha256.of(bytes);
+        Optional<OutputManifest.Entry> before = previous.get(path);
+        if (before.isPresent() && before.get().content().equals(content) && onDiskMatches(path, content)) {
+            staging.reuse(path);
+            next.put(path, new OutputManifest.Entry(inputs, content));
+            if (!before.get().inputs().equals(inputs)) {
+                written++; // same bytes, new inputs: the manifest changes, so the edition does too
+            } else {
+                kept++;
+            }
+            return;
+        }
+        write(path, bytes, inputs);
+    }
+
+    private void write(String path, byte[] bytes, String inputs) throws IOException {
+        staging.write(path, bytes);
+        next.put(path, new OutputManifest.Entry(inputs, Sha256.of(bytes)));
+        written++;
+    }
+
+    private void carryOver(String path, String inputs) {
+        try {
+            staging.reuse(path);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException("cannot carry over " + path, e);
+        }
+        next.put(path, new OutputManifest.Entry(inputs, previous.get(path).orElseThrow().content()));
+        kept++;
+    }
+
+    private String siteHash(PageRenderer renderer, byte[] themeCss) {
+        Sha256 sha = new Sha256().add(atlas.project().site().toString());
+        Stream.concat(PageRenderer.TEMPLATE_NAMES.stream(), PageRenderer.ASSET_NAMES.stream())
+                .forEach(name -> sha.add(name).add(renderer.source(name)));
+        return sha.add(themeCss).hex();
+    }
+
+    private void refuseForeignFolder() throws IOException {
+        if (!Files.exists(out)) {
+            return;
+        }
+        if (!Files.isDirectory(out)) {
+            throw new PublishRefusedException("The output " + out + " is a file, not a folder. Choose a folder.");
+        }
+        if (Files.isRegularFile(out.resolve(OutputManifest.FILE_NAME))) {
+            return;
+        }
+        try (Stream<Path> entries = Files.list(out)) {
+            if (entries.anyMatch(p -> !p.getFileName().toString().equals(GIT_KEEP))) {
+                throw new PublishRefusedException("Refusing to replace " + out + ": it holds files aequa did not write"
+                        + " (no " + OutputManifest.FILE_NAME + "). Choose an empty or new output folder.");
+            }
+        }
+    }
+
+    private static byte[] utf8(String text) {
+        return text.getBytes(StandardCharsets.UTF_8);
+    }
+}

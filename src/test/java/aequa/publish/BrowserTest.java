@@ -1,0 +1,234 @@
+package aequa.publish;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.File;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Base64;
+import java.util.List;
+import java.util.logging.Level;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.openqa.selenium.By;
+import org.openqa.selenium.Dimension;
+import org.openqa.selenium.JavascriptExecutor;
+import org.openqa.selenium.OutputType;
+import org.openqa.selenium.PrintsPage;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.chrome.ChromeDriver;
+import org.openqa.selenium.chrome.ChromeDriverService;
+import org.openqa.selenium.chrome.ChromeOptions;
+import org.openqa.selenium.interactions.Actions;
+import org.openqa.selenium.logging.LogEntry;
+import org.openqa.selenium.logging.LogType;
+import org.openqa.selenium.logging.LoggingPreferences;
+import org.openqa.selenium.print.PageSize;
+import org.openqa.selenium.print.PrintOptions;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+/**
+ * The published site in a real browser: Debian's Chromium, headless, through Selenium with an explicit
+ * ChromeDriver (so Selenium Manager never goes to the network).
+ *
+ * <p>The site is the folder named by the system property {@value #SITE_PROPERTY} (point it at the published
+ * demo: {@code mvn test -Dtest=BrowserTest -Daequa.browser.site=site-out}); without it, a fixture atlas is
+ * published with {@link FakeArtwork}. Checks: no console errors on any page; each map's SVG is visible with
+ * one region element per drawn region of report.json; a legend and a caption; every link resolves; the page
+ * fits a phone's width; a map page prints on one A4 and one Letter sheet; the hover script lights a region.
+ * A screenshot of every page goes to target/screenshots/.
+ *
+ * <p>In CI (environment {@code CI=true}) a missing Chromium fails the test. Elsewhere it is skipped with a
+ * printed reason when /usr/bin/chromium is absent. Install: {@code apt-get install -y chromium chromium-driver}.
+ */
+class BrowserTest {
+
+    static final String SITE_PROPERTY = "aequa.browser.site";
+    private static final Path CHROMIUM = Path.of("/usr/bin/chromium");
+    private static final Path CHROMEDRIVER = Path.of("/usr/bin/chromedriver");
+    private static final Path SCREENSHOTS = Path.of("target", "screenshots");
+
+    private static ChromeDriver driver;
+    private static Path site;
+    private static Path profile;
+    private static JsonNode report;
+
+    @BeforeAll
+    static void startBrowser() throws IOException {
+        boolean ci = "true".equalsIgnoreCase(System.getenv("CI"));
+        boolean installed = Files.isExecutable(CHROMIUM) && Files.isExecutable(CHROMEDRIVER);
+        if (!installed && ci) {
+            throw new IllegalStateException("CI=true but " + CHROMIUM + " or " + CHROMEDRIVER
+                    + " is missing: install them with apt-get install -y chromium chromium-driver");
+        }
+        if (!installed) {
+            System.out.println("BrowserTest skipped: " + CHROMIUM + " or " + CHROMEDRIVER + " not installed");
+        }
+        Assumptions.assumeTrue(installed, "Chromium not installed (apt-get install -y chromium chromium-driver)");
+
+        site = sitePath();
+        report = new ObjectMapper().readTree(site.resolve("report.json").toFile());
+        profile = Files.createTempDirectory("aequa-chromium-");
+        ChromeOptions options = new ChromeOptions();
+        options.setBinary(CHROMIUM.toFile());
+        // flags from /work/shared/LIBRARIES.md section 10 (verified with Chromium 156 on Debian 12)
+        options.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking",
+                "--disable-component-update", "--disable-sync", "--no-first-run", "--disable-dev-shm-usage",
+                "--allow-file-access-from-files", "--window-size=1280,1000", "--user-data-dir=" + profile);
+        LoggingPreferences logs = new LoggingPreferences();
+        logs.enable(LogType.BROWSER, Level.ALL);
+        options.setCapability("goog:loggingPrefs", logs);
+        ChromeDriverService service = new ChromeDriverService.Builder().usingDriverExecutable(CHROMEDRIVER.toFile())
+                .usingAnyFreePort().withLogOutput(OutputStream.nullOutputStream()).build();
+        driver = new ChromeDriver(service, options);
+        Files.createDirectories(SCREENSHOTS);
+    }
+
+    private static Path sitePath() throws IOException {
+        String given = System.getProperty(SITE_PROPERTY, "");
+        if (!given.isBlank()) {
+            return Path.of(given).toAbsolutePath().normalize();
+        }
+        Path out = Path.of("target", "browser-site").toAbsolutePath();
+        SitePublisher.publish(SiteFixtures.atlas(Path.of("target", "browser-project"), SiteFixtures.Texts.plain(), 3, 24),
+                new FakeArtwork(), out, PublishOptions.defaults().withLockWait(java.time.Duration.ofSeconds(30)));
+        return out;
+    }
+
+    @AfterAll
+    static void stopBrowser() throws IOException {
+        if (driver != null) {
+            driver.quit();
+        }
+        if (profile != null) {
+            StagingFolder.deleteTree(profile);
+        }
+    }
+
+    @Test
+    void everyPageLoadsWithoutConsoleErrorsAndItsLinksResolve() throws IOException {
+        List<String> problems = new ArrayList<>();
+        for (String page : PublishTestSupport.files(site).keySet()) {
+            if (!page.endsWith(".html")) {
+                continue;
+            }
+            open(page);
+            for (LogEntry entry : driver.manage().logs().get(LogType.BROWSER)) {
+                if (entry.getLevel().intValue() >= Level.SEVERE.intValue()) {
+                    problems.add(page + ": console " + entry.getMessage());
+                }
+            }
+            for (WebElement link : driver.findElements(By.cssSelector("a[href], img[src], link[href], script[src]"))) {
+                String url = link.getDomProperty(link.getTagName().equals("a") || link.getTagName().equals("link") ? "href" : "src");
+                if (url != null && url.startsWith("file:")) {
+                    Path target = Path.of(java.net.URI.create(url.replaceAll("#.*$", "")));
+                    if (!Files.isRegularFile(target)) {
+                        problems.add(page + ": broken link " + url);
+                    }
+                }
+            }
+            assertFalse(driver.findElements(By.cssSelector(".site-notice")).isEmpty() && report.at("/site/notice").asText().isEmpty(),
+                    "a notice box without a notice on " + page);
+            if (!report.at("/site/notice").asText().isEmpty()) {
+                assertTrue(driver.findElement(By.cssSelector(".site-notice")).isDisplayed(), page);
+            }
+            screenshot(page.replace('/', '_').replace(".html", ".png"));
+        }
+        assertEquals(List.of(), problems);
+    }
+
+    @Test
+    void eachMapShowsItsRegionsLegendAndCaption() throws IOException {
+        for (JsonNode map : report.get("maps")) {
+            open(map.at("/files/page").asText());
+            WebElement svg = driver.findElement(By.cssSelector(".map-frame svg"));
+            assertTrue(svg.isDisplayed(), map.get("id").asText());
+            assertTrue(svg.getSize().getWidth() > 200, "map too small: " + svg.getSize());
+            long drawn = 0;
+            for (JsonNode region : map.get("regions")) {
+                drawn += region.path("drawn").asBoolean(true) ? 1 : 0;
+            }
+            List<WebElement> regions = svg.findElements(By.cssSelector("[id^='r-']"));
+            assertEquals(drawn, regions.size(), "regions drawn in " + map.get("id").asText());
+            assertFalse(svg.findElements(By.cssSelector("[id*='legend' i]")).isEmpty(), "legend inside the SVG");
+            assertFalse(svg.findElements(By.cssSelector("[id*='caption' i]")).isEmpty(), "caption inside the SVG");
+            WebElement caption = driver.findElement(By.cssSelector("figcaption.map-caption"));
+            assertTrue(caption.getText().contains(map.at("/projection/name").asText()), caption.getText());
+            String label = svg.getAttribute("aria-labelledby") + svg.getAttribute("aria-label");
+            assertTrue(svg.getAttribute("role") != null && !label.equals("nullnull"), "SVG needs role and a label");
+
+            new Actions(driver).moveToElement(regions.get(regions.size() / 2)).perform();
+            WebElement tip = driver.findElement(By.cssSelector(".map-tip"));
+            assertTrue(tip.isDisplayed() && !tip.getText().isBlank(), "hover tooltip");
+            assertEquals(1, svg.findElements(By.cssSelector(".is-lit")).size(), "hover highlight");
+        }
+    }
+
+    @Test
+    void aMapPageFitsAPhoneAndPrintsOnOneSheet() throws IOException {
+        JsonNode first = report.at("/maps/0");
+        try {
+            driver.manage().window().setSize(new Dimension(390, 844));
+            open(first.at("/files/page").asText());
+            long overflow = (Long) ((JavascriptExecutor) driver).executeScript(
+                    "return document.documentElement.scrollWidth - document.documentElement.clientWidth;");
+            assertTrue(overflow <= 0, "page wider than a phone by " + overflow + " px");
+            screenshot("phone_" + first.get("id").asText() + ".png");
+            open(first.at("/files/figures").asText());
+            screenshot("phone_figures_" + first.get("id").asText() + ".png");
+        } finally {
+            driver.manage().window().setSize(new Dimension(1280, 1000));
+        }
+        open(first.at("/files/page").asText());
+        // ISO 216 A4 is 21.0 x 29.7 cm; ANSI Letter is 21.59 x 27.94 cm
+        for (PageSize sheet : List.of(new PageSize(29.7, 21.0), new PageSize(27.94, 21.59))) {
+            PrintOptions print = new PrintOptions();
+            print.setPageSize(sheet);
+            print.setBackground(true);
+            byte[] pdf = Base64.getDecoder().decode(((PrintsPage) driver).print(print).getContent());
+            assertEquals(1, pdfPages(pdf), "map page must print on one sheet of " + sheet.getWidth() + " cm");
+            Files.write(SCREENSHOTS.resolve("print_" + first.get("id").asText() + "_" + sheet.getWidth() + ".pdf"), pdf);
+        }
+        // a picture of the print layout for people to look at: Letter at 96 px per inch
+        try {
+            driver.manage().window().setSize(new Dimension(816, 1056));
+            driver.executeCdpCommand("Emulation.setEmulatedMedia", java.util.Map.of("media", "print"));
+            open(first.at("/files/page").asText());
+            screenshot("print_" + first.get("id").asText() + ".png");
+        } finally {
+            driver.executeCdpCommand("Emulation.setEmulatedMedia", java.util.Map.of("media", ""));
+            driver.manage().window().setSize(new Dimension(1280, 1000));
+        }
+    }
+
+    /** Counts page objects ("/Type /Page", not "/Pages") in a PDF (ISO 32000-1, 7.7.3.3). */
+    private static int pdfPages(byte[] pdf) {
+        Matcher m = Pattern.compile("/Type\\s*/Page(?![s])").matcher(new String(pdf, java.nio.charset.StandardCharsets.ISO_8859_1));
+        int pages = 0;
+        while (m.find()) {
+            pages++;
+        }
+        return pages;
+    }
+
+    private static void open(String page) {
+        driver.get(site.resolve(page).toUri().toString());
+    }
+
+    private static void screenshot(String name) throws IOException {
+        File shot = driver.getScreenshotAs(OutputType.FILE);
+        Files.copy(shot.toPath(), SCREENSHOTS.resolve(name), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+    }
+}

@@ -1,0 +1,112 @@
+package aequa.publish;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+import aequa.atlas.MapModel;
+import aequa.atlas.MapRegion;
+
+/** report.json's changes section and the changes page, across editions of one output folder. */
+class EditionChangesTest {
+
+    @TempDir
+    Path tmp;
+
+    private final SiteFixtures.Texts texts = SiteFixtures.Texts.plain();
+
+    private JsonNode publish(Path out, List<MapModel> maps) throws IOException {
+        SitePublisher.publish(SiteFixtures.atlas(tmp.resolve("p"), texts, maps), new FakeArtwork(), out,
+                PublishOptions.defaults());
+        return new ObjectMapper().readTree(out.resolve("report.json").toFile());
+    }
+
+    @Test
+    void firstEditionSaysSo() throws IOException {
+        JsonNode report = publish(tmp.resolve("site"), List.of(SiteFixtures.map("a", texts, 10, 0)));
+        assertTrue(report.at("/changes/comparedWith").isNull());
+        assertTrue(Files.readString(tmp.resolve("site/changes.html")).contains("first edition"));
+    }
+
+    @Test
+    void classMovesAddedAndRemovedRegionsBreaksAndMapsAreListed() throws IOException {
+        Path out = tmp.resolve("site");
+        MapModel before = SiteFixtures.map("a", texts, 12, 0);
+        publish(out, List.of(before, SiteFixtures.map("gone", texts, 6, 0)));
+
+        // new figures: every value +40 (limits move, some regions change class); region K011 removed, K012 added
+        MapModel shifted = SiteFixtures.map("a", texts, 13, 40);
+        List<MapRegion> regions = new ArrayList<>(shifted.regions());
+        regions.remove(11);
+        MapModel after = new MapModel(shifted.spec(), shifted.periods(), shifted.projection(), regions,
+                shifted.classification(), shifted.ramp(), shifted.areaAudit(), shifted.notices());
+        JsonNode report = publish(out, List.of(after, SiteFixtures.map("new", texts, 6, 0)));
+        JsonNode changes = report.get("changes");
+
+        assertFalse(changes.get("comparedWith").isNull());
+        JsonNode a = changes.at("/maps/0");
+        assertEquals("a", a.get("id").asText());
+        assertEquals("changed", a.get("state").asText());
+        assertEquals("[\"K012\"]", a.get("regionsAdded").toString());
+        assertEquals("[\"K011\"]", a.get("regionsRemoved").toString());
+        assertEquals(before.classification().limits().toString().replace(" ", ""),
+                a.at("/breaks/from").toString());
+        // region K004 reports zero in both editions, so it is in class 1 both times and must not be listed;
+        // expected moves recomputed from the fixture's own classes, region by region
+        List<String> expectedMoves = new ArrayList<>();
+        for (MapRegion r : after.regions()) {
+            before.regions().stream().filter(b -> b.key().equals(r.key())).findFirst().ifPresent(b -> {
+                if (b.values().get(0).classIndex() != r.values().get(0).classIndex()) {
+                    expectedMoves.add(r.key());
+                }
+            });
+        }
+        List<String> listed = new ArrayList<>();
+        a.get("classChanged").forEach(c -> listed.add(c.get("key").asText()));
+        assertEquals(expectedMoves, listed);
+        assertFalse(listed.isEmpty(), "the fixture must move at least one region");
+        assertEquals("added", changes.at("/maps/1/state").asText());
+        assertEquals("new", changes.at("/maps/1/id").asText());
+        assertEquals("removed", changes.at("/maps/2/state").asText());
+        assertEquals("gone", changes.at("/maps/2/id").asText());
+
+        String page = Files.readString(out.resolve("changes.html"));
+        assertTrue(page.contains("Regions added: K012") && page.contains("Regions removed: K011")
+                && page.contains("Class limits moved"), page);
+    }
+
+    @Test
+    void republishingTheSameFiguresKeepsTheLastComparison() throws IOException {
+        Path out = tmp.resolve("site");
+        publish(out, List.of(SiteFixtures.map("a", texts, 10, 0)));
+        JsonNode changed = publish(out, List.of(SiteFixtures.map("a", texts, 10, 25)));
+        JsonNode again = publish(out, List.of(SiteFixtures.map("a", texts, 10, 25)));
+        assertEquals(changed.get("changes"), again.get("changes"));
+        assertFalse(again.at("/changes/maps").isEmpty());
+    }
+
+    @Test
+    void aProjectionChangeIsReported() throws IOException {
+        Path out = tmp.resolve("site");
+        MapModel map = SiteFixtures.map("a", texts, 10, 0);
+        publish(out, List.of(map));
+        MapModel moved = new MapModel(map.spec(), map.periods(), new aequa.projection.ProjectionChoice(
+                aequa.projection.Projections.lambertAzimuthal(11, 52), 1, 1, 0, 0, List.of(), "moved"),
+                map.regions(), map.classification(), map.ramp(), map.areaAudit(), map.notices());
+        JsonNode report = publish(out, List.of(moved));
+        assertEquals(10.0, report.at("/changes/maps/0/projection/from/parameters/1/value").asDouble());
+        assertEquals(11.0, report.at("/changes/maps/0/projection/to/parameters/1/value").asDouble());
+    }
+}
