@@ -10,7 +10,7 @@ import picocli.CommandLine.ScopeType;
 /** Entry point: parses the command line and turns each command's outcome into an exit code. */
 @Command(name = "aequa", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Publishes static web sites of equal-area thematic maps.",
-        subcommands = {AuditCommand.class, ScaffoldCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {AuditCommand.class, ExplainCommand.class, ScaffoldCommand.class, CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:success",
                 "1:the data has problems that the project file treats as errors",
@@ -30,7 +30,12 @@ public final class Main implements Runnable {
     }
 
     public static void main(String[] args) {
-        System.exit(run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+        PrintWriter out = new PrintWriter(System.out, true);
+        PrintWriter err = new PrintWriter(System.err, true);
+        int code = run(args, out, err);
+        out.flush();
+        err.flush();
+        System.exit(code);
     }
 
     /** Runs aequa as the command line would, writing to the given streams; returns the exit code. */
