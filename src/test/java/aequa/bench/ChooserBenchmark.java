@@ -30,13 +30,14 @@ import aequa.projection.ProjectionRequest;
  * The automatic choice for a footprint of {@value #VERTICES} vertices: 400 regions with wiggly edges
  * tiling a continent-sized box (35-70 N, 10 W - 40 E), 250 vertices each. Measures the footprint
  * analysis alone and footprint plus choice, average time per operation in milliseconds (goal: under 200 ms
- * warm). Run: {@code mvn -o -q -Pbench test-compile exec:exec -Dbench=ChooserBenchmark}.
+ * warm). Run: {@code mvn -o -q -Pbench test-compile exec:exec -Dbench=ChooserBenchmark -DbenchArgs=ChooserBenchmark}
+ * (benchArgs repeats the pattern: an empty benchArgs reaches JMH as an empty pattern, which selects every benchmark).
  */
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Fork(1)
 @Threads(1)
-@Warmup(iterations = 3, time = 2)
+@Warmup(iterations = 6, time = 2)
 @Measurement(iterations = 5, time = 2)
 @State(Scope.Thread)
 public class ChooserBenchmark {
