@@ -3,8 +3,6 @@ package aequa.projection;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.logging.Level;
-import java.util.logging.Logger;
 
 import org.apache.sis.referencing.operation.transform.DefaultMathTransformFactory;
 import org.apache.sis.referencing.operation.transform.MathTransforms;
@@ -26,11 +24,8 @@ import org.opengis.util.FactoryException;
  */
 final class SisProjection implements EqualAreaProjection {
 
-    /** SIS logs one warning about its optional EPSG database on the first WKT; aequa needs no database. */
-    private static final Logger SIS_LOG = Logger.getLogger("org.apache.sis");
-
     static {
-        SIS_LOG.setLevel(Level.SEVERE);
+        SisLogging.silence();
     }
 
     /**
