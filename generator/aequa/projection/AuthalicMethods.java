@@ -36,6 +36,10 @@ import org.opengis.referencing.operation.SingleOperation;
  */
 public final class AuthalicMethods {
 
+    static {
+        SisLogging.silence();
+    }
+
     private AuthalicMethods() {
     }
 

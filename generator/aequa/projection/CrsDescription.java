@@ -28,6 +28,10 @@ import org.opengis.util.FactoryException;
  */
 final class CrsDescription {
 
+    static {
+        SisLogging.silence();
+    }
+
     private CrsDescription() {
     }
 

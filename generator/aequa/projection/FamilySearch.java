@@ -28,7 +28,10 @@ import static aequa.projection.FamilyDefinitions.STANDARD_PARALLEL_2;
 final class FamilySearch {
 
     /** Most evaluations Nelder-Mead may spend per free parameter. */
-    private static final int EVALUATIONS_PER_PARAMETER = 40;
+    private static final int EVALUATIONS_PER_PARAMETER = 30;
+
+    /** Most rounds of the lattice polish (each tries one step either way on every free parameter). */
+    private static final int POLISH_ROUNDS = 4;
 
     /** Stop when the simplex's scores agree within this many degrees. */
     private static final double TOLERANCE_DEG = 1e-4;
@@ -74,7 +77,8 @@ final class FamilySearch {
         }
         double bestScore = score(values, free, best);
         // polish on the rounding lattice: move one parameter by one step while that helps
-        for (boolean improved = true; improved; ) {
+        boolean improved = true;
+        for (int round = 0; round < POLISH_ROUNDS && improved; round++) {
             improved = false;
             for (int i = 0; i < best.length; i++) {
                 for (double direction : new double[] {-1, 1}) {

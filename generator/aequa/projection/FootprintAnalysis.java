@@ -19,7 +19,7 @@ import org.locationtech.jts.geom.Polygon;
 final class FootprintAnalysis {
 
     /** Most boundary samples kept (the extremes plus an even stride through all vertices). */
-    static final int BOUNDARY_SAMPLES = 1500;
+    static final int BOUNDARY_SAMPLES = 1000;
 
     /** Longitude bins for finding the largest empty gap: 0.1 deg each. */
     private static final int BINS = 3600;

@@ -61,7 +61,7 @@ final class FootprintSampler {
         double span = Math.max(lonSpanDeg, 1e-6);
         double south = Math.max(-90.0, Math.min(minLatDeg, maxLatDeg - 1e-6));
         double north = Math.min(90.0, Math.max(maxLatDeg, minLatDeg + 1e-6));
-        int cells = 2 * TARGET_INTERIOR;
+        int cells = TARGET_INTERIOR;
         double[][] result = grid(westLonDeg, span, south, north, cells);
         for (int round = 0; round < 3 && result[1].length < TARGET_INTERIOR / 2 && cells < MAX_CELLS; round++) {
             int factor = (int) Math.min(16, Math.ceil((double) TARGET_INTERIOR / Math.max(1, result[1].length)));

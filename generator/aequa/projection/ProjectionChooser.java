@@ -14,8 +14,10 @@ import java.util.Objects;
  * (at least 240 deg of longitude and 120 deg of latitude, or more than 100 deg from their centre); else
  * the regional families: Lambert azimuthal (round and polar extents), Albers (only when the data lie on one
  * side of the equator and contain no pole: never Albers across the equator), normal cylindrical
- * (equatorial belts), transverse and oblique cylindrical (north-south and slanting belts), and the world
- * families too when the data reach 60 deg from their centre. The azimuthal domain ends 135 deg from the
+ * (equatorial belts), transverse and oblique cylindrical (north-south and slanting belts: only when the
+ * data are at least {@value #ELONGATED} times longer than wide, since a cylinder along a great circle cannot
+ * beat the azimuthal projection on a round area), and the world families too when the data reach 60 deg
+ * from their centre. The azimuthal domain ends 135 deg from the
  * centre, so it can never show the whole world in one piece.
  *
  * <p>Tie-break: unconventional aspects must earn their place. Among the candidates whose score is within
@@ -37,7 +39,10 @@ public final class ProjectionChooser {
     static final double CONVENTIONAL_MARGIN_DEG = 0.1;
 
     /** Samples used while searching parameters; the final figures use all of the footprint's samples. */
-    static final int SEARCH_SAMPLES = 300;
+    static final int SEARCH_SAMPLES = 240;
+
+    /** Elongation from which the transverse and oblique cylindrical aspects are tried. */
+    static final double ELONGATED = 1.5;
 
     private static final int RUNNERS_UP = 4;
 
@@ -99,8 +104,11 @@ public final class ProjectionChooser {
         if (aroundTheGlobe || farFromCentre) {
             return List.of(ProjectionFamily.EQUAL_EARTH, ProjectionFamily.MOLLWEIDE);
         }
-        List<ProjectionFamily> families = new ArrayList<>(List.of(ProjectionFamily.LAMBERT_AZIMUTHAL,
-                ProjectionFamily.CYLINDRICAL, ProjectionFamily.CYLINDRICAL_TRANSVERSE, ProjectionFamily.CYLINDRICAL_OBLIQUE));
+        List<ProjectionFamily> families = new ArrayList<>(List.of(ProjectionFamily.LAMBERT_AZIMUTHAL, ProjectionFamily.CYLINDRICAL));
+        if (footprint.elongation() >= ELONGATED) {
+            families.add(ProjectionFamily.CYLINDRICAL_TRANSVERSE);
+            families.add(ProjectionFamily.CYLINDRICAL_OBLIQUE);
+        }
         if (!footprint.crossesEquator() && !footprint.containsNorthPole() && !footprint.containsSouthPole()) {
             families.add(ProjectionFamily.ALBERS_CONIC);
         }

@@ -3,8 +3,6 @@ package aequa.projection;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.logging.Level;
-import java.util.logging.Logger;
 
 import org.apache.sis.referencing.operation.transform.DefaultMathTransformFactory;
 import org.apache.sis.referencing.operation.transform.MathTransforms;
@@ -26,11 +24,8 @@ import org.opengis.util.FactoryException;
  */
 final class SisProjection implements EqualAreaProjection {
 
-    /** SIS logs one warning about its optional EPSG database on the first WKT; aequa needs no database. */
-    private static final Logger SIS_LOG = Logger.getLogger("org.apache.sis");
-
     static {
-        SIS_LOG.setLevel(Level.SEVERE);
+        SisLogging.silence();
     }
 
     /**
@@ -125,10 +120,15 @@ final class SisProjection implements EqualAreaProjection {
      * <p>SIS does not wrap lon - lon0 into [-180, 180] (measured: Albers with lon0 = 132 E maps 168 W as if it
      * lay 300 deg west of the centre), so the points are first copied to the destination with their
      * longitude moved by whole turns to within 180 deg of the central meridian, and latitudes beyond +-90
-     * replaced by NaN; SIS then transforms the destination in place.
+     * replaced by NaN; SIS then transforms the destination in place. When every point is already fit (the
+     * common case, checked by one read-only pass) SIS reads the source directly.
      */
     @Override
     public void forward(double[] lonLatDeg, int srcOffset, double[] xyMetres, int dstOffset, int count) {
+        if (allReady(lonLatDeg, srcOffset, count)) {
+            transformAndClip(lonLatDeg, srcOffset, xyMetres, dstOffset, count);
+            return;
+        }
         for (int i = 0; i < count; i++) {
             double lon = lonLatDeg[srcOffset + 2 * i];
             double lat = lonLatDeg[srcOffset + 2 * i + 1];
@@ -142,8 +142,23 @@ final class SisProjection implements EqualAreaProjection {
             xyMetres[dstOffset + 2 * i] = valid ? lon : Double.NaN;
             xyMetres[dstOffset + 2 * i + 1] = valid ? lat : Double.NaN;
         }
+        transformAndClip(xyMetres, dstOffset, xyMetres, dstOffset, count);
+    }
+
+    /** Whether every point already has |lat| <= 90 and a longitude within 180 deg of the central meridian. */
+    private boolean allReady(double[] lonLatDeg, int srcOffset, int count) {
+        for (int i = 0; i < count; i++) {
+            double offset = lonLatDeg[srcOffset + 2 * i] - centralLonDeg;
+            if (!(Math.abs(offset) <= 180.0) || !(Math.abs(lonLatDeg[srcOffset + 2 * i + 1]) <= 90.0)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private void transformAndClip(double[] source, int srcOffset, double[] xyMetres, int dstOffset, int count) {
         try {
-            forward.transform(xyMetres, dstOffset, xyMetres, dstOffset, count);
+            forward.transform(source, srcOffset, xyMetres, dstOffset, count);
         } catch (TransformException e) {
             // SIS writes NaN for the points it cannot transform and reports the last failure; the NaNs are our contract.
         }
