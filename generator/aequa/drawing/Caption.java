@@ -32,8 +32,9 @@ final class Caption {
         text.append(", datum WGS 84. Angular distortion \u03c9 up to ").append(Numbers.trim(choice.omegaMaxDeg(), 1))
                 .append("\u00b0, mean ").append(Numbers.trim(choice.omegaMeanDeg(), 1)).append("\u00b0.");
         if (model.areaAudit() != null) {
+            double percent = model.areaAudit().maxRelativeError() * 100;
             text.append(" Areas are true: largest difference from the ellipsoid ")
-                    .append(Numbers.trim(model.areaAudit().maxRelativeError() * 100, 4)).append(" %.");
+                    .append(percent < 1e-4 ? "below 0.0001" : Numbers.trim(percent, 4)).append(" %.");
         }
         if (scale != null) {
             text.append(" The square shows ").append(scale.label())

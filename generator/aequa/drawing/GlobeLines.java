@@ -38,24 +38,67 @@ final class GlobeLines {
         return frame.minFrameLatDeg() <= -89.999 && frame.maxFrameLatDeg() >= 89.999;
     }
 
-    /** Meridians and parallels every {@code spacingDeg} degrees as a MultiLineString in metres. */
+    /** Meridians and parallels every {@code spacingDeg} degrees over the whole globe, in metres. */
     static Geometry graticule(EqualAreaProjection projection, double spacingDeg) {
+        return graticule(projection, spacingDeg, -180, 180, -90, 90);
+    }
+
+    /**
+     * Meridians and parallels every {@code spacingDeg} degrees within a lon/lat box (degrees), as a
+     * MultiLineString in metres, densified every {@code min(0.5, spacing / 10)} degrees.
+     */
+    static Geometry graticule(EqualAreaProjection projection, double spacingDeg, double westDeg, double eastDeg,
+                              double southDeg, double northDeg) {
+        double step = Math.min(STEP_DEG, spacingDeg / 10);
+        double firstLon = Math.ceil(westDeg / spacingDeg) * spacingDeg;
+        double firstLat = Math.ceil(southDeg / spacingDeg) * spacingDeg;
         List<LineString> lines = new ArrayList<>();
-        for (double lon = -180; lon < 180; lon += spacingDeg) {
+        for (double lon = firstLon; lon <= eastDeg + 1e-9 && lon < 180; lon += spacingDeg) {
             List<double[]> points = new ArrayList<>();
-            for (double lat = -90; lat <= 90 + 1e-9; lat += STEP_DEG) {
+            for (double lat = southDeg; lat <= northDeg + 1e-9; lat += step) {
                 points.add(new double[]{lon, Math.max(-90, Math.min(90, lat))});
             }
             addProjected(projection, points, lines);
         }
-        for (double lat = -90 + spacingDeg; lat < 90; lat += spacingDeg) {
+        for (double lat = firstLat; lat <= northDeg + 1e-9; lat += spacingDeg) {
+            if (lat <= -90 || lat >= 90) {
+                continue;
+            }
             List<double[]> points = new ArrayList<>();
-            for (double lon = -180; lon <= 180 + 1e-9; lon += STEP_DEG) {
+            for (double lon = westDeg; lon <= eastDeg + 1e-9; lon += step) {
                 points.add(new double[]{Math.min(180, lon), lat});
             }
             addProjected(projection, points, lines);
         }
         return FACTORY.createMultiLineString(lines.toArray(new LineString[0]));
+    }
+
+    /**
+     * The lon/lat box {west, east, south, north} of a projected extent, from its inverse-projected corners,
+     * edge midpoints and centre, widened by {@code marginDeg}; longitudes assume the extent does not
+     * straddle the antimeridian (world maps use the whole globe instead).
+     */
+    static double[] geographicBox(EqualAreaProjection projection, Envelope extentM, double marginDeg) {
+        double[] xs = {extentM.getMinX(), (extentM.getMinX() + extentM.getMaxX()) / 2, extentM.getMaxX()};
+        double[] ys = {extentM.getMinY(), (extentM.getMinY() + extentM.getMaxY()) / 2, extentM.getMaxY()};
+        double[] box = {Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY};
+        double[] lonLat = new double[2];
+        for (double x : xs) {
+            for (double y : ys) {
+                projection.inverse(new double[]{x, y}, 0, lonLat, 0, 1);
+                if (Double.isFinite(lonLat[0]) && Double.isFinite(lonLat[1])) {
+                    box[0] = Math.min(box[0], lonLat[0]);
+                    box[1] = Math.max(box[1], lonLat[0]);
+                    box[2] = Math.min(box[2], lonLat[1]);
+                    box[3] = Math.max(box[3], lonLat[1]);
+                }
+            }
+        }
+        if (!(box[0] <= box[1])) {
+            return new double[]{-180, 180, -90, 90};
+        }
+        return new double[]{Math.max(-180, box[0] - marginDeg), Math.min(180, box[1] + marginDeg),
+                Math.max(-90, box[2] - marginDeg), Math.min(90, box[3] + marginDeg)};
     }
 
     /** The projected globe as a polygon in metres (the area a world map's sea fills). */

@@ -48,6 +48,8 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
 
     /** Tallest map block relative to the page's inner width when the height is free (chosen by eye). */
     static final double MAX_MAP_ASPECT = 1.25;
+    /** The same for small multiples, lower so panels sit side by side rather than stacked (chosen by eye). */
+    static final double MAX_MULTIPLES_ASPECT = 0.6;
     /** Target side of the area-scale square, in ems of legend type (chosen by eye). */
     static final double SCALE_SQUARE_EM = 2.6;
 
@@ -77,7 +79,8 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
         double legendW = stacked ? inner : inner - scaleBlockW - 2 * em;
 
         // first pass at the natural height to size the symbols; they depend on the panel width only
-        int columns = bestColumns(n, inner, inner * MAX_MAP_ASPECT, panelLabelH, gap, aspect);
+        double naturalMaxH = inner * (n > 1 ? MAX_MULTIPLES_ASPECT : MAX_MAP_ASPECT);
+        int columns = bestColumns(n, inner, naturalMaxH, panelLabelH, gap, aspect);
         double cellW = (inner - (columns - 1) * gap) / columns;
         Symbols symbols = null;
         if (circles) {
@@ -97,7 +100,7 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
         double creditsH = creditLines.isEmpty() ? 0 : creditLines.size() * type.lineHeight(sizes.caption()) + 0.3 * em;
 
         double fixedParts = margin + titleH + gap + furnitureH + gap + captionH + creditsH + margin;
-        double mapMaxH = Double.isNaN(fixedHeightU) ? inner * MAX_MAP_ASPECT : Math.max(fixedHeightU - fixedParts, 10 * em);
+        double mapMaxH = Double.isNaN(fixedHeightU) ? naturalMaxH : Math.max(fixedHeightU - fixedParts, 10 * em);
         columns = bestColumns(n, inner, mapMaxH, panelLabelH, gap, aspect);
         cellW = (inner - (columns - 1) * gap) / columns;
         int rows = (int) Math.ceil(n / (double) columns);
@@ -136,7 +139,10 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
                 captionLines, captionTop, creditLines, creditsTop, symbols);
     }
 
-    /** The number of columns (1 to n) giving the largest scale; fewer columns win ties. */
+    /**
+     * The number of columns (1 to n) giving the largest scale, weighted by the share of grid cells in use so
+     * that a grid with empty cells must earn its place; fewer columns win ties.
+     */
     private static int bestColumns(int n, double inner, double mapMaxH, double labelH, double gap, double aspect) {
         int best = 1;
         double bestScale = -1;
@@ -144,7 +150,7 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
             int rows = (int) Math.ceil(n / (double) c);
             double cellW = (inner - (c - 1) * gap) / c;
             double cellMaxH = (mapMaxH - rows * labelH - (rows - 1) * gap) / rows;
-            double s = Math.min(cellW, cellMaxH / aspect);
+            double s = Math.min(cellW, cellMaxH / aspect) * n / (double) (c * rows);
             if (s > bestScale * (1 + 1e-9)) {
                 bestScale = s;
                 best = c;

@@ -241,14 +241,24 @@ final class Legend {
         double bottom = y + 2 * rMax;
         double size = theme.typePt().legend();
         Theme.Colours c = theme.colours();
+        // keep only values whose labels (set at the circles' tops) clear each other
+        List<Double> kept = new ArrayList<>();
+        double lastTopY = Double.NEGATIVE_INFINITY;
         for (double value : symbols.legendValues()) {
-            double r = symbols.radius(value);
-            canvas.fill(new Ellipse2D.Double(centreX - r, bottom - 2 * r, 2 * r, 2 * r), c.symbol(), 0.25);
-            canvas.stroke(new Ellipse2D.Double(centreX - r, bottom - 2 * r, 2 * r, 2 * r), c.textMuted(), theme.lines().symbolEdge().pt());
+            double topY = bottom - 2 * symbols.radius(value);
+            if (topY - lastTopY >= type.lineHeight(size)) {
+                kept.add(value);
+                lastTopY = topY;
+            }
         }
-        for (double value : symbols.legendValues()) {
+        for (double value : kept) {
             double r = symbols.radius(value);
-            double topY = bottom - 2 * r;
+            Ellipse2D.Double circle = new Ellipse2D.Double(centreX - r, bottom - 2 * r, 2 * r, 2 * r);
+            canvas.fill(circle, c.symbol(), 0.25);
+            canvas.stroke(circle, c.textMuted(), theme.lines().symbolEdge().pt());
+        }
+        for (double value : kept) {
+            double topY = bottom - 2 * symbols.radius(value);
             double labelX = centreX + rMax + 0.8 * em;
             canvas.stroke(new Line2D.Double(centreX, topY, labelX - 0.3 * em, topY), c.textMuted(), theme.lines().graticule().pt());
             canvas.text(Numbers.format(value, Numbers.decimalsFor(List.of(value))), labelX, topY + type.capHeight(size) / 2,

@@ -18,9 +18,10 @@ import aequa.colour.Rgb;
  */
 final class MapPainter {
 
-    /** Graticule spacing for world maps and for regional maps, degrees (common practice for map scales). */
+    /** Graticule spacing for world maps, degrees (common practice). */
     private static final double WORLD_GRATICULE_DEG = 30;
-    private static final double REGIONAL_GRATICULE_DEG = 10;
+    /** Candidate spacings for regional maps, degrees; the finest giving at most six lines across is used. */
+    private static final double[] REGIONAL_GRATICULE_DEG = {1, 2, 5, 10, 15, 30};
 
     private final MapModel model;
     private final Theme theme;
@@ -123,8 +124,19 @@ final class MapPainter {
 
     private Geometry graticuleLines() {
         var projection = model.projection().projection();
-        Geometry lines = GlobeLines.graticule(projection, wholeGlobe ? WORLD_GRATICULE_DEG : REGIONAL_GRATICULE_DEG);
-        return wholeGlobe ? lines : GlobeLines.clip(lines, extentM);
+        if (wholeGlobe) {
+            return GlobeLines.graticule(projection, WORLD_GRATICULE_DEG);
+        }
+        double[] box = GlobeLines.geographicBox(projection, extentM, 2);
+        double span = Math.max(box[1] - box[0], box[3] - box[2]);
+        double spacing = REGIONAL_GRATICULE_DEG[REGIONAL_GRATICULE_DEG.length - 1];
+        for (double candidate : REGIONAL_GRATICULE_DEG) {
+            if (span / candidate <= 6) {
+                spacing = candidate;
+                break;
+            }
+        }
+        return GlobeLines.clip(GlobeLines.graticule(projection, spacing, box[0], box[1], box[2], box[3]), extentM);
     }
 
     private void paintGlobe(Canvas canvas, MapFit fit, Geometry graticuleM, FixedDecimal precision, String suffix) {
@@ -147,7 +159,7 @@ final class MapPainter {
         canvas.text("Area scale", box.getX(), box.getY() + type.capHeight(size), size, true, Canvas.Anchor.START, c.text(), c.background());
         double squareTop = box.getY() + type.lineHeight(size) + 0.3 * size * type.unitsPerPt();
         double side = scale.sideU();
-        canvas.fill(new Rectangle2D.Double(box.getX(), squareTop, side, side), c.noData());
+        canvas.fill(new Rectangle2D.Double(box.getX(), squareTop, side, side), c.background());
         canvas.stroke(new Rectangle2D.Double(box.getX(), squareTop, side, side), c.text(), theme.lines().border().pt());
         canvas.text(scale.label(), box.getX() + side + 0.6 * size * type.unitsPerPt(), squareTop + side / 2 + type.capHeight(size) / 2,
                 size, false, Canvas.Anchor.START, c.text(), c.background());

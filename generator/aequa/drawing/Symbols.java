@@ -17,7 +17,7 @@ import aequa.statistics.FigureStatus;
 record Symbols(double maxValue, double maxRadiusU) {
 
     /** The share of the shorter side of a map panel the largest circle's radius takes (chosen by eye). */
-    static final double MAX_RADIUS_SHARE = 0.07;
+    static final double MAX_RADIUS_SHARE = 0.045;
 
     static boolean drawn(RegionValue value) {
         return value.status() == FigureStatus.REPORTED && value.normalisedValue() > 0;
@@ -40,9 +40,19 @@ record Symbols(double maxValue, double maxRadiusU) {
         return maxRadiusU * Math.sqrt(value / maxValue);
     }
 
-    /** Up to three round values (1, 2 or 5 times a power of ten) for the nested legend, largest first. */
+    /**
+     * Up to three round values for the nested legend, largest first: the largest is 1, 1.5, 2, 3, 5 or 7.5
+     * times a power of ten (close below the largest circle on the map), the others 1, 2 or 5 times one.
+     */
     double[] legendValues() {
-        double first = niceFloor(maxValue);
+        double decade = Math.pow(10, Math.floor(Math.log10(maxValue)));
+        double first = decade;
+        for (double n : new double[]{7.5, 5, 3, 2, 1.5, 1}) {
+            if (n * decade <= maxValue * (1 + 1e-12)) {
+                first = n * decade;
+                break;
+            }
+        }
         double second = niceFloor(first / 3.5);
         double third = niceFloor(first / 15);
         if (third >= second) {

@@ -82,9 +82,10 @@ final class MapFixtures {
             regions.add(new MapRegion(key, Names.of(c), cell.polygon.getArea() / 1e6, 1.0, cell.polygon, rv));
         }
         // one exact 100 km square, away from the grid, for the area-scale check
-        double x0 = -cols * CELL_M / 2 - 150_000;
-        Polygon square = FACTORY.createPolygon(new Coordinate[]{new Coordinate(x0, 0), new Coordinate(x0 + 100_000, 0),
-                new Coordinate(x0 + 100_000, 100_000), new Coordinate(x0, 100_000), new Coordinate(x0, 0)});
+        double x0 = -60_000;
+        double y0 = -60_000;
+        Polygon square = FACTORY.createPolygon(new Coordinate[]{new Coordinate(x0, y0), new Coordinate(x0 + 100_000, y0),
+                new Coordinate(x0 + 100_000, y0 + 100_000), new Coordinate(x0, y0 + 100_000), new Coordinate(x0, y0)});
         List<RegionValue> squareValues = new ArrayList<>();
         for (int p = 0; p < periods.size(); p++) {
             squareValues.add(valueFor(0, limits.get(0), classification, counts));
