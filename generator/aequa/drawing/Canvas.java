@@ -98,6 +98,25 @@ final class Canvas {
         }
     }
 
+    /**
+     * Runs {@code drawing} with SVG coordinates written to 4 decimals instead of the page's precision, for
+     * shapes whose size carries a stated measure (the area-scale square: at 0.01 mm a 7 mm side would be
+     * off by up to 0.15 % in area). No effect on other targets, which draw from doubles.
+     */
+    void precisely(Runnable drawing) {
+        if (svg == null) {
+            drawing.run();
+            return;
+        }
+        var saved = svg.getGeomDoubleConverter();
+        svg.setGeomDoubleConverter(new FixedDecimal(4));
+        try {
+            drawing.run();
+        } finally {
+            svg.setGeomDoubleConverter(saved);
+        }
+    }
+
     void fill(Shape shape, Rgb colour) {
         fill(shape, colour, 1.0);
     }

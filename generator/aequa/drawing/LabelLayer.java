@@ -20,7 +20,8 @@ import aequa.atlas.RegionValue;
  * Region names at each region's pole of inaccessibility (the centre of the largest inscribed circle, JTS
  * {@link MaximumInscribedCircle}). A label is kept only if its box lies inside the region and clear of every
  * label already placed; roomier regions are placed first. Labels that do not fit are dropped, never shrunk
- * below the theme's label size.
+ * below the theme's label size. Light type on a dark fill (reversed) is set at least at the theme's
+ * reversed minimum, since thin light strokes fill in on press (common practice).
  */
 final class LabelLayer {
 
@@ -34,9 +35,9 @@ final class LabelLayer {
 
     static void paint(Canvas canvas, MapModel model, Theme theme, RegionFills fills, List<Geometry> pageGeometries, int period) {
         Typesetter type = canvas.type();
-        double size = theme.typePt().label();
-        double capU = type.capHeight(size);
-        double padU = 0.25 * size * type.unitsPerPt();
+        double plainSize = theme.typePt().label();
+        double reversedSize = Math.max(plainSize, theme.typePt().minimumReversed());
+        double capU = type.capHeight(reversedSize);
         List<Candidate> candidates = new ArrayList<>();
         for (int i = 0; i < pageGeometries.size(); i++) {
             Geometry page = pageGeometries.get(i);
@@ -54,6 +55,10 @@ final class LabelLayer {
         canvas.begin(period == 0 ? "labels" : "labels-" + period);
         for (Candidate c : candidates) {
             MapRegion region = model.regions().get(c.index());
+            RegionValue value = RegionLayer.valueOf(region, period);
+            boolean reversed = ColourMeasures.relativeLuminance(fills.text(value)) > ColourMeasures.relativeLuminance(fills.fill(value));
+            double size = reversed ? reversedSize : plainSize;
+            double padU = 0.25 * size * type.unitsPerPt();
             String text = region.name();
             double width = type.width(text, size, false);
             double x = c.centre().getX();
@@ -63,7 +68,6 @@ final class LabelLayer {
                 continue;
             }
             placed.add(box);
-            RegionValue value = RegionLayer.valueOf(region, period);
             canvas.text(text, x, y + capU / 2, size, false, Canvas.Anchor.MIDDLE, fills.text(value), fills.fill(value));
         }
         canvas.end();

@@ -133,8 +133,8 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
         double creditsTop = y;
         y += creditLines.size() * type.lineHeight(sizes.caption()) + margin;
 
-        double step = medium == Medium.PRINT ? 0.1 : 1.0;
-        double height = Double.isNaN(fixedHeightU) ? Math.ceil(y / step - 1e-9) * step : fixedHeightU;
+        double stepsPerUnit = medium == Medium.PRINT ? 10 : 1; // heights in whole 0.1 mm or whole px
+        double height = Double.isNaN(fixedHeightU) ? Math.ceil(y * stepsPerUnit - 1e-6) / stepsPerUnit : fixedHeightU;
         return new Layout(widthU, height, margin, titleLines, margin, panels, areaScale, legendBox, scaleBox,
                 captionLines, captionTop, creditLines, creditsTop, symbols);
     }

@@ -159,8 +159,11 @@ final class MapPainter {
         canvas.text("Area scale", box.getX(), box.getY() + type.capHeight(size), size, true, Canvas.Anchor.START, c.text(), c.background());
         double squareTop = box.getY() + type.lineHeight(size) + 0.3 * size * type.unitsPerPt();
         double side = scale.sideU();
-        canvas.fill(new Rectangle2D.Double(box.getX(), squareTop, side, side), c.background());
-        canvas.stroke(new Rectangle2D.Double(box.getX(), squareTop, side, side), c.text(), theme.lines().border().pt());
+        Rectangle2D.Double square = new Rectangle2D.Double(box.getX(), squareTop, side, side);
+        canvas.precisely(() -> {
+            canvas.fill(square, c.background());
+            canvas.stroke(square, c.text(), theme.lines().border().pt());
+        });
         canvas.text(scale.label(), box.getX() + side + 0.6 * size * type.unitsPerPt(), squareTop + side / 2 + type.capHeight(size) / 2,
                 size, false, Canvas.Anchor.START, c.text(), c.background());
         canvas.end();
