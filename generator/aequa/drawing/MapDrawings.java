@@ -55,7 +55,12 @@ public final class MapDrawings {
         Canvas canvas = new Canvas(g, type);
         painter.paint(canvas, layout, precision, true);
         String rootId = Ids.of("map", model.id());
-        String svg = SvgOutput.tidy(SvgOutput.webRoot(g, rootId, width, layout.heightU(), model.spec().title(), Descriptions.of(model)));
+        // region borders are drawn by this rule rather than as a second copy of every edge, which keeps large
+        // maps small; its specificity is lower than the page stylesheet's hover rule, so hovering still works
+        String borders = "svg.aequa-map g[data-key]>g>path{stroke:" + theme.colours().border().hex() + ";stroke-width:"
+                + new FixedDecimal(2).apply(theme.lines().border().pt() * type.unitsPerPt()) + "px;stroke-linejoin:round}";
+        String svg = SvgOutput.tidy(SvgOutput.webRoot(g, rootId, width, layout.heightU(), model.spec().title(),
+                Descriptions.of(model), borders), precision.decimals());
         return drawn(DrawnMap.Format.WEB_SVG, svg.getBytes(StandardCharsets.UTF_8), layout, "px", canvas);
     }
 
@@ -80,7 +85,7 @@ public final class MapDrawings {
         Canvas canvas = new Canvas(g, type);
         painter.paint(canvas, layout, precision, false);
         String svg = SvgOutput.tidy(SvgOutput.printDocument(g, Ids.of("map", model.id()), size.widthMm(), layout.heightU(),
-                model.spec().title()));
+                model.spec().title()), precision.decimals());
         return drawn(DrawnMap.Format.PRINT_SVG, svg.getBytes(StandardCharsets.UTF_8), layout, "mm", canvas);
     }
 

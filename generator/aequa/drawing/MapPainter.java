@@ -93,7 +93,7 @@ final class MapPainter {
             canvas.begin("regions" + suffix);
             RegionLayer.paint(canvas, model, theme, fills, pages, panel.period(), regionPrefix, web, precision, circles);
             canvas.end();
-            RegionLayer.paintBorders(canvas, theme, pages, precision, suffix);
+            RegionLayer.paintBorders(canvas, theme, pages, precision, suffix, !web);
             if (graticule && !wholeGlobe) {
                 canvas.begin("graticule" + suffix);
                 canvas.stroke(PagePaths.lines(panel.fit().toPage(graticuleM), precision), c.graticule(), theme.lines().graticule().pt());

@@ -23,9 +23,18 @@ final class PagePaths {
     private PagePaths() {
     }
 
-    /** The filled outline of a Polygon or MultiPolygon (holes by the even-odd rule); empty for other types. */
+    /**
+     * The filled outline of a Polygon or MultiPolygon; empty for other types. Holes are cut by the even-odd
+     * rule (JTS does not fix ring orientation); without holes the default non-zero rule gives the same
+     * picture and saves the {@code fill-rule} attribute.
+     */
     static Path2D.Double area(Geometry pageGeometry, FixedDecimal precision) {
-        Path2D.Double path = new Path2D.Double(Path2D.WIND_EVEN_ODD);
+        boolean holes = false;
+        for (int i = 0; i < pageGeometry.getNumGeometries(); i++) {
+            Geometry part = pageGeometry.getGeometryN(i);
+            holes |= part instanceof Polygon && ((Polygon) part).getNumInteriorRing() > 0;
+        }
+        Path2D.Double path = new Path2D.Double(holes ? Path2D.WIND_EVEN_ODD : Path2D.WIND_NON_ZERO);
         for (int i = 0; i < pageGeometry.getNumGeometries(); i++) {
             Geometry part = pageGeometry.getGeometryN(i);
             if (part instanceof Polygon) {

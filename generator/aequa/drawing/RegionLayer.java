@@ -76,12 +76,19 @@ final class RegionLayer {
         }
     }
 
-    /** Inner borders (each shared edge once) and the outer edge, as two groups. */
-    static void paintBorders(Canvas canvas, Theme theme, List<Geometry> pageGeometries, FixedDecimal precision, String idSuffix) {
+    /**
+     * Inner borders (each shared edge once) and the outer edge, as two groups.
+     *
+     * @param inner false when the inner borders are drawn another way (web SVG: by a style rule)
+     */
+    static void paintBorders(Canvas canvas, Theme theme, List<Geometry> pageGeometries, FixedDecimal precision, String idSuffix,
+                             boolean inner) {
         Path2D.Double[] network = PagePaths.borders(pageGeometries, precision);
-        canvas.begin("borders" + idSuffix);
-        canvas.stroke(network[0], theme.colours().border(), theme.lines().border().pt());
-        canvas.end();
+        if (inner) {
+            canvas.begin("borders" + idSuffix);
+            canvas.stroke(network[0], theme.colours().border(), theme.lines().border().pt());
+            canvas.end();
+        }
         canvas.begin("outline" + idSuffix);
         canvas.stroke(network[1], theme.colours().outline(), theme.lines().outline().pt());
         canvas.end();

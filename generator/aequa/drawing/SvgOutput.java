@@ -30,8 +30,27 @@ final class SvgOutput {
         return g;
     }
 
-    /** Rounds float noise in style values to 4 decimals and drops the default {@code stroke-opacity:1.0}. */
-    static String tidy(String svg) {
+    private static final Pattern PATH_DATA = Pattern.compile(" d='([^']*)'");
+
+    /**
+     * Rounds float noise in style values to 4 decimals, drops the default {@code stroke-opacity:1.0}, and
+     * writes path data in the compact relative form ({@link PathCompactor}).
+     *
+     * @param decimals the decimals coordinates were written with
+     */
+    static String tidy(String svg, int decimals) {
+        PathCompactor compactor = new PathCompactor(decimals);
+        Matcher paths = PATH_DATA.matcher(tidyStyles(svg));
+        StringBuilder compact = new StringBuilder(svg.length());
+        while (paths.find()) {
+            paths.appendReplacement(compact, "");
+            compact.append(" d='").append(compactor.compact(paths.group(1))).append('\'');
+        }
+        paths.appendTail(compact);
+        return compact.toString();
+    }
+
+    private static String tidyStyles(String svg) {
         FixedDecimal four = new FixedDecimal(4);
         Matcher m = FLOAT_NOISE.matcher(svg);
         StringBuilder out = new StringBuilder(svg.length());
@@ -48,14 +67,16 @@ final class SvgOutput {
      * {@code aria-labelledby} pointing at a {@code <title>} and {@code <desc>} written first inside it
      * (WAI-ARIA 1.2 "img" role; the pattern recommended for inline SVG by the W3C SVG Accessibility API Mappings).
      */
-    static String webRoot(SVGGraphics2D g, String rootId, double width, double height, String title, String description) {
+    static String webRoot(SVGGraphics2D g, String rootId, double width, double height, String title, String description,
+                          String style) {
         String element = g.getSVGElement(rootId, false, new ViewBox(0, 0, width, height), null, null);
         int rootEnd = element.indexOf('>');
         String open = element.substring(0, rootEnd);
         String rest = element.substring(rootEnd + 1);
         return open + " class='aequa-map' role='img' aria-labelledby='" + rootId + "-title " + rootId + "-desc'>"
                 + "<title id='" + rootId + "-title'>" + escape(title) + "</title>"
-                + "<desc id='" + rootId + "-desc'>" + escape(description) + "</desc>" + rest;
+                + "<desc id='" + rootId + "-desc'>" + escape(description) + "</desc>"
+                + "<style>" + style + "</style>" + rest;
     }
 
     /** The print root: exact physical size in millimetres, one user unit per millimetre. */

@@ -18,7 +18,7 @@ import org.w3c.dom.NodeList;
 /** Test helper: an SVG parsed by the JDK's XML parser (javax.xml, a conforming XML 1.0 parser), with lookups. */
 final class SvgDoc {
 
-    private static final Pattern NUMBER = Pattern.compile("-?\\d+(?:\\.\\d+)?");
+    private static final Pattern NUMBER = Pattern.compile("-?(?:\\d+(?:\\.\\d*)?|\\.\\d+)");
 
     final Document document;
 
@@ -102,21 +102,41 @@ final class SvgDoc {
     }
 
     /**
-     * The area enclosed by a path of absolute M/L/Z commands (shoelace formula, summed over subpaths with
-     * their signs; holes wound opposite to their shell subtract, as in JTS's output).
+     * The area enclosed by a path of M (absolute), L (absolute), l (relative, with implicit repetition) and
+     * Z commands: the shoelace formula per subpath, signs summed (holes wound opposite to their shell
+     * subtract).
      */
     static double pathArea(String d) {
         double total = 0;
         for (String sub : d.split("(?=M)")) {
-            List<String> n = numbers(sub);
+            if (sub.isBlank()) {
+                continue;
+            }
+            List<double[]> points = new ArrayList<>();
+            Matcher m = Pattern.compile("([MLlZz])|(-?(?:\\d+(?:\\.\\d*)?|\\.\\d+))").matcher(sub);
+            char command = 'M';
+            List<Double> pending = new ArrayList<>();
+            double x = 0;
+            double y = 0;
+            while (m.find()) {
+                if (m.group(1) != null) {
+                    command = m.group(1).charAt(0);
+                    continue;
+                }
+                pending.add(Double.parseDouble(m.group(2)));
+                if (pending.size() == 2) {
+                    boolean relative = command == 'l';
+                    x = relative ? x + pending.get(0) : pending.get(0);
+                    y = relative ? y + pending.get(1) : pending.get(1);
+                    points.add(new double[]{x, y});
+                    pending.clear();
+                }
+            }
             double s = 0;
-            int count = n.size() / 2;
-            for (int i = 0; i < count; i++) {
-                double x1 = Double.parseDouble(n.get(2 * i));
-                double y1 = Double.parseDouble(n.get(2 * i + 1));
-                double x2 = Double.parseDouble(n.get(2 * ((i + 1) % count)));
-                double y2 = Double.parseDouble(n.get(2 * ((i + 1) % count) + 1));
-                s += x1 * y2 - x2 * y1;
+            for (int i = 0; i < points.size(); i++) {
+                double[] a = points.get(i);
+                double[] b = points.get((i + 1) % points.size());
+                s += a[0] * b[1] - b[0] * a[1];
             }
             total += s / 2;
         }
