@@ -42,8 +42,11 @@ final class LabelLayer {
         for (int i = 0; i < pageGeometries.size(); i++) {
             Geometry page = pageGeometries.get(i);
             Envelope e = page.getEnvelopeInternal();
-            if (page.isEmpty() || Math.min(e.getWidth(), e.getHeight()) < 2 * capU) {
-                continue; // too small to hold any label; skip the costly circle search
+            // a label box must lie inside the region, so a region narrower than its name can be skipped before
+            // the costly circle search (a necessary condition only; the real test follows)
+            if (page.isEmpty() || e.getHeight() < 2 * capU
+                    || e.getWidth() < type.width(model.regions().get(i).name(), plainSize, false)) {
+                continue;
             }
             Geometry largest = largestPart(page);
             MaximumInscribedCircle circle = new MaximumInscribedCircle(largest, capU / 4);

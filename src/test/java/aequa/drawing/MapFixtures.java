@@ -28,7 +28,7 @@ import aequa.statistics.FigureStatus;
  * in projected metres (every shared edge is computed from the edge's identity, so neighbours share their
  * vertices exactly, like a real coverage). Values, names and classes are invented; nothing here is an oracle.
  */
-final class MapFixtures {
+public final class MapFixtures {
 
     static final GeometryFactory FACTORY = new GeometryFactory();
     static final double CELL_M = 40_000;
@@ -44,7 +44,7 @@ final class MapFixtures {
         return build(cols, rows, List.of("2024"), "choropleth", ClassMethod.QUANTILE, 5, 4);
     }
 
-    static MapModel build(int cols, int rows, List<String> periods, String display, ClassMethod method, int classes, int edgePoints) {
+    public static MapModel build(int cols, int rows, List<String> periods, String display, ClassMethod method, int classes, int edgePoints) {
         List<Cell> cells = new ArrayList<>();
         for (int j = 0; j < rows; j++) {
             for (int i = 0; i < cols; i++) {
