@@ -1,0 +1,43 @@
+package aequa.drawing;
+
+/**
+ * The area scale of an equal-area map: a square whose area on the ground is a round number of km2. On an
+ * equal-area projection drawn at one uniform page scale s (page units per metre), every region's page area
+ * is its ground area times s^2, so one square states the scale everywhere; a linear scale bar would not,
+ * because lengths are distorted away from the projection's standard point or lines.
+ *
+ * @param areaKm2 the square's ground area: 1, 2 or 5 times a power of ten
+ * @param sideU   its side on the page: {@code sqrt(areaKm2 * 1e6) * s}
+ */
+public record AreaScale(double areaKm2, double sideU) {
+
+    private static final double[] NICE = {5, 2, 1};
+
+    /**
+     * The largest round area whose square is no wider than {@code targetSideU} at {@code scaleUnitsPerM}.
+     *
+     * @throws IllegalArgumentException if either argument is not positive
+     */
+    public static AreaScale choose(double scaleUnitsPerM, double targetSideU) {
+        if (!(scaleUnitsPerM > 0) || !(targetSideU > 0)) {
+            throw new IllegalArgumentException("scale and side must be positive: " + scaleUnitsPerM + ", " + targetSideU);
+        }
+        double sideM = targetSideU / scaleUnitsPerM;
+        double rawKm2 = sideM * sideM / 1e6;
+        double decade = Math.pow(10, Math.floor(Math.log10(rawKm2)));
+        double areaKm2 = decade;
+        for (double n : NICE) {
+            if (n * decade <= rawKm2 * (1 + 1e-12)) {
+                areaKm2 = n * decade;
+                break;
+            }
+        }
+        return new AreaScale(areaKm2, Math.sqrt(areaKm2 * 1e6) * scaleUnitsPerM);
+    }
+
+    /** {@code "10,000 km²"}, with decimals only below 1 km2. */
+    public String label() {
+        int decimals = areaKm2 >= 1 ? 0 : (int) Math.ceil(-Math.log10(areaKm2) - 1e-9);
+        return Numbers.format(areaKm2, decimals) + " km\u00b2";
+    }
+}

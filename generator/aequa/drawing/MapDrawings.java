@@ -1,0 +1,162 @@
+package aequa.drawing;
+
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.image.BufferedImage;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import javax.imageio.ImageIO;
+
+import org.jfree.pdf.PDFDocument;
+import org.jfree.pdf.Page;
+import org.jfree.svg.SVGGraphics2D;
+import org.jfree.svg.SVGUnits;
+
+import aequa.atlas.MapModel;
+
+/**
+ * Front door of the drawing stage: one {@link MapModel} to a web SVG, a print SVG, a PNG or a PDF, all
+ * painted by the same {@link MapPainter}. Every method is deterministic: the same model, theme and size
+ * give the same bytes on the same machine (fonts installed on the machine affect text measurement).
+ * Nothing is written to disk here.
+ */
+public final class MapDrawings {
+
+    /** PDF dates are replaced by this fixed instant so PDFs are reproducible (JFreePDF stamps the clock). */
+    private static final String FIXED_PDF_DATE = "D:20000101000000";
+    private static final Pattern PDF_DATE = Pattern.compile("/(ModDate|CreationDate) \\(D:\\d{14}");
+
+    private MapDrawings() {
+    }
+
+    /** The web SVG with the default web options (no title, labels, graticule for world maps). */
+    public static DrawnMap webSvg(MapModel model, Theme theme, WebSize size) {
+        return webSvg(model, theme, size, DrawOptions.web());
+    }
+
+    /**
+     * A responsive SVG for pages: viewBox in CSS pixels of {@code size.widthPx()}, no fixed width or height,
+     * {@code role="img"} with a title and description, each region a group {@code r-<key>} with data-key,
+     * data-name, data-value, data-class and a title. Coordinates to 0.1 px. Meant to be inlined in HTML.
+     */
+    public static DrawnMap webSvg(MapModel model, Theme theme, WebSize size, DrawOptions options) {
+        Medium medium = Medium.SCREEN;
+        double width = size.widthPx();
+        Typesetter type = new Typesetter(medium.unitsPerPt(width), Typesetter.installedFamily(theme.fonts().family()));
+        MapPainter painter = new MapPainter(model, theme, options);
+        Layout layout = painter.layout(type, medium, width, Double.NaN);
+        FixedDecimal precision = medium.coordinates();
+        SVGGraphics2D g = SvgOutput.graphics(width, layout.heightU(), SVGUnits.PX, precision, theme.fonts().cssStack(), "aequa-");
+        Canvas canvas = new Canvas(g, type);
+        painter.paint(canvas, layout, precision, true);
+        String rootId = Ids.of("map", model.id());
+        // region borders are drawn by this rule rather than as a second copy of every edge, which keeps large
+        // maps small; its specificity is lower than the page stylesheet's hover rule, so hovering still works
+        String borders = "svg.aequa-map g[data-key]>g>path{stroke:" + theme.colours().border().hex() + ";stroke-width:"
+                + new FixedDecimal(2).apply(theme.lines().border().pt() * type.unitsPerPt()) + "px;stroke-linejoin:round}";
+        String svg = SvgOutput.tidy(SvgOutput.webRoot(g, rootId, width, layout.heightU(), model.spec().title(),
+                Descriptions.of(model), borders), precision.decimals());
+        return drawn(DrawnMap.Format.WEB_SVG, svg.getBytes(StandardCharsets.UTF_8), layout, "px", canvas);
+    }
+
+    /** The print SVG with the default print options (title, labels, graticule for world maps). */
+    public static DrawnMap printSvg(MapModel model, Theme theme, PrintSize size) {
+        return printSvg(model, theme, size, DrawOptions.print());
+    }
+
+    /**
+     * A print SVG of exact physical size ({@code width="..mm" height="..mm"}, one user unit per millimetre),
+     * live text in the theme's font stack, named groups (background, title, regions, borders, outline, labels,
+     * legend, area-scale, caption, credits; per period on small multiples), no clipping masks, no rasters,
+     * coordinates to 0.01 mm. Run {@link PrintPreflight#check} on the result before writing it.
+     */
+    public static DrawnMap printSvg(MapModel model, Theme theme, PrintSize size, DrawOptions options) {
+        Medium medium = Medium.PRINT;
+        Typesetter type = new Typesetter(medium.unitsPerPt(size.widthMm()), Typesetter.installedFamily(theme.fonts().family()));
+        MapPainter painter = new MapPainter(model, theme, options);
+        Layout layout = painter.layout(type, medium, size.widthMm(), size.heightMm());
+        FixedDecimal precision = medium.coordinates();
+        SVGGraphics2D g = SvgOutput.graphics(size.widthMm(), layout.heightU(), SVGUnits.MM, precision, theme.fonts().cssStack(), "aequa-");
+        Canvas canvas = new Canvas(g, type);
+        painter.paint(canvas, layout, precision, false);
+        String svg = SvgOutput.tidy(SvgOutput.printDocument(g, Ids.of("map", model.id()), size.widthMm(), layout.heightU(),
+                model.spec().title()), precision.decimals());
+        return drawn(DrawnMap.Format.PRINT_SVG, svg.getBytes(StandardCharsets.UTF_8), layout, "mm", canvas);
+    }
+
+    /** A PNG with the web layout at {@code widthPx} CSS pixels, rendered at {@code scale} (1 or 2) device pixels per CSS pixel. */
+    public static DrawnMap png(MapModel model, Theme theme, int widthPx, int scale) {
+        return png(model, theme, widthPx, scale, DrawOptions.web().withTitle(true));
+    }
+
+    /** As {@link #png(MapModel, Theme, int, int)}, with options. The image is {@code widthPx*scale} pixels wide. */
+    public static DrawnMap png(MapModel model, Theme theme, int widthPx, int scale, DrawOptions options) {
+        if (scale < 1 || scale > 4) {
+            throw new IllegalArgumentException("scale must be 1..4: " + scale);
+        }
+        Medium medium = Medium.SCREEN;
+        WebSize size = new WebSize(widthPx);
+        Typesetter type = new Typesetter(medium.unitsPerPt(size.widthPx()), Typesetter.installedFamily(theme.fonts().family()));
+        MapPainter painter = new MapPainter(model, theme, options);
+        Layout layout = painter.layout(type, medium, widthPx, Double.NaN);
+        int heightPx = (int) Math.round(layout.heightU());
+        BufferedImage image = new BufferedImage(widthPx * scale, heightPx * scale, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = image.createGraphics();
+        try {
+            g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+            g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+            g.setRenderingHint(RenderingHints.KEY_FRACTIONALMETRICS, RenderingHints.VALUE_FRACTIONALMETRICS_ON);
+            g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
+            g.setRenderingHint(RenderingHints.KEY_RENDERING, RenderingHints.VALUE_RENDER_QUALITY);
+            g.scale(scale, scale);
+            Canvas canvas = new Canvas(g, type);
+            painter.paint(canvas, layout, new FixedDecimal(3), false);
+            ByteArrayOutputStream out = new ByteArrayOutputStream();
+            ImageIO.write(image, "png", out);
+            return drawn(DrawnMap.Format.PNG, out.toByteArray(), layout, "px", canvas);
+        } catch (IOException e) {
+            throw new UncheckedIOException("PNG encoding failed in memory", e);
+        } finally {
+            g.dispose();
+        }
+    }
+
+    /**
+     * A one-page PDF of the print layout (JFreePDF). Text is set in the PDF standard Helvetica, which
+     * JFreePDF maps Java's SansSerif to; it covers Latin text (JFreePDF writes MacRoman-encoded Type 1 text,
+     * so characters outside that set do not survive; use the print SVG for other scripts).
+     */
+    public static DrawnMap pdf(MapModel model, Theme theme, PrintSize size, DrawOptions options) {
+        Medium medium = Medium.PRINT;
+        Typesetter type = new Typesetter(medium.unitsPerPt(size.widthMm()), java.awt.Font.SANS_SERIF);
+        MapPainter painter = new MapPainter(model, theme, options);
+        Layout layout = painter.layout(type, medium, size.widthMm(), size.heightMm());
+        double ptPerMm = 72.0 / 25.4; // 1 inch = 25.4 mm = 72 pt
+        PDFDocument document = new PDFDocument();
+        document.setTitle(model.spec().title());
+        Page page = document.createPage(new java.awt.geom.Rectangle2D.Double(0, 0, size.widthMm() * ptPerMm, layout.heightU() * ptPerMm));
+        Graphics2D g = page.getGraphics2D();
+        g.scale(ptPerMm, ptPerMm);
+        Canvas canvas = new Canvas(g, type);
+        painter.paint(canvas, layout, medium.coordinates(), false);
+        return drawn(DrawnMap.Format.PDF, fixDates(document.getPDFBytes()), layout, "mm", canvas);
+    }
+
+    /** Overwrites JFreePDF's clock dates with a fixed one of the same length, so xref offsets stay valid. */
+    private static byte[] fixDates(byte[] pdf) {
+        String text = new String(pdf, StandardCharsets.ISO_8859_1);
+        Matcher m = PDF_DATE.matcher(text);
+        String fixed = m.replaceAll(r -> "/" + r.group(1) + " (" + FIXED_PDF_DATE);
+        return fixed.getBytes(StandardCharsets.ISO_8859_1);
+    }
+
+    private static DrawnMap drawn(DrawnMap.Format format, byte[] bytes, Layout layout, String unit, Canvas canvas) {
+        double scale = layout.panels().get(0).fit().scaleUnitsPerM();
+        return new DrawnMap(format, bytes, layout.widthU(), layout.heightU(), unit, scale, layout.areaScale(), canvas.inventory());
+    }
+}

@@ -1,0 +1,186 @@
+package aequa.drawing;
+
+import java.awt.geom.Rectangle2D;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.geom.Geometry;
+
+import aequa.atlas.MapModel;
+import aequa.atlas.MapRegion;
+import aequa.colour.Rgb;
+
+/**
+ * Paints one {@link MapModel} onto a {@link Canvas}: the single drawing path behind SVG, PNG and PDF.
+ * Layers, bottom to top, each a named group: background, title, per panel (globe and graticule, regions,
+ * borders, outline, symbols, labels, period label), legend, area scale, caption, credits.
+ */
+final class MapPainter {
+
+    /** Graticule spacing for world maps, degrees (common practice). */
+    private static final double WORLD_GRATICULE_DEG = 30;
+    /** Candidate spacings for regional maps, degrees; the finest giving at most six lines across is used. */
+    private static final double[] REGIONAL_GRATICULE_DEG = {1, 2, 5, 10, 15, 30};
+
+    private final MapModel model;
+    private final Theme theme;
+    private final DrawOptions options;
+    private final boolean circles;
+    private final boolean wholeGlobe;
+    private final boolean graticule;
+    private final Envelope extentM;
+
+    MapPainter(MapModel model, Theme theme, DrawOptions options) {
+        this.model = model;
+        this.theme = theme;
+        this.options = options;
+        this.circles = "circles".equals(model.spec().display());
+        this.wholeGlobe = GlobeLines.wholeGlobe(model.projection().projection());
+        this.graticule = options.graticule() == DrawOptions.Graticule.ALWAYS
+                || (options.graticule() == DrawOptions.Graticule.AUTO && wholeGlobe);
+        Envelope extent = new Envelope();
+        for (MapRegion region : model.regions()) {
+            if (!region.planarM().isEmpty()) {
+                extent.expandToInclude(region.planarM().getEnvelopeInternal());
+            }
+        }
+        if (wholeGlobe && graticule) {
+            extent.expandToInclude(GlobeLines.globe(model.projection().projection()).getEnvelopeInternal());
+        }
+        if (extent.isNull()) {
+            extent = new Envelope(-1, 1, -1, 1);
+        }
+        this.extentM = extent;
+    }
+
+    Layout layout(Typesetter type, Medium medium, double widthU, double fixedHeightU) {
+        return Layout.compute(model, theme, type, options, medium, widthU, fixedHeightU, extentM, circles);
+    }
+
+    /**
+     * @param web write data attributes and titles on regions
+     */
+    void paint(Canvas canvas, Layout layout, FixedDecimal precision, boolean web) {
+        Theme.Colours c = theme.colours();
+        Theme.TypeSizes sizes = theme.typePt();
+        Typesetter type = canvas.type();
+        canvas.begin("background");
+        canvas.fill(new Rectangle2D.Double(0, 0, layout.widthU(), layout.heightU()), c.background());
+        canvas.end();
+        if (!layout.titleLines().isEmpty()) {
+            canvas.begin("title");
+            double baseline = layout.titleTopU() + type.capHeight(sizes.title());
+            for (String line : layout.titleLines()) {
+                canvas.text(line, layout.marginU(), baseline, sizes.title(), true, Canvas.Anchor.START, c.text(), c.background());
+                baseline += type.lineHeight(sizes.title());
+            }
+            canvas.end();
+        }
+        RegionFills fills = new RegionFills(model, theme);
+        Geometry graticuleM = graticule ? graticuleLines() : null;
+        boolean multiple = layout.panels().size() > 1;
+        for (Layout.Panel panel : layout.panels()) {
+            String suffix = multiple ? "-" + Ids.of("p", model.periods().get(panel.period())).substring(2) : "";
+            String regionPrefix = multiple ? "r" + suffix : "r";
+            List<Geometry> pages = new ArrayList<>(model.regions().size());
+            for (MapRegion region : model.regions()) {
+                pages.add(panel.fit().toPage(region.planarM()));
+            }
+            if (graticule && wholeGlobe) {
+                paintGlobe(canvas, panel.fit(), graticuleM, precision, suffix);
+            }
+            canvas.begin("regions" + suffix);
+            RegionLayer.paint(canvas, model, theme, fills, pages, panel.period(), regionPrefix, web, precision, circles);
+            canvas.end();
+            RegionLayer.paintBorders(canvas, theme, pages, precision, suffix, !web);
+            if (graticule && !wholeGlobe) {
+                canvas.begin("graticule" + suffix);
+                canvas.stroke(PagePaths.lines(panel.fit().toPage(graticuleM), precision), c.graticule(), theme.lines().graticule().pt());
+                canvas.end();
+            }
+            if (circles && layout.symbols() != null) {
+                SymbolLayer.paint(canvas, model, theme, layout.symbols(), pages, panel.period(), "s" + suffix);
+            }
+            if (options.labels() && !multiple && !circles) {
+                LabelLayer.paint(canvas, model, theme, fills, pages, panel.period());
+            }
+            if (multiple) {
+                canvas.begin("period" + suffix);
+                canvas.text(panel.label(), panel.mapBox().getX(), panel.labelBaselineU(), sizes.legend(), true,
+                        Canvas.Anchor.START, c.text(), c.background());
+                canvas.end();
+            }
+        }
+        Rectangle2D legendBox = layout.legendBox();
+        canvas.begin("legend");
+        new Legend(model, theme, type, options.histogram(), layout.symbols())
+                .paint(canvas, legendBox.getX(), legendBox.getY(), legendBox.getWidth());
+        canvas.end();
+        paintAreaScale(canvas, layout);
+        paintParagraph(canvas, "caption", layout.captionLines(), layout.captionTopU(), layout.marginU(), c.textMuted());
+        paintParagraph(canvas, "credits", layout.creditLines(), layout.creditsTopU(), layout.marginU(), c.textMuted());
+    }
+
+    private Geometry graticuleLines() {
+        var projection = model.projection().projection();
+        if (wholeGlobe) {
+            return GlobeLines.graticule(projection, WORLD_GRATICULE_DEG);
+        }
+        double[] box = GlobeLines.geographicBox(projection, extentM, 2);
+        double span = Math.max(box[1] - box[0], box[3] - box[2]);
+        double spacing = REGIONAL_GRATICULE_DEG[REGIONAL_GRATICULE_DEG.length - 1];
+        for (double candidate : REGIONAL_GRATICULE_DEG) {
+            if (span / candidate <= 6) {
+                spacing = candidate;
+                break;
+            }
+        }
+        return GlobeLines.clip(GlobeLines.graticule(projection, spacing, box[0], box[1], box[2], box[3]), extentM);
+    }
+
+    private void paintGlobe(Canvas canvas, MapFit fit, Geometry graticuleM, FixedDecimal precision, String suffix) {
+        Theme.Colours c = theme.colours();
+        Geometry globe = fit.toPage(GlobeLines.globe(model.projection().projection()));
+        canvas.begin("globe" + suffix);
+        canvas.fill(PagePaths.area(globe, precision), c.sea());
+        canvas.stroke(PagePaths.lines(fit.toPage(graticuleM), precision), c.graticule(), theme.lines().graticule().pt());
+        canvas.stroke(PagePaths.area(globe, precision), c.outline(), theme.lines().outline().pt());
+        canvas.end();
+    }
+
+    private void paintAreaScale(Canvas canvas, Layout layout) {
+        Theme.Colours c = theme.colours();
+        double size = theme.typePt().legend();
+        Typesetter type = canvas.type();
+        Rectangle2D box = layout.scaleBox();
+        AreaScale scale = layout.areaScale();
+        canvas.begin("area-scale");
+        canvas.text("Area scale", box.getX(), box.getY() + type.capHeight(size), size, true, Canvas.Anchor.START, c.text(), c.background());
+        double squareTop = box.getY() + type.lineHeight(size) + 0.3 * size * type.unitsPerPt();
+        double side = scale.sideU();
+        Rectangle2D.Double square = new Rectangle2D.Double(box.getX(), squareTop, side, side);
+        canvas.precisely(() -> {
+            canvas.fill(square, c.background());
+            canvas.stroke(square, c.text(), theme.lines().border().pt());
+        });
+        canvas.text(scale.label(), box.getX() + side + 0.6 * size * type.unitsPerPt(), squareTop + side / 2 + type.capHeight(size) / 2,
+                size, false, Canvas.Anchor.START, c.text(), c.background());
+        canvas.end();
+    }
+
+    private void paintParagraph(Canvas canvas, String id, List<String> lines, double top, double x, Rgb colour) {
+        if (lines.isEmpty()) {
+            return;
+        }
+        double size = theme.typePt().caption();
+        Typesetter type = canvas.type();
+        canvas.begin(id);
+        double baseline = top + type.capHeight(size);
+        for (String line : lines) {
+            canvas.text(line, x, baseline, size, false, Canvas.Anchor.START, colour, theme.colours().background());
+            baseline += type.lineHeight(size);
+        }
+        canvas.end();
+    }
+}
