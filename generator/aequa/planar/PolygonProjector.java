@@ -27,10 +27,9 @@ import aequa.projection.EqualAreaProjection;
  * equal-area projection, cutting them at the projection's discontinuity first so nothing streaks across
  * the map. Immutable and thread-safe.
  *
- * <p>Two kinds of projection are told apart by probing, once: a projection is <em>continuous</em> across its
- * frame's antimeridian when points 1e-6 deg either side of it (at two frame latitudes inside the domain)
- * project within 10 m of each other. Azimuthal projections are; cylindrical, conic and pseudocylindrical
- * ones are not (there the two points land on opposite edges of the map).
+ * <p>Two kinds of projection are told apart by {@link AspectFrame#hasCut()}: azimuthal projections are
+ * continuous across their frame's antimeridian; cylindrical, conic and pseudocylindrical ones are cut there
+ * (points either side of it land on opposite edges of the map).
  * <ul>
  * <li>Cut projections: a part that lies within the frame's strip and latitude band, with no vertex within
  *     1e-9 deg of the cut, is projected as it is. Any other part goes through {@link AntimeridianCutter} in
@@ -40,9 +39,9 @@ import aequa.projection.EqualAreaProjection;
  *     own edge of the map; the nudge is far larger than the frame round trip's error (about 1e-13 deg) and
  *     far smaller than anything drawn. New edges along the cut are densified to the given step.</li>
  * <li>Continuous projections: parts are projected as they are (a region around the centre needs no cut);
- *     a part reaching beyond the frame's lowest latitude is clipped in the plane to the projected domain
- *     boundary (a densified circle of frame latitude {@code minFrameLatDeg}). Limit: a region that contains
- *     the centre's antipode is not supported (the chooser never picks an azimuthal projection for one).</li>
+ *     a part reaching beyond the frame's lowest latitude is clipped to it in frame coordinates by
+ *     {@link AntimeridianCutter} (the projection returns NaN beyond its domain, so clipping after
+ *     projecting would be too late) and its pieces are merged again once projected.</li>
  * </ul>
  * Parts of a region that were cut at +-180 in the source (RFC 7946, section 3.1.9) and meet again on a map
  * whose cut is elsewhere are merged (JTS OverlayNG union). Input vertices keep their exact lon/lat through this, so regions that share a border vertex for vertex
@@ -60,7 +59,6 @@ public final class PolygonProjector {
     private final AspectFrame frame;
     private final AntimeridianCutter.Options cutOptions;
     private final boolean continuous;
-    private final Geometry domainM;
 
     /**
      * @param projection     the map's projection
@@ -71,8 +69,7 @@ public final class PolygonProjector {
         this.frame = projection.frame();
         this.cutOptions = new AntimeridianCutter.Options(frame.minFrameLatDeg(), frame.maxFrameLatDeg(), CUT_NUDGE_DEG,
                 newEdgeStepDeg, AntimeridianCutter.PoleRule.ORIENTATION);
-        this.continuous = probeContinuity();
-        this.domainM = continuous && frame.minFrameLatDeg() > -90 ? domainBoundary() : null;
+        this.continuous = !frame.hasCut();
     }
 
     /** True when the projection has no cut at the frame's antimeridian (azimuthal projections). */
@@ -125,17 +122,29 @@ public final class PolygonProjector {
     private void projectPart(Polygon part, List<Polygon> out) {
         Map<Coordinate, Coordinate> geoByFrame = new HashMap<>();
         Polygon framePart = toFrame(part, geoByFrame);
-        if (continuous) {
+        boolean inside = framePart.getEnvelopeInternal().getMinY() >= frame.minFrameLatDeg();
+        if (continuous && inside) {
             Polygon projected = projectRings(part);
-            if (projected == null) {
-                return;
+            if (projected != null) {
+                out.add(projected);
             }
-            boolean inside = framePart.getEnvelopeInternal().getMinY() >= frame.minFrameLatDeg();
-            Geometry clipped = inside || domainM == null ? projected
-                    : OverlayNGRobust.overlay(projected, domainM, OverlayNG.INTERSECTION);
-            for (int i = 0; i < clipped.getNumGeometries(); i++) {
-                if (clipped.getGeometryN(i) instanceof Polygon && !clipped.getGeometryN(i).isEmpty()) {
-                    out.add((Polygon) clipped.getGeometryN(i));
+            return;
+        }
+        if (continuous) {
+            // clipped to the domain in the frame, where the cap's edge is a parallel; the pieces the cutter
+            // makes at the frame antimeridian meet again on the map (it is continuous there) and are merged
+            List<Polygon> pieces = new ArrayList<>();
+            for (Polygon piece : AntimeridianCutter.cut(framePart, cutOptions, METRES)) {
+                Polygon projected = projectRings(fromFrame(piece, geoByFrame));
+                if (projected != null) {
+                    pieces.add(projected);
+                }
+            }
+            Geometry merged = pieces.size() < 2 ? METRES.createMultiPolygon(pieces.toArray(new Polygon[0]))
+                    : OverlayNGRobust.union(METRES.createMultiPolygon(pieces.toArray(new Polygon[0])));
+            for (int i = 0; i < merged.getNumGeometries(); i++) {
+                if (merged.getGeometryN(i) instanceof Polygon polygon && !polygon.isEmpty()) {
+                    out.add(polygon);
                 }
             }
             return;
@@ -247,40 +256,4 @@ public final class PolygonProjector {
         return METRES.createLinearRing(new PackedCoordinateSequence.Double(java.util.Arrays.copyOf(xy, 2 * kept), 2, 0));
     }
 
-    private boolean probeContinuity() {
-        double[] east = new double[2];
-        double[] west = new double[2];
-        double span = frame.maxFrameLatDeg() - frame.minFrameLatDeg();
-        for (double fraction : new double[] {0.25, 0.5}) {
-            double lat = frame.minFrameLatDeg() + fraction * span;
-            frame.fromFrame(180 - 1e-6, lat, east);
-            frame.fromFrame(-180 + 1e-6, lat, west);
-            double[] xy = {east[0], east[1], west[0], west[1]};
-            projection.forward(xy, 0, xy, 0, 2);
-            if (!(Math.hypot(xy[0] - xy[2], xy[1] - xy[3]) < 10)) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    /** The projected boundary of the frame's lowest latitude, every 0.25 deg of frame longitude, as a polygon. */
-    private Geometry domainBoundary() {
-        int n = 1440;
-        double[] xy = new double[2 * n + 2];
-        double[] lonLat = new double[2];
-        for (int i = 0; i < n; i++) {
-            frame.fromFrame(-180 + 360.0 * i / n, frame.minFrameLatDeg(), lonLat);
-            xy[2 * i] = lonLat[0];
-            xy[2 * i + 1] = lonLat[1];
-        }
-        projection.forward(xy, 0, xy, 0, n);
-        xy[2 * n] = xy[0];
-        xy[2 * n + 1] = xy[1];
-        CoordinateList ring = new CoordinateList();
-        for (int i = 0; i <= n; i++) {
-            ring.add(new Coordinate(xy[2 * i], xy[2 * i + 1]), false);
-        }
-        return METRES.createPolygon(ring.toCoordinateArray());
-    }
 }

@@ -22,8 +22,11 @@ import java.util.Objects;
  *
  * <p>Tie-break: unconventional aspects must earn their place. Among the candidates whose score is within
  * {@value #CONVENTIONAL_MARGIN} (relative) plus {@value #CONVENTIONAL_MARGIN_DEG} deg of the best, the most
- * conventional wins: north-up normal aspects first (azimuthal, conic, normal cylindrical, world), then
- * transverse, then oblique. Stability: a previous choice that is still allowed is kept unless the new
+ * conventional wins: north-up normal aspects first (azimuthal, conic, normal cylindrical, Equal Earth), then
+ * Mollweide and the transverse aspect, then oblique. For whole-world data the largest omega sits at a pole
+ * for every world family and says little, so Equal Earth, whose straight parallels and flattened poles
+ * readers find familiar (Savric, Patterson and Jenny 2018, section 1), wins unless Mollweide is clearly
+ * better. Stability: a previous choice that is still allowed is kept unless the new
  * best scores at least {@value #STABILITY_MARGIN} (10 %) lower. Parameters are rounded to readable steps
  * ({@link #roundingStepDeg}).
  */
@@ -141,6 +144,7 @@ public final class ProjectionChooser {
     static int conventionality(ProjectionFamily family) {
         switch (family) {
             case CYLINDRICAL_TRANSVERSE:
+            case MOLLWEIDE:
                 return 1;
             case CYLINDRICAL_OBLIQUE:
                 return 2;

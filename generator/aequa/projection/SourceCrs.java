@@ -1,8 +1,6 @@
 package aequa.projection;
 
 import java.util.Optional;
-import java.util.logging.Level;
-import java.util.logging.Logger;
 
 import org.apache.sis.referencing.CRS;
 import org.apache.sis.referencing.CommonCRS;
@@ -25,11 +23,8 @@ import org.opengis.util.FactoryException;
  */
 public final class SourceCrs {
 
-    /** SIS logs a notice about its optional EPSG database; aequa needs none (see SisProjection). */
-    private static final Logger SIS_LOG = Logger.getLogger("org.apache.sis");
-
     static {
-        SIS_LOG.setLevel(Level.SEVERE);
+        SisLogging.silence();
     }
 
     private SourceCrs() {

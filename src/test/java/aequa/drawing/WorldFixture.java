@@ -11,10 +11,9 @@ import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
 import aequa.classes.ClassMethod;
 import aequa.classes.Classification;
-import aequa.projection.AspectFrame;
 import aequa.projection.EqualAreaProjection;
 import aequa.projection.ProjectionFamily;
-import aequa.projection.ProjectionParameter;
+import aequa.projection.Projections;
 import aequa.statistics.FigureStatus;
 
 /**
@@ -24,75 +23,12 @@ import aequa.statistics.FigureStatus;
  */
 final class WorldFixture {
 
-    private static final double R_M = 6_371_007.2; // authalic radius of WGS 84 (Snyder 1987, p. 16, from memory)
-
     private WorldFixture() {
     }
 
+    /** The world fixture's projection: normal-aspect Lambert cylindrical equal-area on WGS 84. */
     static EqualAreaProjection cylindrical() {
-        return new EqualAreaProjection() {
-            @Override
-            public ProjectionFamily family() {
-                return ProjectionFamily.CYLINDRICAL;
-            }
-
-            @Override
-            public List<ProjectionParameter> parameters() {
-                return List.of(new ProjectionParameter("Longitude of natural origin", "centre-lon", 0, "deg"));
-            }
-
-            @Override
-            public void forward(double[] src, int so, double[] dst, int d, int count) {
-                for (int k = 0; k < count; k++) {
-                    double lon = src[so + 2 * k];
-                    double lat = src[so + 2 * k + 1];
-                    dst[d + 2 * k] = R_M * Math.toRadians(lon);
-                    dst[d + 2 * k + 1] = R_M * Math.sin(Math.toRadians(lat));
-                }
-            }
-
-            @Override
-            public void inverse(double[] src, int so, double[] dst, int d, int count) {
-                for (int k = 0; k < count; k++) {
-                    double x = src[so + 2 * k];
-                    double y = src[so + 2 * k + 1];
-                    dst[d + 2 * k] = Math.toDegrees(x / R_M);
-                    dst[d + 2 * k + 1] = Math.toDegrees(Math.asin(y / R_M));
-                }
-            }
-
-            @Override
-            public AspectFrame frame() {
-                return new AspectFrame() {
-                    @Override
-                    public void toFrame(double lonDeg, double latDeg, double[] out) {
-                        out[0] = lonDeg;
-                        out[1] = latDeg;
-                    }
-
-                    @Override
-                    public void fromFrame(double frameLonDeg, double frameLatDeg, double[] out) {
-                        out[0] = frameLonDeg;
-                        out[1] = frameLatDeg;
-                    }
-
-                    @Override
-                    public double minFrameLatDeg() {
-                        return -90;
-                    }
-
-                    @Override
-                    public double maxFrameLatDeg() {
-                        return 90;
-                    }
-                };
-            }
-
-            @Override
-            public String wkt2() {
-                return "";
-            }
-        };
+        return Projections.create(ProjectionFamily.CYLINDRICAL, java.util.Map.of("centre-lon", 0.0));
     }
 
     static MapModel model() {
