@@ -10,7 +10,8 @@ import picocli.CommandLine.ScopeType;
 /** Entry point: parses the command line and turns each command's outcome into an exit code. */
 @Command(name = "aequa", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Publishes static web sites of equal-area thematic maps.",
-        subcommands = {AuditCommand.class, ExplainCommand.class, ScaffoldCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {PublishCommand.class, AuditCommand.class, ExplainCommand.class, ScaffoldCommand.class,
+                PreviewCommand.class, CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:success",
                 "1:the data has problems that the project file treats as errors",

@@ -34,8 +34,7 @@ final class GlobeLines {
 
     /** True when the projection shows the whole globe (a world map), so the globe's outline is drawn. */
     static boolean wholeGlobe(EqualAreaProjection projection) {
-        AspectFrame frame = projection.frame();
-        return frame.minFrameLatDeg() <= -89.999 && frame.maxFrameLatDeg() >= 89.999;
+        return projection.family().world();
     }
 
     /** Meridians and parallels every {@code spacingDeg} degrees over the whole globe, in metres. */

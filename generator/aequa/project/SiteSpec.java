@@ -6,10 +6,17 @@ package aequa.project;
  * @param notice    a sentence shown on every page (for example that the data is invented), or empty
  * @param theme     a theme name from themes/ or the project's own themes/ folder
  * @param language  the pages' language tag (BCP 47)
+ * @param printWidth the width of the print SVGs: a column preset ({@code one-column}, {@code two-columns},
+ *                   {@code three-columns}, {@code full-width}) or a width in millimetres such as {@code "120 mm"}
  */
-public record SiteSpec(String title, String publisher, String notice, String theme, String language) {
+public record SiteSpec(String title, String publisher, String notice, String theme, String language, String printWidth) {
 
-    static final SiteSpec DEFAULT = new SiteSpec(null, null, null, null, null);
+    static final SiteSpec DEFAULT = new SiteSpec(null, null, null, null, null, null);
+
+    /** A site with the default print width. */
+    public SiteSpec(String title, String publisher, String notice, String theme, String language) {
+        this(title, publisher, notice, theme, language, null);
+    }
 
     public SiteSpec {
         title = title == null ? "Maps" : title;
@@ -17,5 +24,6 @@ public record SiteSpec(String title, String publisher, String notice, String the
         notice = notice == null ? "" : notice;
         theme = theme == null ? "daylight" : theme;
         language = language == null ? "en" : language;
+        printWidth = printWidth == null ? "two-columns" : printWidth;
     }
 }

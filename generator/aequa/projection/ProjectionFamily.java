@@ -9,20 +9,27 @@ import java.util.Optional;
  * WGS 84 ellipsoid. {@link #configName()} is the name used in project files and report.json.
  */
 public enum ProjectionFamily {
-    LAMBERT_AZIMUTHAL("lambert-azimuthal", "Lambert azimuthal equal-area"),
-    ALBERS_CONIC("albers-conic", "Albers equal-area conic"),
-    CYLINDRICAL("cylindrical", "Lambert cylindrical equal-area"),
-    CYLINDRICAL_TRANSVERSE("cylindrical-transverse", "Transverse cylindrical equal-area"),
-    CYLINDRICAL_OBLIQUE("cylindrical-oblique", "Oblique cylindrical equal-area"),
-    EQUAL_EARTH("equal-earth", "Equal Earth"),
-    MOLLWEIDE("mollweide", "Mollweide");
+    LAMBERT_AZIMUTHAL("lambert-azimuthal", "Lambert azimuthal equal-area", false),
+    ALBERS_CONIC("albers-conic", "Albers equal-area conic", false),
+    CYLINDRICAL("cylindrical", "Lambert cylindrical equal-area", false),
+    CYLINDRICAL_TRANSVERSE("cylindrical-transverse", "Transverse cylindrical equal-area", false),
+    CYLINDRICAL_OBLIQUE("cylindrical-oblique", "Oblique cylindrical equal-area", false),
+    EQUAL_EARTH("equal-earth", "Equal Earth", true),
+    MOLLWEIDE("mollweide", "Mollweide", true);
 
     private final String configName;
     private final String displayName;
+    private final boolean world;
 
-    ProjectionFamily(String configName, String displayName) {
+    ProjectionFamily(String configName, String displayName, boolean world) {
         this.configName = configName;
         this.displayName = displayName;
+        this.world = world;
+    }
+
+    /** True for the families made to show the whole globe in one piece (drawn with its outline). */
+    public boolean world() {
+        return world;
     }
 
     /** Kebab-case name used in project files, report.json and {@code explain --json}. */

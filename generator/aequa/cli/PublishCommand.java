@@ -1,0 +1,33 @@
+package aequa.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** Builds the site: checks every input, draws every map and swaps the new site into place. */
+@Command(name = "publish", mixinStandardHelpOptions = true,
+        description = {"Build the site of a project into an output folder.",
+                "Nothing is written when the data has errors; the previous site stays as it was until the new one is complete."})
+final class PublishCommand implements Callable<Integer> {
+
+    @Parameters(paramLabel = "PROJECT_DIR", defaultValue = "data-demo", description = "The project folder (default: ${DEFAULT-VALUE}).")
+    Path projectDir;
+
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = "site-out", description = "The output folder (default: ${DEFAULT-VALUE}).")
+    Path outDir;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws IOException {
+        return new SiteBuilder(spec.commandLine().getOut(), spec.commandLine().getErr())
+                .build(projectDir, outDir, true).code;
+    }
+}

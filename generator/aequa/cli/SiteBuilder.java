@@ -1,0 +1,90 @@
+package aequa.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Optional;
+
+import aequa.atlas.Atlas;
+import aequa.atlas.AtlasLoader;
+import aequa.atlas.LoadOptions;
+import aequa.drawing.PrintSize;
+import aequa.drawing.Theme;
+import aequa.drawing.Themes;
+import aequa.findings.Finding;
+import aequa.findings.Findings;
+import aequa.project.LoadedProject;
+import aequa.project.ProjectFile;
+import aequa.project.ProjectLoader;
+import aequa.publish.DrawingArtwork;
+import aequa.publish.PreviousProjections;
+import aequa.publish.PublishOptions;
+import aequa.publish.PublishProgress;
+import aequa.publish.PublishRefusedException;
+import aequa.publish.PublishResult;
+import aequa.publish.SiteLockedException;
+import aequa.publish.SitePublisher;
+
+/**
+ * One whole build, as {@code publish} and {@code preview} run it: load the project (step 1), stop with the
+ * findings if the data has errors, otherwise publish (step 2). Returns the exit code; writes nothing at all
+ * when it fails.
+ */
+final class SiteBuilder {
+
+    private final PrintWriter out;
+    private final PrintWriter err;
+
+    SiteBuilder(PrintWriter out, PrintWriter err) {
+        this.out = out;
+        this.err = err;
+    }
+
+    ExitCode build(Path projectDir, Path outDir, boolean showProgress) throws IOException {
+        Findings findings = new Findings();
+        Optional<LoadedProject> loaded = ProjectLoader.load(projectDir, findings);
+        if (loaded.isEmpty()) {
+            FindingsPrinter.print(findings.list(), err, false);
+            return ExitCode.USAGE;
+        }
+        LoadedProject project = loaded.get();
+        Findings setup = new Findings();
+        Theme theme = Themes.load(project.dir(), project.file().site().theme(), setup);
+        Optional<PrintSize> printSize = PrintWidths.parse(project.file().site().printWidth());
+        if (printSize.isEmpty()) {
+            setup.add(Finding.error("project-bad-value", ProjectFile.FILE_NAME, project.places().place("/site/print-width"),
+                    "'" + project.file().site().printWidth() + "' is not a print width.", "Use " + PrintWidths.choices() + "."));
+        }
+        if (setup.hasErrors()) {
+            FindingsPrinter.print(setup.list(), err, false);
+            return ExitCode.USAGE;
+        }
+        LoadOptions options = new LoadOptions(theme.colours().background(), PreviousProjections.read(outDir));
+        Atlas atlas = AtlasLoader.load(project, options, findings);
+        FindingsPrinter.print(findings.list(), err, false);
+        if (findings.hasErrors()) {
+            err.println("aequa: nothing was published: " + FindingsPrinter.tally(findings.list())
+                    + ". The site in " + outDir + " is unchanged.");
+            return ExitCode.DATA_PROBLEMS;
+        }
+        DrawingArtwork artwork = new DrawingArtwork(theme, printSize.get(), new Version().getVersion()[0]);
+        PublishOptions publishOptions = PublishOptions.defaults()
+                .withProgress(showProgress ? PublishProgress.forTerminal(System.err) : PublishProgress.silent());
+        PublishResult result;
+        try {
+            result = SitePublisher.publish(atlas, findings.list(), artwork, outDir, publishOptions);
+        } catch (SiteLockedException e) {
+            err.println("aequa: " + e.getMessage());
+            return ExitCode.USAGE;
+        } catch (PublishRefusedException e) {
+            err.println("aequa: " + e.getMessage());
+            return ExitCode.USAGE;
+        }
+        FindingsPrinter.print(artwork.preflightFindings(), err, false);
+        for (var map : atlas.maps()) {
+            out.println(MapSummary.line(map));
+        }
+        out.println(result.summary());
+        return ExitCode.OK;
+    }
+}

@@ -1,0 +1,64 @@
+package aequa.publish;
+
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.List;
+
+import aequa.atlas.MapModel;
+import aequa.drawing.DrawnMap;
+import aequa.drawing.MapDrawings;
+import aequa.drawing.PrintPreflight;
+import aequa.drawing.PrintSize;
+import aequa.drawing.Theme;
+import aequa.drawing.WebSize;
+import aequa.findings.Finding;
+
+/**
+ * The pictures of each map, drawn by the drawing stage in one theme. Every print drawing passes the print
+ * preflight before it is handed over; what the preflight finds is kept for the terminal summary.
+ */
+public final class DrawingArtwork implements MapArtwork {
+
+    private final Theme theme;
+    private final PrintSize printSize;
+    private final String version;
+    private final List<Finding> preflight = new ArrayList<>();
+
+    /**
+     * @param theme     the site's theme
+     * @param printSize the physical size of the print SVGs
+     * @param version   aequa's version, part of the fingerprint so a new release redraws every map
+     */
+    public DrawingArtwork(Theme theme, PrintSize printSize, String version) {
+        this.theme = theme;
+        this.printSize = printSize;
+        this.version = version;
+    }
+
+    @Override
+    public String webSvg(MapModel map) {
+        return new String(MapDrawings.webSvg(map, theme, WebSize.STANDARD).bytes(), StandardCharsets.UTF_8);
+    }
+
+    @Override
+    public byte[] printSvg(MapModel map) {
+        DrawnMap drawn = MapDrawings.printSvg(map, theme, printSize);
+        preflight.addAll(PrintPreflight.check(map, theme, drawn, "maps/" + map.id() + "/" + map.id() + ".svg"));
+        return drawn.bytes();
+    }
+
+    @Override
+    public byte[] png(MapModel map, int widthPx) {
+        return MapDrawings.png(map, theme, widthPx, 1).bytes();
+    }
+
+    @Override
+    public String fingerprint() {
+        return Sha256.of((version + "\n" + theme + "\n" + printSize).getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** What the print preflight found in the drawings made so far (maps carried over are not redrawn). */
+    public List<Finding> preflightFindings() {
+        return List.copyOf(preflight);
+    }
+}
