@@ -63,33 +63,6 @@ public final class AntimeridianCutter {
     private AntimeridianCutter() {
     }
 
-    /** True when the polygon needs no cutting or clipping: no edge spans the cut, no vertex on it, all in the band. */
-    public static boolean fitsFrame(Polygon frame, Options options) {
-        if (!fitsRing(frame.getExteriorRing().getCoordinates(), options)) {
-            return false;
-        }
-        for (int h = 0; h < frame.getNumInteriorRing(); h++) {
-            if (!fitsRing(frame.getInteriorRingN(h).getCoordinates(), options)) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    private static boolean fitsRing(Coordinate[] ring, Options options) {
-        for (int i = 0; i < ring.length; i++) {
-            Coordinate c = ring[i];
-            if (Math.abs(c.x) >= 180 - SNAP_DEG || c.y < options.minLatDeg() || c.y > options.maxLatDeg()
-                    || Math.abs(c.y) >= 90 - SNAP_DEG) {
-                return false;
-            }
-            if (i > 0 && Math.abs(c.x - ring[i - 1].x) > 180) {
-                return false;
-            }
-        }
-        return true;
-    }
-
     /**
      * @param frame   a polygon in frame lon/lat degrees (x = frame longitude in [-180, 180])
      * @param factory the factory for the pieces

@@ -37,7 +37,7 @@ final class AuthalicCylindricalProjection implements EqualAreaProjection {
 
     @Override
     public ProjectionFamily family() {
-        return ProjectionFamily.values()[0];
+        return ProjectionFamily.CYLINDRICAL;
     }
 
     @Override
