@@ -113,13 +113,13 @@ public final class AntimeridianCutter {
 
     private static Polygon mapBack(Polygon piece, int strip, Options options, Map<Coordinate, Coordinate> originals,
                                    GeometryFactory factory) {
-        LinearRing shell = mapBack((LinearRing) piece.getExteriorRing(), strip, options, originals, factory);
+        LinearRing shell = mapBack(piece.getExteriorRing(), strip, options, originals, factory);
         if (shell == null) {
             return null;
         }
         List<LinearRing> holes = new ArrayList<>();
         for (int h = 0; h < piece.getNumInteriorRing(); h++) {
-            LinearRing hole = mapBack((LinearRing) piece.getInteriorRingN(h), strip, options, originals, factory);
+            LinearRing hole = mapBack(piece.getInteriorRingN(h), strip, options, originals, factory);
             if (hole != null) {
                 holes.add(hole);
             }
