@@ -63,33 +63,6 @@ public final class AntimeridianCutter {
     private AntimeridianCutter() {
     }
 
-    /** True when the polygon needs no cutting or clipping: no edge spans the cut, no vertex on it, all in the band. */
-    public static boolean fitsFrame(Polygon frame, Options options) {
-        if (!fitsRing(frame.getExteriorRing().getCoordinates(), options)) {
-            return false;
-        }
-        for (int h = 0; h < frame.getNumInteriorRing(); h++) {
-            if (!fitsRing(frame.getInteriorRingN(h).getCoordinates(), options)) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    private static boolean fitsRing(Coordinate[] ring, Options options) {
-        for (int i = 0; i < ring.length; i++) {
-            Coordinate c = ring[i];
-            if (Math.abs(c.x) >= 180 - SNAP_DEG || c.y < options.minLatDeg() || c.y > options.maxLatDeg()
-                    || Math.abs(c.y) >= 90 - SNAP_DEG) {
-                return false;
-            }
-            if (i > 0 && Math.abs(c.x - ring[i - 1].x) > 180) {
-                return false;
-            }
-        }
-        return true;
-    }
-
     /**
      * @param frame   a polygon in frame lon/lat degrees (x = frame longitude in [-180, 180])
      * @param factory the factory for the pieces
@@ -140,13 +113,13 @@ public final class AntimeridianCutter {
 
     private static Polygon mapBack(Polygon piece, int strip, Options options, Map<Coordinate, Coordinate> originals,
                                    GeometryFactory factory) {
-        LinearRing shell = mapBack((LinearRing) piece.getExteriorRing(), strip, options, originals, factory);
+        LinearRing shell = mapBack(piece.getExteriorRing(), strip, options, originals, factory);
         if (shell == null) {
             return null;
         }
         List<LinearRing> holes = new ArrayList<>();
         for (int h = 0; h < piece.getNumInteriorRing(); h++) {
-            LinearRing hole = mapBack((LinearRing) piece.getInteriorRingN(h), strip, options, originals, factory);
+            LinearRing hole = mapBack(piece.getInteriorRingN(h), strip, options, originals, factory);
             if (hole != null) {
                 holes.add(hole);
             }

@@ -1,6 +1,7 @@
 package aequa.planar;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -8,6 +9,7 @@ import java.util.Map;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.CoordinateList;
 import org.locationtech.jts.geom.CoordinateSequence;
+import org.locationtech.jts.geom.CoordinateSequenceFilter;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.LinearRing;
@@ -51,6 +53,9 @@ import aequa.projection.EqualAreaProjection;
 public final class PolygonProjector {
 
     static final double CUT_NUDGE_DEG = 1e-9;
+
+    /** Same as the cutter's snap: frame longitudes this close to +-180 (latitudes to +-90) count as on the cut (pole). */
+    private static final double CUT_SNAP_DEG = 1e-9;
 
     private static final GeometryFactory METRES =
             new GeometryFactory(new PrecisionModel(), 0, PackedCoordinateSequenceFactory.DOUBLE_FACTORY);
@@ -100,7 +105,7 @@ public final class PolygonProjector {
 
     private static boolean touchesAntimeridian(Geometry lonLat) {
         boolean[] found = {false};
-        lonLat.apply((org.locationtech.jts.geom.CoordinateSequenceFilter) new org.locationtech.jts.geom.CoordinateSequenceFilter() {
+        lonLat.apply(new CoordinateSequenceFilter() {
             @Override
             public void filter(CoordinateSequence seq, int i) {
                 found[0] |= Math.abs(seq.getX(i)) == 180;
@@ -120,9 +125,8 @@ public final class PolygonProjector {
     }
 
     private void projectPart(Polygon part, List<Polygon> out) {
-        Map<Coordinate, Coordinate> geoByFrame = new HashMap<>();
-        Polygon framePart = toFrame(part, geoByFrame);
-        boolean inside = framePart.getEnvelopeInternal().getMinY() >= frame.minFrameLatDeg();
+        FrameScan scan = scan(part);
+        boolean inside = scan.minFrameLatDeg >= frame.minFrameLatDeg();
         if (continuous && inside) {
             Polygon projected = projectRings(part);
             if (projected != null) {
@@ -133,6 +137,8 @@ public final class PolygonProjector {
         if (continuous) {
             // clipped to the domain in the frame, where the cap's edge is a parallel; the pieces the cutter
             // makes at the frame antimeridian meet again on the map (it is continuous there) and are merged
+            Map<Coordinate, Coordinate> geoByFrame = new HashMap<>();
+            Polygon framePart = toFrame(part, geoByFrame);
             List<Polygon> pieces = new ArrayList<>();
             for (Polygon piece : AntimeridianCutter.cut(framePart, cutOptions, METRES)) {
                 Polygon projected = projectRings(fromFrame(piece, geoByFrame));
@@ -149,19 +155,48 @@ public final class PolygonProjector {
             }
             return;
         }
-        if (AntimeridianCutter.fitsFrame(framePart, cutOptions)) {
+        if (scan.fitsFrame) {
             Polygon projected = projectRings(part);
             if (projected != null) {
                 out.add(projected);
             }
             return;
         }
+        Map<Coordinate, Coordinate> geoByFrame = new HashMap<>();
+        Polygon framePart = toFrame(part, geoByFrame);
         for (Polygon piece : AntimeridianCutter.cut(framePart, cutOptions, METRES)) {
             Polygon projected = projectRings(fromFrame(piece, geoByFrame));
             if (projected != null) {
                 out.add(projected);
             }
         }
+    }
+
+    /** What the frame coordinates of a part say, found without building any geometry (the common, fast case). */
+    private static final class FrameScan {
+        double minFrameLatDeg = Double.POSITIVE_INFINITY;
+        boolean fitsFrame = true;
+    }
+
+    private FrameScan scan(Polygon part) {
+        FrameScan scan = new FrameScan();
+        double[] xy = new double[2];
+        for (int r = -1; r < part.getNumInteriorRing(); r++) {
+            CoordinateSequence ring = (r < 0 ? part.getExteriorRing() : part.getInteriorRingN(r)).getCoordinateSequence();
+            double previousX = Double.NaN;
+            for (int i = 0; i < ring.size(); i++) {
+                frame.toFrame(ring.getX(i), ring.getY(i), xy);
+                scan.minFrameLatDeg = Math.min(scan.minFrameLatDeg, xy[1]);
+                boolean onCut = Math.abs(xy[0]) >= 180 - CUT_SNAP_DEG;
+                boolean offBand = xy[1] < frame.minFrameLatDeg() || xy[1] > frame.maxFrameLatDeg() || Math.abs(xy[1]) >= 90 - CUT_SNAP_DEG;
+                boolean crossing = Math.abs(xy[0] - previousX) > 180;
+                if (onCut || offBand || crossing) {
+                    scan.fitsFrame = false;
+                }
+                previousX = xy[0];
+            }
+        }
+        return scan;
     }
 
     private Polygon toFrame(Polygon lonLat, Map<Coordinate, Coordinate> geoByFrame) {
@@ -253,7 +288,7 @@ public final class PolygonProjector {
         if (kept < 4) {
             return null;
         }
-        return METRES.createLinearRing(new PackedCoordinateSequence.Double(java.util.Arrays.copyOf(xy, 2 * kept), 2, 0));
+        return METRES.createLinearRing(new PackedCoordinateSequence.Double(Arrays.copyOf(xy, 2 * kept), 2, 0));
     }
 
 }

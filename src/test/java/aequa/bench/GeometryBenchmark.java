@@ -1,0 +1,130 @@
+package aequa.bench;
+
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryPoolMXBean;
+import java.lang.management.MemoryType;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.TimeUnit;
+
+import org.locationtech.jts.geom.Geometry;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Level;
+import org.openjdk.jmh.annotations.Measurement;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.TearDown;
+import org.openjdk.jmh.annotations.Warmup;
+
+import aequa.ellipsoid.LonLatDensifier;
+import aequa.findings.Findings;
+import aequa.inputs.regions.Region;
+import aequa.inputs.regions.RegionReaders;
+import aequa.planar.CoverageSimplification;
+import aequa.planar.PolygonProjector;
+import aequa.project.RegionSourceSpec;
+import aequa.projection.EqualAreaProjection;
+import aequa.projection.Projections;
+
+/**
+ * The geometry stage end to end on one core: read GeoJSON (streaming) -> densify -> project (Lambert
+ * azimuthal equal-area through SIS) -> coverage simplification for a 1,000-pixel-wide map, on a synthetic
+ * Voronoi coverage ({@link SyntheticCoverage}). Throughput = input vertices / time per run.
+ *
+ * <pre>
+ * mvn -o -q -Pbench test-compile exec:exec -Dbench=GeometryBenchmark -DbenchArgs="-p cells=100000"
+ * </pre>
+ * Peak heap, in a fresh JVM (run {@link #main} with {@code heap CELLS}), is the sum of the heap pools' peak
+ * usage over one run, reported against the GeoJSON file's size.
+ */
+@State(Scope.Benchmark)
+@BenchmarkMode(Mode.SingleShotTime)
+@OutputTimeUnit(TimeUnit.MILLISECONDS)
+@Fork(value = 1, jvmArgsAppend = {"-Xmx4g"})
+@Warmup(iterations = 2)
+@Measurement(iterations = 5)
+public class GeometryBenchmark {
+
+    /** Map width the tolerance and densification are chosen for, pixels. */
+    private static final double OUTPUT_WIDTH_PX = 1000;
+
+    @Param({"100000"})
+    public int cells;
+
+    private Path dir;
+    private long vertices;
+
+    @Setup(Level.Trial)
+    public void writeCoverage() throws Exception {
+        dir = Files.createTempDirectory("aequa-bench");
+        vertices = SyntheticCoverage.write(dir.resolve("cells.geojson"), cells, 20261202L);
+        System.out.printf(Locale.ROOT, "%n%d cells, %d vertices, %.1f MB of GeoJSON%n", cells, vertices,
+                Files.size(dir.resolve("cells.geojson")) / 1e6);
+    }
+
+    @TearDown(Level.Trial)
+    public void deleteCoverage() throws Exception {
+        Files.deleteIfExists(dir.resolve("cells.geojson"));
+        Files.deleteIfExists(dir);
+    }
+
+    @Benchmark
+    public List<Geometry> readDensifyProjectSimplify() {
+        return run(dir);
+    }
+
+    /** One end-to-end run; returns the simplified coverage. */
+    static List<Geometry> run(Path dir) {
+        Findings findings = new Findings();
+        List<Region> regions = new ArrayList<>(RegionReaders.read(dir, new RegionSourceSpec("cells.geojson", "@id", "name", ""), findings));
+        if (findings.hasErrors()) {
+            throw new IllegalStateException(findings.list().toString());
+        }
+        EqualAreaProjection laea = Projections.lambertAzimuthal(SyntheticCoverage.BOX.centre().x, SyntheticCoverage.BOX.centre().y);
+        double mapWidthM = 4_000_000; // the box is about 3,500 km wide at 52.5 N
+        double stepDeg = LonLatDensifier.stepDeg(mapWidthM, OUTPUT_WIDTH_PX);
+        PolygonProjector projector = new PolygonProjector(laea, stepDeg);
+        List<String> keys = new ArrayList<>(regions.size());
+        List<Geometry> planar = new ArrayList<>(regions.size());
+        for (int i = 0; i < regions.size(); i++) {
+            Region region = regions.set(i, null); // lon/lat no longer needed once projected: let it go
+            keys.add(region.key());
+            planar.add(projector.project(LonLatDensifier.densify(region.lonLat(), stepDeg)));
+        }
+        double toleranceM = CoverageSimplification.screenToleranceM(mapWidthM, OUTPUT_WIDTH_PX);
+        return CoverageSimplification.simplify(keys, planar, toleranceM, CoverageSimplification.islandThresholdM2(toleranceM)).planarM();
+    }
+
+    /** {@code heap CELLS}: one run in this JVM, then peak heap against file size; prints one line. */
+    public static void main(String[] args) throws Exception {
+        int cells = Integer.parseInt(args[1]);
+        Path dir = Files.createTempDirectory("aequa-heap");
+        long vertices = SyntheticCoverage.write(dir.resolve("cells.geojson"), cells, 20261202L);
+        long fileBytes = Files.size(dir.resolve("cells.geojson"));
+        System.gc();
+        List<MemoryPoolMXBean> heapPools = new ArrayList<>();
+        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
+            if (pool.getType() == MemoryType.HEAP) {
+                pool.resetPeakUsage();
+                heapPools.add(pool);
+            }
+        }
+        long start = System.nanoTime();
+        int kept = run(dir).size();
+        double seconds = (System.nanoTime() - start) / 1e9;
+        long peak = heapPools.stream().mapToLong(p -> p.getPeakUsage().getUsed()).sum();
+        System.out.printf(Locale.ROOT, "cells=%d vertices=%d file=%.1f MB peakHeap=%.1f MB ratio=%.2f time=%.2f s (%.2f M vertices/s) kept=%d%n",
+                cells, vertices, fileBytes / 1e6, peak / 1e6, (double) peak / fileBytes, seconds, vertices / seconds / 1e6, kept);
+        Files.delete(dir.resolve("cells.geojson"));
+        Files.delete(dir);
+    }
+}
