@@ -18,6 +18,7 @@ import aequa.projection.Footprint;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionChooser;
 import aequa.projection.ProjectionRequest;
+import aequa.projection.SourceCrs;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -51,7 +52,7 @@ final class ExplainCommand implements Callable<Integer> {
         Path absolute = file.toAbsolutePath().normalize();
         Findings findings = new Findings();
         RegionSourceSpec source = new RegionSourceSpec(absolute.getFileName().toString(), RegionSourceSpec.FEATURE_ID, "", layer);
-        List<Region> read = RegionReaders.read(absolute.getParent(), source, findings);
+        List<Region> read = RegionReaders.read(absolute.getParent(), source, SourceCrs::toLonLat, findings);
         List<Region> regions = RegionValidator.validate(read, source.file(), findings);
         FindingsPrinter.print(findings.list(), err, false);
         if (regions.isEmpty()) {

@@ -45,7 +45,7 @@ class StageOrderTest {
                 String stage = root.relativize(file).getName(0).toString();
                 int rank = STAGES.indexOf(stage);
                 assertTrue(rank >= 0, "package not in the stage list: " + stage + " (" + file + ")");
-                String source = Files.readString(file);
+                String source = withoutComments(Files.readString(file));
                 Matcher imports = IMPORT.matcher(source);
                 while (imports.find()) {
                     check(file, stage, rank, imports.group(1), violations);
@@ -57,6 +57,11 @@ class StageOrderTest {
             }
         }
         assertEquals(List.of(), violations);
+    }
+
+    /** Comments may name later stages (a Javadoc pointing to the next step); only code counts. */
+    private static String withoutComments(String source) {
+        return source.replaceAll("(?s)/\\*.*?\\*/", "").replaceAll("//[^\n]*", "");
     }
 
     private static void check(Path file, String stage, int rank, String name, List<String> violations) {
