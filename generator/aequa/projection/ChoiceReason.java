@@ -16,8 +16,12 @@ final class ChoiceReason {
         String name = describe(chosen);
         String figures = String.format(Locale.ROOT, "shapes are distorted by at most %s deg (%s deg on average) over the data",
                 degrees(score.omegaMaxDeg()), degrees(score.omegaMeanDeg()));
-        String comparison = runnerUp == null ? "" : String.format(Locale.ROOT, ", against %s deg for the best %s",
-                degrees(runnerUp.omegaMaxDeg()), runnerUp.family().displayName());
+        String comparison = runnerUp == null ? "" : runnerUp.omegaMaxDeg() < score.omegaMaxDeg()
+                ? String.format(Locale.ROOT, "; the best %s distorts about as much (%s deg at most), and the more "
+                        + "conventional shape is preferred at near-equal distortion", runnerUp.family().displayName(),
+                        degrees(runnerUp.omegaMaxDeg()))
+                : String.format(Locale.ROOT, ", against %s deg for the best %s",
+                        degrees(runnerUp.omegaMaxDeg()), runnerUp.family().displayName());
         switch (basis) {
             case FORCED:
                 return String.format(Locale.ROOT, "%s, as the project file asks; %s.", name, figures);

@@ -26,13 +26,13 @@ final class WorldFixture {
     private WorldFixture() {
     }
 
-    /** The world fixture's projection: normal-aspect Lambert cylindrical equal-area on WGS 84. */
-    static EqualAreaProjection cylindrical() {
-        return Projections.create(ProjectionFamily.CYLINDRICAL, java.util.Map.of("centre-lon", 0.0));
+    /** The world fixture's projection: Equal Earth on WGS 84, a world family (drawn with globe and graticule). */
+    static EqualAreaProjection world() {
+        return Projections.create(ProjectionFamily.EQUAL_EARTH, java.util.Map.of("centre-lon", 0.0));
     }
 
     static MapModel model() {
-        EqualAreaProjection projection = cylindrical();
+        EqualAreaProjection projection = world();
         double[][] boxes = {{-120, 20, -70, 60}, {-75, -50, -40, 10}, {-10, 35, 40, 65}, {-15, -30, 45, 30}, {60, 10, 140, 55}, {115, -40, 150, -15}};
         List<MapRegion> regions = new ArrayList<>();
         List<Double> limits = List.of(10.0, 20.0, 30.0, 40.0);

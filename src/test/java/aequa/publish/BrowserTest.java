@@ -39,13 +39,15 @@ import org.openqa.selenium.print.PrintOptions;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
+import aequa.endtoend.DemoSite;
+
 /**
  * The published site in a real browser: Debian's Chromium, headless, through Selenium with an explicit
  * ChromeDriver (so Selenium Manager never goes to the network).
  *
- * <p>The site is the folder named by the system property {@value #SITE_PROPERTY} (point it at the published
- * demo: {@code mvn test -Dtest=BrowserTest -Daequa.browser.site=site-out}); without it, a fixture atlas is
- * published with {@link FakeArtwork}. Checks: no console errors on any page; each map's SVG is visible with
+ * <p>The site is the folder named by the system property {@value #SITE_PROPERTY} (for example
+ * {@code mvn test -Dtest=BrowserTest -Daequa.browser.site=site-out}); without it, the demo project is
+ * published through the command line (see {@link DemoSite}). Checks: no console errors on any page; each map's SVG is visible with
  * one region element per drawn region of report.json; a legend and a caption; every link resolves; the page
  * fits a phone's width; a map page prints on one A4 and one Letter sheet; the hover script lights a region.
  * A screenshot of every page goes to target/screenshots/.
@@ -96,15 +98,9 @@ class BrowserTest {
         Files.createDirectories(SCREENSHOTS);
     }
 
-    private static Path sitePath() throws IOException {
+    private static Path sitePath() {
         String given = System.getProperty(SITE_PROPERTY, "");
-        if (!given.isBlank()) {
-            return Path.of(given).toAbsolutePath().normalize();
-        }
-        Path out = Path.of("target", "browser-site").toAbsolutePath();
-        SitePublisher.publish(SiteFixtures.atlas(Path.of("target", "browser-project"), SiteFixtures.Texts.plain(), 3, 24),
-                new FakeArtwork(), out, PublishOptions.defaults().withLockWait(java.time.Duration.ofSeconds(30)));
-        return out;
+        return given.isBlank() ? DemoSite.folder() : Path.of(given).toAbsolutePath().normalize();
     }
 
     @AfterAll
@@ -160,6 +156,7 @@ class BrowserTest {
             for (JsonNode region : map.get("regions")) {
                 drawn += region.path("drawn").asBoolean(true) ? 1 : 0;
             }
+            drawn *= Math.max(1, map.path("periods").size()); // small multiples: a panel per period
             List<WebElement> regions = svg.findElements(By.cssSelector("[id^='r-']"));
             assertEquals(drawn, regions.size(), "regions drawn in " + map.get("id").asText());
             assertFalse(svg.findElements(By.cssSelector("[id*='legend' i]")).isEmpty(), "legend inside the SVG");
@@ -169,11 +166,31 @@ class BrowserTest {
             String label = svg.getAttribute("aria-labelledby") + svg.getAttribute("aria-label");
             assertTrue(svg.getAttribute("role") != null && !label.equals("nullnull"), "SVG needs role and a label");
 
-            new Actions(driver).moveToElement(regions.get(regions.size() / 2)).perform();
+            hoverInside(regions.get(regions.size() / 2));
             WebElement tip = driver.findElement(By.cssSelector(".map-tip"));
             assertTrue(tip.isDisplayed() && !tip.getText().isBlank(), "hover tooltip");
             assertEquals(1, svg.findElements(By.cssSelector(".is-lit")).size(), "hover highlight");
         }
+    }
+
+    /**
+     * Moves the pointer to a point where the region itself is on top (not a label, not a neighbour): the
+     * middle of a region's bounding box may lie outside a concave region or under its label.
+     */
+    private static void hoverInside(WebElement region) {
+        JavascriptExecutor js = (JavascriptExecutor) driver;
+        js.executeScript("arguments[0].scrollIntoView({block: 'center'});", region);
+        @SuppressWarnings("unchecked")
+        List<Number> xy = (List<Number>) js.executeScript(
+                "const r = arguments[0], b = r.getBoundingClientRect();"
+                        + "for (let i = 1; i < 24; i++) for (let j = 1; j < 24; j++) {"
+                        + "  const x = b.left + b.width * i / 24, y = b.top + b.height * j / 24;"
+                        + "  let e = document.elementFromPoint(x, y);"
+                        + "  while (e && e !== r) e = e.parentNode;"
+                        + "  if (e === r) return [Math.round(x), Math.round(y)];"
+                        + "} return null;", region);
+        assertTrue(xy != null, "no visible point inside region " + region.getAttribute("id"));
+        new Actions(driver).moveToLocation(xy.get(0).intValue(), xy.get(1).intValue()).perform();
     }
 
     @Test

@@ -106,7 +106,7 @@ class EditionChangesTest {
                 aequa.projection.Projections.lambertAzimuthal(11, 52), 1, 1, 0, 0, List.of(), "moved"),
                 map.regions(), map.classification(), map.ramp(), map.areaAudit(), map.notices());
         JsonNode report = publish(out, List.of(moved));
-        assertEquals(10.0, report.at("/changes/maps/0/projection/from/parameters/1/value").asDouble());
-        assertEquals(11.0, report.at("/changes/maps/0/projection/to/parameters/1/value").asDouble());
+        assertEquals(10.0, SiteReportTest.parameter(report.at("/changes/maps/0/projection/from/parameters"), "centre-lon"));
+        assertEquals(11.0, SiteReportTest.parameter(report.at("/changes/maps/0/projection/to/parameters"), "centre-lon"));
     }
 }

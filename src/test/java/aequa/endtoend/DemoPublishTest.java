@@ -1,0 +1,174 @@
+package aequa.endtoend;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+
+import javax.xml.parsers.DocumentBuilderFactory;
+
+import org.apache.sis.referencing.CRS;
+import aequa.drawing.Ids;
+import org.junit.jupiter.api.Test;
+import org.opengis.referencing.crs.ProjectedCRS;
+import org.w3c.dom.Document;
+import org.w3c.dom.Element;
+import org.w3c.dom.NodeList;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+/**
+ * The whole path a newcomer takes: the demo project published through the command line, then the site
+ * checked for what a reader and an analyst rely on.
+ */
+class DemoPublishTest {
+
+    private static final Pattern LINK = Pattern.compile("(?:href|src)=\"([^\"#?]+)[^\"]*\"");
+
+    private final Path site = DemoSite.folder();
+    private final JsonNode report = readReport();
+
+    @Test
+    void everyRegionOfEveryMapAppearsExactlyOnceInItsSvgs() throws Exception {
+        for (JsonNode map : report.path("maps")) {
+            String id = map.path("id").asText();
+            for (String svg : List.of(id + "-web.svg", id + ".svg")) {
+                Document doc = parse(site.resolve("maps").resolve(id).resolve(svg));
+                List<String> ids = new ArrayList<>();
+                NodeList groups = doc.getElementsByTagName("g");
+                for (int i = 0; i < groups.getLength(); i++) {
+                    String groupId = ((Element) groups.item(i)).getAttribute("id");
+                    if (groupId.startsWith("r-")) {
+                        ids.add(groupId);
+                    }
+                }
+                List<String> periods = new ArrayList<>();
+                map.path("periods").forEach(p -> periods.add(p.asText()));
+                int drawn = 0;
+                for (JsonNode region : map.path("regions")) {
+                    if (region.path("drawn").asBoolean(true)) {
+                        String key = region.path("key").asText();
+                        for (String period : periods) {
+                            // small multiples: one panel per period, region ids carry the period
+                            String prefix = periods.size() > 1 ? "r-" + Ids.of("p", period).substring(2) : "r";
+                            String expected = Ids.of(prefix, key);
+                            assertEquals(1, ids.stream().filter(expected::equals).count(), svg + ": region " + expected);
+                            drawn++;
+                        }
+                    }
+                }
+                assertEquals(drawn, ids.size(), svg + ": one group per drawn region and period, and no more");
+            }
+        }
+    }
+
+    @Test
+    void everyInternalLinkResolvesToAFile() throws IOException {
+        List<String> broken = new ArrayList<>();
+        try (Stream<Path> files = Files.walk(site)) {
+            for (Path page : files.filter(p -> p.toString().endsWith(".html")).toList()) {
+                Matcher link = LINK.matcher(Files.readString(page, StandardCharsets.UTF_8));
+                while (link.find()) {
+                    String target = link.group(1);
+                    if (target.matches("^[a-z]+:.*")) {
+                        continue; // external or data: links are not ours to check
+                    }
+                    Path resolved = page.getParent().resolve(target).normalize();
+                    if (!resolved.startsWith(site) || !Files.isRegularFile(resolved)) {
+                        broken.add(site.relativize(page) + " -> " + target);
+                    }
+                }
+            }
+        }
+        assertEquals(List.of(), broken);
+    }
+
+    @Test
+    void eachCaptionNamesTheProjectionThatTheReportRecords() throws IOException {
+        for (JsonNode map : report.path("maps")) {
+            String id = map.path("id").asText();
+            String family = map.path("projection").path("name").asText();
+            assertTrue(!family.isEmpty(), id);
+            String svg = Files.readString(site.resolve("maps").resolve(id).resolve(id + "-web.svg"));
+            String page = Files.readString(site.resolve("maps").resolve(id).resolve("index.html"));
+            assertTrue(svg.contains(family + " projection"), id + ": the map's caption names " + family);
+            assertTrue(page.contains(family), id + ": the page names " + family);
+        }
+    }
+
+    @Test
+    void theReportHoldsAParseableProjectionAndTheFiguresOfEveryMap() throws Exception {
+        assertEquals(6, report.path("maps").size());
+        for (JsonNode map : report.path("maps")) {
+            JsonNode projection = map.path("projection");
+            assertTrue(projection.path("family").isTextual());
+            assertTrue(projection.path("parameters").size() > 0);
+            // ISO 19162:2019: the WKT 2 must describe a projected CRS that a reference reader accepts
+            assertTrue(CRS.fromWKT(projection.path("wkt2").asText()) instanceof ProjectedCRS, map.path("id").asText());
+            assertTrue(map.path("regions").size() > 10);
+            for (JsonNode region : map.path("regions")) {
+                assertTrue(region.path("key").isTextual());
+                assertTrue(region.has("value"));
+            }
+        }
+    }
+
+    @Test
+    void theFiveExtentsGetProjectionsFittedToThem() {
+        Set<String> families = new HashSet<>();
+        for (JsonNode map : report.path("maps")) {
+            families.add(map.path("projection").path("family").asText());
+            double maxError = map.path("areaAudit").path("maxRelativeError").asDouble();
+            assertTrue(maxError < 1e-4, map.path("id").asText() + ": area error " + maxError);
+        }
+        // whole world, mid-latitude east-west, circumpolar ring, equatorial belt, north-south strip
+        assertTrue(families.size() >= 4, "families: " + families);
+        assertEquals("equal-earth", family("microgrid-share"));
+        assertEquals("cylindrical", family("vaccination-rate"));
+        assertEquals("cylindrical-transverse", family("literacy-change"));
+    }
+
+    @Test
+    void thePagesSayTheDataIsInventedAndGiveTheCautions() throws IOException {
+        String index = Files.readString(site.resolve("index.html"));
+        String method = Files.readString(site.resolve("method.html"));
+        assertTrue(index.contains("invented"));
+        assertTrue(method.contains("imply no position on any disputed border"));
+        assertTrue(method.contains("says nothing about how the figure varies inside the region"));
+        assertTrue(method.contains("Classes depend on the method"));
+    }
+
+    private String family(String mapId) {
+        for (JsonNode map : report.path("maps")) {
+            if (map.path("id").asText().equals(mapId)) {
+                return map.path("projection").path("family").asText();
+            }
+        }
+        throw new AssertionError("no map " + mapId);
+    }
+
+    private JsonNode readReport() {
+        try {
+            return new ObjectMapper().readTree(site.resolve("report.json").toFile());
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    private static Document parse(Path svg) throws Exception {
+        DocumentBuilderFactory factory = DocumentBuilderFactory.newInstance();
+        factory.setNamespaceAware(true);
+        return factory.newDocumentBuilder().parse(svg.toFile());
+    }
+}
