@@ -108,11 +108,28 @@ final class MapAssembler {
                 classed.get().ramp(), planar.audit(), allNotices));
     }
 
-    /** The warnings of the join a reader of the map should also see (missing figures and the like). */
+    /** Readers see at most this many notices of one kind; report.json keeps every finding. */
+    private static final int NOTICES_PER_KIND = 3;
+
+    /**
+     * The warnings of the join a reader of the map should also see (missing figures and the like), at most
+     * {@value #NOTICES_PER_KIND} of each kind followed by a count of the rest, so a caption stays readable.
+     */
     private static List<String> readerNotices(List<Finding> joinFindings) {
-        return joinFindings.stream()
-                .filter(f -> f.severity() == Severity.WARNING && f.code().startsWith("join-"))
-                .map(Finding::message)
-                .toList();
+        Map<String, List<String>> byCode = new java.util.LinkedHashMap<>();
+        for (Finding f : joinFindings) {
+            if (f.severity() == Severity.WARNING && f.code().startsWith("join-")) {
+                byCode.computeIfAbsent(f.code(), code -> new ArrayList<>()).add(f.message());
+            }
+        }
+        List<String> notices = new ArrayList<>();
+        for (List<String> messages : byCode.values()) {
+            notices.addAll(messages.subList(0, Math.min(NOTICES_PER_KIND, messages.size())));
+            if (messages.size() > NOTICES_PER_KIND) {
+                int more = messages.size() - NOTICES_PER_KIND;
+                notices.add("… and " + more + " more like " + (more == 1 ? "it" : "them") + " (listed in report.json).");
+            }
+        }
+        return notices;
     }
 }

@@ -26,7 +26,7 @@ import aequa.projection.Footprint;
  * @param simplifiedM     the drawable geometry per key, metres
  * @param mapAreaRatio    planar / geodesic area per key
  * @param audit           the map's area proof
- * @param droppedIslands  readable notes on parts too small to draw
+ * @param droppedIslands  a readable note on the parts too small to draw, if any
  */
 record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAreaRatio, AreaAudit audit,
                    List<String> droppedIslands) {
@@ -61,11 +61,26 @@ record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAre
             byKey.put(keys.get(i), simplified.planarM().get(i));
             ratios.put(keys.get(i), checks.get(i).mapAreaRatio());
         }
-        List<String> dropped = simplified.dropped().stream()
-                .map(d -> String.format(Locale.ROOT, "An island of %s (%.3f km²) is too small to draw at this scale and was left out of the drawing.",
-                        d.key(), d.areaKm2()))
-                .toList();
+        List<String> dropped = droppedNotice(simplified.dropped());
         return new PlanarLayer(byKey, ratios, audit, dropped);
+    }
+
+    /**
+     * One sentence for readers, however many islands were left out: a national file can drop hundreds of
+     * specks, and a caption must stay readable.
+     */
+    private static List<String> droppedNotice(List<CoverageSimplification.DroppedPart> dropped) {
+        if (dropped.isEmpty()) {
+            return List.of();
+        }
+        double totalKm2 = dropped.stream().mapToDouble(CoverageSimplification.DroppedPart::areaKm2).sum();
+        long regions = dropped.stream().map(CoverageSimplification.DroppedPart::key).distinct().count();
+        String parts = dropped.size() == 1 ? "One island" : dropped.size() + " islands";
+        return List.of(String.format(Locale.ROOT,
+                "%s of %d %s (%.1f km² in all) %s too small to draw at this scale and %s left out of the drawing; "
+                        + "their figures are those of their regions.",
+                parts, regions, regions == 1 ? "region" : "regions", totalKm2, dropped.size() == 1 ? "is" : "are",
+                dropped.size() == 1 ? "was" : "were"));
     }
 
     /** The footprint's width on the ground, roughly, to choose the densification step before projecting. */

@@ -82,7 +82,12 @@ final class MapViews {
     }
 
     static String percent(double relative) {
-        return relative < 1e-4 ? NumberText.of(relative * 100) : NumberText.fixed(relative * 100, 3);
+        double percent = relative * 100;
+        if (percent == 0 || !Double.isFinite(percent)) {
+            return NumberText.of(percent);
+        }
+        // two significant figures are all an error bound needs (0.00039 %, 0.012 %)
+        return new java.math.BigDecimal(percent).round(new java.math.MathContext(2)).stripTrailingZeros().toPlainString();
     }
 
     /** The text alternative: what the map shows, in how many classes, and its extremes (latest period). */

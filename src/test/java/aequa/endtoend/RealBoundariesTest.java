@@ -1,0 +1,88 @@
+package aequa.endtoend;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+import aequa.cli.Main;
+
+/**
+ * Real open boundary files publish cleanly: a national file with thousands of regions (US counties, US Census
+ * Bureau 2017) and a world file with antimeridian and polar regions (Natural Earth admin-0 1:110m, whose
+ * own population estimates give the figures). Sources and licences: src/test/resources/geometry/SOURCE.md.
+ */
+class RealBoundariesTest {
+
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    @Test
+    void aNationalAndAWorldFilePublishWithTrueAreas(@TempDir Path project, @TempDir Path out) throws IOException {
+        Files.createDirectories(project.resolve("regions"));
+        Files.createDirectories(project.resolve("figures"));
+        Path resources = Path.of("src/test/resources/geometry");
+        Files.copy(resources.resolve("ne-admin0-110m.geojson"), project.resolve("regions/world.geojson"));
+        Files.copy(resources.resolve("us-counties-2017.geojson"), project.resolve("regions/counties.geojson"));
+        writeWorldFigures(project.resolve("regions/world.geojson"), project.resolve("figures/world.csv"));
+        writeCountyFigures(project.resolve("regions/counties.geojson"), project.resolve("figures/counties.csv"));
+        Files.writeString(project.resolve("aequa.yaml"), String.join("\n",
+                "site: { title: \"Real boundaries\" }",
+                "regions:",
+                "  world: { file: regions/world.geojson, key: adm0_a3, name: name }",
+                "  counties: { file: regions/counties.geojson, key: id, name: name }",
+                "figures:",
+                "  world: { file: figures/world.csv, key: code }",
+                "  counties: { file: figures/counties.csv, key: code }",
+                "maps:",
+                "  - { id: world-density, regions: world, figures: world, indicator: pop_est, measure: count,",
+                "      normalise: area, unit: \"people per km²\" }",
+                "  - { id: county-test, regions: counties, figures: counties, indicator: state_code, measure: rate }",
+                ""));
+        StringWriter terminal = new StringWriter();
+        int code = Main.run(new String[] {"publish", project.toString(), "--out", out.toString()},
+                new PrintWriter(terminal, true), new PrintWriter(terminal, true));
+        assertEquals(0, code, terminal.toString());
+
+        JsonNode report = JSON.readTree(out.resolve("report.json").toFile());
+        for (JsonNode map : report.path("maps")) {
+            double error = map.path("areaAudit").path("maxRelativeError").asDouble();
+            // the project's default tolerance, and the figure the issue asks every real map to meet
+            assertTrue(error < 1e-4, map.path("id").asText() + ": area error " + error);
+        }
+        JsonNode world = report.path("maps").get(0);
+        assertTrue(world.path("projection").path("family").asText().matches("equal-earth|mollweide"));
+        assertEquals(177, world.path("regions").size(), "every Natural Earth country kept");
+        // one county of the file (Falls Church, 51610) collapses to no area and is reported, not drawn
+        assertEquals(3230, report.path("maps").get(1).path("regions").size());
+    }
+
+    /** Natural Earth's own population estimate (pop_est) per country, as a CSV. */
+    private static void writeWorldFigures(Path geojson, Path csv) throws IOException {
+        StringBuilder out = new StringBuilder("code,pop_est\n");
+        for (JsonNode feature : JSON.readTree(geojson.toFile()).path("features")) {
+            JsonNode p = feature.path("properties");
+            out.append(p.path("adm0_a3").asText()).append(',').append(p.path("pop_est").asText("")).append('\n');
+        }
+        Files.writeString(csv, out);
+    }
+
+    /** The county's state FIPS code as its "figure": real attribute data, enough to classify and draw. */
+    private static void writeCountyFigures(Path geojson, Path csv) throws IOException {
+        StringBuilder out = new StringBuilder("code,state_code\n");
+        for (JsonNode feature : JSON.readTree(geojson.toFile()).path("features")) {
+            JsonNode p = feature.path("properties");
+            out.append(p.path("id").asText()).append(',').append(p.path("state_fips").asText()).append('\n');
+        }
+        Files.writeString(csv, out);
+    }
+}
