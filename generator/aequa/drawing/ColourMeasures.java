@@ -1,10 +1,11 @@
 package aequa.drawing;
 
 import aequa.colour.Rgb;
+import aequa.colour.WcagContrast;
 
 /**
- * The few colour measures drawing needs for print checks and type colour. aequa.colour did not offer
- * them when this was written; if it grows the same functions, these should go (they are small on purpose).
+ * The colour measures print checks need beyond WCAG contrast (which aequa.colour.WcagContrast computes):
+ * lightness in greyscale and total ink.
  *
  * <p>Channels are 8-bit sRGB (IEC 61966-2-1). Results are plain doubles; no NaN is produced.
  */
@@ -14,31 +15,15 @@ public final class ColourMeasures {
     }
 
     /**
-     * Relative luminance Y in [0, 1]: the sRGB transfer function undone (IEC 61966-2-1, section 5.2, with the
-     * 0.04045 threshold) and the Rec. ITU-R BT.709 weights 0.2126, 0.7152, 0.0722. This is the definition
-     * WCAG 2.2 uses ("relative luminance", W3C WCAG 2.2, section 1.4.3 definitions).
-     */
-    public static double relativeLuminance(Rgb colour) {
-        return 0.2126 * linear(colour.red()) + 0.7152 * linear(colour.green()) + 0.0722 * linear(colour.blue());
-    }
-
-    /**
      * CIE 1976 lightness L* in [0, 100] of the colour's luminance (CIE 15:2004, eq. 8.1 with white Y = 1):
      * {@code L* = 116 f(Y) - 16}, {@code f(t) = cbrt(t)} above (6/29)^3, else {@code t / (3 (6/29)^2) + 4/29}.
      * This is the lightness the colour keeps when a page is printed or viewed in greyscale.
      */
     public static double greyLightness(Rgb colour) {
-        double y = relativeLuminance(colour);
+        double y = WcagContrast.relativeLuminance(colour);
         double delta = 6.0 / 29.0;
         double f = y > delta * delta * delta ? Math.cbrt(y) : y / (3 * delta * delta) + 4.0 / 29.0;
         return 116.0 * f - 16.0;
-    }
-
-    /** WCAG 2.2 contrast ratio (L1 + 0.05) / (L2 + 0.05), L1 the lighter luminance; 1 to 21. */
-    public static double contrastRatio(Rgb a, Rgb b) {
-        double la = relativeLuminance(a);
-        double lb = relativeLuminance(b);
-        return (Math.max(la, lb) + 0.05) / (Math.min(la, lb) + 0.05);
     }
 
     /**
@@ -61,11 +46,5 @@ public final class ColourMeasures {
         double m = (1.0 - g - k) / (1.0 - k);
         double y = (1.0 - b - k) / (1.0 - k);
         return 100.0 * (c + m + y + k);
-    }
-
-    /** IEC 61966-2-1 sRGB decoding of one 8-bit channel to linear light. */
-    private static double linear(int channel) {
-        double v = channel / 255.0;
-        return v <= 0.04045 ? v / 12.92 : Math.pow((v + 0.055) / 1.055, 2.4);
     }
 }

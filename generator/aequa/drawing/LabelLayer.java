@@ -12,6 +12,7 @@ import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.Point;
 import org.locationtech.jts.geom.Polygon;
 
+import aequa.colour.WcagContrast;
 import aequa.atlas.MapModel;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
@@ -59,7 +60,7 @@ final class LabelLayer {
         for (Candidate c : candidates) {
             MapRegion region = model.regions().get(c.index());
             RegionValue value = RegionLayer.valueOf(region, period);
-            boolean reversed = ColourMeasures.relativeLuminance(fills.text(value)) > ColourMeasures.relativeLuminance(fills.fill(value));
+            boolean reversed = WcagContrast.relativeLuminance(fills.text(value)) > WcagContrast.relativeLuminance(fills.fill(value));
             double size = reversed ? reversedSize : plainSize;
             double padU = 0.25 * size * type.unitsPerPt();
             String text = region.name();

@@ -217,7 +217,7 @@ final class Legend {
         int steps = 64;
         double stepW = widthU / steps;
         for (int i = 0; i < steps; i++) {
-            Rgb colour = RegionFills.along(model.ramp().fills(), (i + 0.5) / steps);
+            Rgb colour = model.ramp().colourAt((i + 0.5) / steps);
             // each step reaches under the next, so no hairline gap shows between neighbours when rasterised
             double w = i == steps - 1 ? stepW : 1.5 * stepW;
             canvas.fill(new Rectangle2D.Double(x + i * stepW, y, w, 1.1 * em), colour);

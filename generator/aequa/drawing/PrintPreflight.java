@@ -8,6 +8,7 @@ import java.util.Set;
 
 import aequa.atlas.MapModel;
 import aequa.colour.Rgb;
+import aequa.colour.WcagContrast;
 import aequa.findings.Finding;
 
 /**
@@ -38,7 +39,7 @@ public final class PrintPreflight {
         Inventory inventory = drawing.inventory();
         Set<String> seen = new LinkedHashSet<>();
         for (Inventory.TextMark t : inventory.texts()) {
-            boolean reversed = ColourMeasures.relativeLuminance(t.colour()) > ColourMeasures.relativeLuminance(t.background());
+            boolean reversed = WcagContrast.relativeLuminance(t.colour()) > WcagContrast.relativeLuminance(t.background());
             double minimum = reversed ? theme.typePt().minimumReversed() : theme.typePt().minimum();
             // sizes are recorded to 1/100 of a page unit; allow that rounding
             if (t.sizePt() < minimum - 0.02 && seen.add("type|" + t.layer() + "|" + t.sizePt() + "|" + reversed)) {

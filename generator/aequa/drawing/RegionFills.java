@@ -76,7 +76,7 @@ final class RegionFills {
     private Rgb classFill(RegionValue value) {
         List<Rgb> fills = model.ramp().fills();
         if (model.classification().method() == ClassMethod.UNCLASSED) {
-            return along(fills, position(value.normalisedValue()));
+            return model.ramp().colourAt(position(value.normalisedValue()));
         }
         return fills.get(Math.min(value.classIndex(), fills.size() - 1));
     }
@@ -90,23 +90,6 @@ final class RegionFills {
             return 0.5;
         }
         return Math.max(0, Math.min(1, (v - low) / (high - low)));
-    }
-
-    /**
-     * The colour at {@code t} (0 to 1) along the ramp's fills, interpolated channel by channel between the
-     * two nearest stops. The stops themselves come from aequa.colour (generated in OKLab), so the steps
-     * between neighbouring stops are small; a perceptual interpolation belongs in aequa.colour if wanted.
-     */
-    static Rgb along(List<Rgb> stops, double t) {
-        if (stops.size() == 1) {
-            return stops.get(0);
-        }
-        double position = t * (stops.size() - 1);
-        int lower = Math.min((int) Math.floor(position), stops.size() - 2);
-        double f = position - lower;
-        Rgb a = stops.get(lower);
-        Rgb b = stops.get(lower + 1);
-        return new Rgb(mix(a.red(), b.red(), f), mix(a.green(), b.green(), f), mix(a.blue(), b.blue(), f));
     }
 
     private static int mix(int a, int b, double f) {

@@ -8,7 +8,8 @@ import aequa.colour.Rgb;
 
 /**
  * How maps look: colours, fonts, type sizes, line weights and print limits, read from
- * {@code themes/<name>/theme.yaml} (see themes/README.md), plus the page stylesheet {@code site.css} next to it.
+ * {@code themes/<name>/theme.yaml} (see themes/README.md). The page stylesheet {@code site.css} beside it is the
+ * publishing stage's business.
  * Class fills are not part of a theme: they come from the map's {@link aequa.colour.ColourRamp}.
  *
  * @param name        the theme's name (its folder name)
@@ -18,10 +19,9 @@ import aequa.colour.Rgb;
  * @param typePt      type sizes in points
  * @param lines       line weights
  * @param print       limits the print preflight applies
- * @param css         the page stylesheet text (empty if the theme has none)
  */
 public record Theme(String name, String description, Colours colours, Fonts fonts, TypeSizes typePt, Lines lines,
-                    PrintLimits print, String css) {
+                    PrintLimits print) {
 
     public Theme {
         Objects.requireNonNull(name, "name");
@@ -31,11 +31,6 @@ public record Theme(String name, String description, Colours colours, Fonts font
         Objects.requireNonNull(typePt, "type-pt");
         Objects.requireNonNull(lines, "lines");
         Objects.requireNonNull(print, "print");
-        css = css == null ? "" : css;
-    }
-
-    public Theme withCss(String stylesheet) {
-        return new Theme(name, description, colours, fonts, typePt, lines, print, stylesheet);
     }
 
     /**

@@ -3,7 +3,6 @@ package aequa.drawing;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.regex.Pattern;
@@ -23,7 +22,7 @@ import aequa.findings.Findings;
 
 /**
  * Finds and reads themes. A theme is a folder {@code <name>/} holding {@code theme.yaml} (kebab-case keys,
- * unknown keys are errors) and optionally {@code site.css}. The project's own {@code themes/} folder is
+ * unknown keys are errors). The project's own {@code themes/} folder is
  * searched first, then the themes bundled in the jar under {@code /themes/}.
  *
  * <p>A missing or broken theme is a problem in user data: it becomes a {@link Finding} and the bundled
@@ -61,9 +60,7 @@ public final class Themes {
         try {
             if (projectDir != null && Files.isRegularFile(projectDir.resolve(file))) {
                 Path folder = projectDir.resolve("themes").resolve(name);
-                Theme theme = YAML.readValue(folder.resolve("theme.yaml").toFile(), Theme.class);
-                Path css = folder.resolve("site.css");
-                return theme.withCss(Files.isRegularFile(css) ? Files.readString(css, StandardCharsets.UTF_8) : "");
+                return YAML.readValue(folder.resolve("theme.yaml").toFile(), Theme.class);
             }
             Theme theme = readBundled(name);
             if (theme != null) {
@@ -97,10 +94,7 @@ public final class Themes {
             if (yaml == null) {
                 return null;
             }
-            Theme theme = YAML.readValue(yaml, Theme.class);
-            try (InputStream css = Themes.class.getResourceAsStream("/themes/" + name + "/site.css")) {
-                return theme.withCss(css == null ? "" : new String(css.readAllBytes(), StandardCharsets.UTF_8));
-            }
+            return YAML.readValue(yaml, Theme.class);
         }
     }
 

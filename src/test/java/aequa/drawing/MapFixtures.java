@@ -16,6 +16,7 @@ import aequa.classes.ClassMethod;
 import aequa.classes.Classification;
 import aequa.colour.ColourRamp;
 import aequa.colour.Rgb;
+import aequa.colour.WcagContrast;
 import aequa.planar.AreaAudit;
 import aequa.project.MapSpec;
 import aequa.projection.EqualAreaProjection;
@@ -112,12 +113,13 @@ public final class MapFixtures {
     static ColourRamp ramp(int n) {
         Rgb light = new Rgb(232, 243, 238);
         Rgb dark = new Rgb(18, 72, 96);
+        ColourRamp ends = new ColourRamp("sequential", List.of(light, dark), List.of(dark, light), List.of());
         List<Rgb> fills = new ArrayList<>();
         List<Rgb> labels = new ArrayList<>();
         for (int k = 0; k < n; k++) {
-            Rgb fill = RegionFills.along(List.of(light, dark), n == 1 ? 0 : k / (double) (n - 1));
+            Rgb fill = ends.colourAt(n == 1 ? 0 : k / (double) (n - 1));
             fills.add(fill);
-            labels.add(ColourMeasures.contrastRatio(fill, new Rgb(255, 255, 255)) >= 4.5 ? new Rgb(255, 255, 255) : new Rgb(30, 36, 48));
+            labels.add(WcagContrast.ratio(fill, new Rgb(255, 255, 255)) >= 4.5 ? new Rgb(255, 255, 255) : new Rgb(30, 36, 48));
         }
         return new ColourRamp("sequential", fills, labels, List.of());
     }

@@ -13,6 +13,7 @@ import org.junit.jupiter.api.Test;
 import aequa.atlas.MapModel;
 import aequa.colour.ColourRamp;
 import aequa.colour.Rgb;
+import aequa.colour.WcagContrast;
 import aequa.findings.Finding;
 
 /** The print preflight against crafted themes and ramps, each with the one problem it must report. */
@@ -37,7 +38,7 @@ class PrintPreflightTest {
         Theme.TypeSizes t = NEWSPRINT.typePt();
         Theme small = new Theme("small", "", NEWSPRINT.colours(), NEWSPRINT.fonts(),
                 new Theme.TypeSizes(t.title(), t.label(), t.legend(), 5.0, t.minimum(), t.minimumReversed()),
-                NEWSPRINT.lines(), NEWSPRINT.print(), "");
+                NEWSPRINT.lines(), NEWSPRINT.print());
         DrawnMap map = MapDrawings.printSvg(MODEL, small, SIZE);
         List<Finding> findings = PrintPreflight.check(MODEL, small, map, "map.svg");
         assertEquals(Set.of("print-type-too-small"), findings.stream().map(Finding::code).collect(Collectors.toSet()));
@@ -65,7 +66,7 @@ class PrintPreflightTest {
         DrawnMap map = MapDrawings.printSvg(MODEL, NEWSPRINT, PrintSize.of(PrintPreset.FULL_WIDTH));
         boolean anyReversed = false;
         for (Inventory.TextMark t : map.inventory().texts()) {
-            if (t.layer().equals("labels") && ColourMeasures.relativeLuminance(t.colour()) > ColourMeasures.relativeLuminance(t.background())) {
+            if (t.layer().equals("labels") && WcagContrast.relativeLuminance(t.colour()) > WcagContrast.relativeLuminance(t.background())) {
                 anyReversed = true;
                 assertEquals(NEWSPRINT.typePt().minimumReversed(), t.sizePt(), 0.02);
             }
@@ -77,7 +78,7 @@ class PrintPreflightTest {
     void linesThinnerThanAQuarterPointAreReported() {
         Theme.Lines l = NEWSPRINT.lines();
         Theme thin = new Theme("thin", "", NEWSPRINT.colours(), NEWSPRINT.fonts(), NEWSPRINT.typePt(),
-                new Theme.Lines(new LineWeight(0.1), l.outline(), l.graticule(), l.hatch(), l.symbolEdge()), NEWSPRINT.print(), "");
+                new Theme.Lines(new LineWeight(0.1), l.outline(), l.graticule(), l.hatch(), l.symbolEdge()), NEWSPRINT.print());
         assertEquals(Set.of("print-line-too-thin"), codes(MODEL, thin));
     }
 
