@@ -50,6 +50,7 @@ final class SiteBuilder {
         LoadedProject project = loaded.get();
         Findings setup = new Findings();
         Theme theme = Themes.load(project.dir(), project.file().site().theme(), setup);
+        Theme printTheme = Themes.load(project.dir(), project.file().site().printTheme(), setup);
         Optional<PrintSize> printSize = PrintWidths.parse(project.file().site().printWidth());
         if (printSize.isEmpty()) {
             setup.add(Finding.error("project-bad-value", ProjectFile.FILE_NAME, project.places().place("/site/print-width"),
@@ -67,7 +68,7 @@ final class SiteBuilder {
                     + ". The site in " + outDir + " is unchanged.");
             return ExitCode.DATA_PROBLEMS;
         }
-        DrawingArtwork artwork = new DrawingArtwork(theme, printSize.get(), new Version().getVersion()[0]);
+        DrawingArtwork artwork = new DrawingArtwork(theme, printTheme, printSize.get(), new Version().getVersion()[0]);
         PublishOptions publishOptions = PublishOptions.defaults()
                 .withProgress(showProgress ? PublishProgress.forTerminal(System.err) : PublishProgress.silent());
         PublishResult result;

@@ -8,14 +8,16 @@ package aequa.project;
  * @param language  the pages' language tag (BCP 47)
  * @param printWidth the width of the print SVGs: a column preset ({@code one-column}, {@code two-columns},
  *                   {@code three-columns}, {@code full-width}) or a width in millimetres such as {@code "120 mm"}
+ * @param printTheme the theme of the print SVGs (the pages and web maps use {@code theme})
  */
-public record SiteSpec(String title, String publisher, String notice, String theme, String language, String printWidth) {
+public record SiteSpec(String title, String publisher, String notice, String theme, String language, String printWidth,
+                       String printTheme) {
 
-    static final SiteSpec DEFAULT = new SiteSpec(null, null, null, null, null, null);
+    static final SiteSpec DEFAULT = new SiteSpec(null, null, null, null, null, null, null);
 
-    /** A site with the default print width. */
+    /** A site with the default print settings. */
     public SiteSpec(String title, String publisher, String notice, String theme, String language) {
-        this(title, publisher, notice, theme, language, null);
+        this(title, publisher, notice, theme, language, null, null);
     }
 
     public SiteSpec {
@@ -25,5 +27,6 @@ public record SiteSpec(String title, String publisher, String notice, String the
         theme = theme == null ? "daylight" : theme;
         language = language == null ? "en" : language;
         printWidth = printWidth == null ? "two-columns" : printWidth;
+        printTheme = printTheme == null ? "newsprint" : printTheme;
     }
 }

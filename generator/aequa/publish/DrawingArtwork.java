@@ -20,17 +20,20 @@ import aequa.findings.Finding;
 public final class DrawingArtwork implements MapArtwork {
 
     private final Theme theme;
+    private final Theme printTheme;
     private final PrintSize printSize;
     private final String version;
     private final List<Finding> preflight = new ArrayList<>();
 
     /**
-     * @param theme     the site's theme
-     * @param printSize the physical size of the print SVGs
-     * @param version   aequa's version, part of the fingerprint so a new release redraws every map
+     * @param theme      the site's theme, for web maps and PNGs
+     * @param printTheme the theme of the print SVGs
+     * @param printSize  the physical size of the print SVGs
+     * @param version    aequa's version, part of the fingerprint so a new release redraws every map
      */
-    public DrawingArtwork(Theme theme, PrintSize printSize, String version) {
+    public DrawingArtwork(Theme theme, Theme printTheme, PrintSize printSize, String version) {
         this.theme = theme;
+        this.printTheme = printTheme;
         this.printSize = printSize;
         this.version = version;
     }
@@ -42,8 +45,8 @@ public final class DrawingArtwork implements MapArtwork {
 
     @Override
     public byte[] printSvg(MapModel map) {
-        DrawnMap drawn = MapDrawings.printSvg(map, theme, printSize);
-        preflight.addAll(PrintPreflight.check(map, theme, drawn, "maps/" + map.id() + "/" + map.id() + ".svg"));
+        DrawnMap drawn = MapDrawings.printSvg(map, printTheme, printSize);
+        preflight.addAll(PrintPreflight.check(map, printTheme, drawn, "maps/" + map.id() + "/" + map.id() + ".svg"));
         return drawn.bytes();
     }
 
@@ -54,7 +57,7 @@ public final class DrawingArtwork implements MapArtwork {
 
     @Override
     public String fingerprint() {
-        return Sha256.of((version + "\n" + theme + "\n" + printSize).getBytes(StandardCharsets.UTF_8));
+        return Sha256.of((version + "\n" + theme + "\n" + printTheme + "\n" + printSize).getBytes(StandardCharsets.UTF_8));
     }
 
     /** What the print preflight found in the drawings made so far (maps carried over are not redrawn). */

@@ -76,7 +76,7 @@ final class DemoFigures {
         try (Writer out = DemoGenerator.utf8(file)) {
             out.write("code,name,literacy_change,literacy_change_moe\n");
             for (DemoGenerator.Place p : places) {
-                double change = -5 + 12 * DemoGenerator.field(p.lonDeg(), p.latDeg(), 300) + 1.5 * random.nextGaussian();
+                double change = 6 - 0.33 * (Math.abs(p.latDeg()) - 18) + 1.5 * random.nextGaussian();
                 double margin = 0.4 + 2.5 * random.nextDouble();
                 boolean notApplicable = p.code().equals("SD-05");
                 out.write(p.code() + "," + quoted(p.name()) + "," + (notApplicable ? "-" : fixed(change, 1)) + ","
