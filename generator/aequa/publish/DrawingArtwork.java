@@ -51,8 +51,8 @@ public final class DrawingArtwork implements MapArtwork {
     }
 
     @Override
-    public byte[] png(MapModel map, int widthPx) {
-        return MapDrawings.png(map, theme, widthPx, 1).bytes();
+    public byte[] png(MapModel map, int widthPx, int scale) {
+        return MapDrawings.png(map, theme, widthPx, scale).bytes();
     }
 
     @Override

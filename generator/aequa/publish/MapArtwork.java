@@ -21,8 +21,11 @@ public interface MapArtwork {
     /** The print-ready SVG file, offered as a download. */
     byte[] printSvg(MapModel map);
 
-    /** A PNG of the map {@code widthPx} pixels wide, used as download and as the thumbnail on the index. */
-    byte[] png(MapModel map, int widthPx);
+    /**
+     * A PNG of the map laid out {@code widthPx} pixels wide and rendered at {@code scale} times that many
+     * pixels (1 for the download and the index thumbnail, 2 for high-density screens and social previews).
+     */
+    byte[] png(MapModel map, int widthPx, int scale);
 
     /**
      * Identifies the drawing code and theme. When it changes every map is redrawn; return, for example, the

@@ -33,6 +33,7 @@ final class MapViews {
         List<MapPageView.Download> downloads = List.of(
                 new MapPageView.Download("Map for print (SVG)", fileName(files.printSvg()), "image/svg+xml"),
                 new MapPageView.Download("Map as picture (PNG)", fileName(files.png()), "image/png"),
+                new MapPageView.Download("Map as picture, double resolution (PNG)", fileName(files.pngDouble()), "image/png"),
                 new MapPageView.Download("Figures shown (CSV)", fileName(files.csv()), "text/csv"));
         return new MapPageView(files.fileId(), map.spec().title(), map.spec().unit(), map.spec().asOf(), caption(map),
                 summary(map), webSvg, map.spec().notes(), map.spec().source(), map.notices(), legend(map), downloads,

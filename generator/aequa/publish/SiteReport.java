@@ -107,7 +107,7 @@ final class SiteReport {
         node.put("source", map.spec().source());
         ObjectNode links = node.putObject("files");
         links.put("page", files.page()).put("figures", files.figures()).put("printSvg", files.printSvg())
-                .put("webSvg", files.webSvg()).put("png", files.png()).put("csv", files.csv());
+                .put("webSvg", files.webSvg()).put("png", files.png()).put("pngDouble", files.pngDouble()).put("csv", files.csv());
         node.set("projection", projection(map.projection(), json));
         ObjectNode audit = node.putObject("areaAudit");
         number(audit, "maxRelativeError", map.areaAudit().maxRelativeError());

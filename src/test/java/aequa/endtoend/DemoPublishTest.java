@@ -140,6 +140,18 @@ class DemoPublishTest {
     }
 
     @Test
+    void everyMapHasAPictureAtOneAndTwoTimesTheResolution() throws IOException {
+        for (JsonNode map : report.path("maps")) {
+            String id = map.path("id").asText();
+            java.awt.image.BufferedImage one = javax.imageio.ImageIO.read(site.resolve("maps").resolve(id).resolve(id + ".png").toFile());
+            java.awt.image.BufferedImage two = javax.imageio.ImageIO.read(site.resolve("maps").resolve(id).resolve(id + "-2x.png").toFile());
+            assertEquals(1600, one.getWidth(), id);
+            assertEquals(2 * one.getWidth(), two.getWidth(), id);
+            assertEquals(2 * one.getHeight(), two.getHeight(), id);
+        }
+    }
+
+    @Test
     void thePagesSayTheDataIsInventedAndGiveTheCautions() throws IOException {
         String index = Files.readString(site.resolve("index.html"));
         String method = Files.readString(site.resolve("method.html"));

@@ -56,8 +56,8 @@ class ConcurrentPublishTest {
         }
 
         @Override
-        public byte[] png(MapModel map, int widthPx) {
-            return inner.png(map, widthPx);
+        public byte[] png(MapModel map, int widthPx, int scale) {
+            return inner.png(map, widthPx, scale);
         }
     }
 

@@ -70,7 +70,7 @@ final class FakeArtwork implements MapArtwork {
     }
 
     @Override
-    public byte[] png(MapModel map, int widthPx) {
+    public byte[] png(MapModel map, int widthPx, int scale) {
         BufferedImage image = new BufferedImage(4, 3, BufferedImage.TYPE_INT_RGB);
         image.setRGB(0, 0, map.regions().size());
         ByteArrayOutputStream bytes = new ByteArrayOutputStream();

@@ -36,9 +36,9 @@ public final class PublishBenchmarkSupport {
             }
 
             @Override
-            public byte[] png(MapModel map, int widthPx) {
+            public byte[] png(MapModel map, int widthPx, int scale) {
                 pause();
-                return fake.png(map, widthPx);
+                return fake.png(map, widthPx, scale);
             }
         };
     }
