@@ -30,8 +30,7 @@ import aequa.projection.ProjectionRequest;
  * The automatic choice for a footprint of {@value #VERTICES} vertices: 400 regions with wiggly edges
  * tiling a continent-sized box (35-70 N, 10 W - 40 E), 250 vertices each. Measures the footprint
  * analysis alone and footprint plus choice, average time per operation in milliseconds (goal: under 200 ms
- * warm). Run: {@code mvn -o -q -Pbench test-compile exec:exec -Dbench=ChooserBenchmark -DbenchArgs=ChooserBenchmark}
- * (benchArgs repeats the pattern: an empty benchArgs reaches JMH as an empty pattern, which selects every benchmark).
+ * warm). Run: {@code mvn -o -q -Pbench test-compile exec:exec -Dbench=ChooserBenchmark}.
  */
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)

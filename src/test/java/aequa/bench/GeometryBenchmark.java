@@ -41,7 +41,7 @@ import aequa.projection.Projections;
  * Voronoi coverage ({@link SyntheticCoverage}). Throughput = input vertices / time per run.
  *
  * <pre>
- * mvn -o -q -Pbench test-compile exec:exec -Dbench=GeometryBenchmark -DbenchArgs="-p cells=100000"
+ * mvn -o -q -Pbench test-compile exec:exec -Dbench="GeometryBenchmark -p cells=100000"
  * </pre>
  * Peak heap, in a fresh JVM (run {@link #main} with {@code heap CELLS}), is the sum of the heap pools' peak
  * usage over one run, reported against the GeoJSON file's size.

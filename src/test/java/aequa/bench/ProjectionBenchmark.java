@@ -29,8 +29,8 @@ import aequa.projection.Projections;
  * Forward projection throughput per family on one core, in batches of {@value #POINTS} points (one
  * operation = one batch, so points per second = operations per second x {@value #POINTS}); and, for the
  * three SIS-backed families, the same batch through the SIS transform called directly, to measure the
- * wrapper's overhead. Run: {@code mvn -o -q -Pbench test-compile exec:exec -Dbench=ProjectionBenchmark
- * -DbenchArgs=ProjectionBenchmark}.
+ * wrapper's overhead. Run: {@code mvn -o -q -Pbench test-compile exec:exec -Dbench=ProjectionBenchmark}
+ * (add JMH options after the name, e.g. {@code -Dbench="ProjectionBenchmark -f 2"}).
  */
 @BenchmarkMode(Mode.Throughput)
 @OutputTimeUnit(TimeUnit.SECONDS)
