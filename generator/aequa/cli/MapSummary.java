@@ -11,9 +11,10 @@ final class MapSummary {
     }
 
     static String line(MapModel map) {
-        return String.format(Locale.ROOT, "  %-22s %-34s omega max %5.1f deg, mean %4.1f deg; area error %.1e; %d regions, %s %d classes",
+        String display = "circles".equals(map.spec().display()) ? "proportional circles"
+                : map.classification().method().configName() + " " + map.classification().classCount() + " classes";
+        return String.format(Locale.ROOT, "  %-22s %-34s omega max %5.1f deg, mean %4.1f deg; area error %.1e; %d regions, %s",
                 map.id(), map.projection().projection().family().displayName(), map.projection().omegaMaxDeg(),
-                map.projection().omegaMeanDeg(), map.areaAudit().maxRelativeError(), map.regions().size(),
-                map.classification().method().configName(), map.classification().classCount());
+                map.projection().omegaMeanDeg(), map.areaAudit().maxRelativeError(), map.regions().size(), display);
     }
 }

@@ -15,8 +15,8 @@ import picocli.CommandLine.Spec;
 
 /** Publishes, serves the site on this computer only, and rebuilds and reloads when an input changes. */
 @Command(name = "preview", mixinStandardHelpOptions = true,
-        description = {"Publish the project, serve the site at http://127.0.0.1:PORT/, and rebuild it whenever",
-                "a file of the project changes; open pages reload by themselves. Stop with Ctrl-C."})
+        description = {"Publish, serve the site on this computer, and rebuild and reload when an input changes.",
+                "The site is served at http://127.0.0.1:PORT/ only; open pages reload by themselves. Stop with Ctrl-C."})
 final class PreviewCommand implements Callable<Integer> {
 
     @Parameters(paramLabel = "PROJECT_DIR", defaultValue = "data-demo", description = "The project folder (default: ${DEFAULT-VALUE}).")
