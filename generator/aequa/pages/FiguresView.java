@@ -12,9 +12,10 @@ import java.util.List;
  * @param rows       one row per region, sorted by key
  * @param mapHref    link back to the map's page, relative to this page
  * @param csvHref    link to the CSV download, relative to this page
+ * @param hasMargins whether any figure has a margin of error (the table then shows a column for it)
  */
 public record FiguresView(String id, String title, String unit, List<String> periods, List<Row> rows,
-                          String mapHref, String csvHref) {
+                          String mapHref, String csvHref, boolean hasMargins) {
 
     public FiguresView {
         periods = List.copyOf(periods);
@@ -39,7 +40,9 @@ public record FiguresView(String id, String title, String unit, List<String> per
      * @param normalised  the value mapped, formatted, or empty unless reported
      * @param classNumber the class, 1 = lowest, or empty
      * @param unreliable  whether the figure rests on too few events or too wide a margin
+     * @param margin      the figure's margin of error, formatted, or empty when the source gives none
      */
-    public record Cell(String status, String value, String normalised, String classNumber, boolean unreliable) {
+    public record Cell(String status, String value, String normalised, String classNumber, boolean unreliable,
+                       String margin) {
     }
 }

@@ -49,12 +49,13 @@ final class MapViews {
                 boolean reported = v.status() == FigureStatus.REPORTED;
                 cells.add(new FiguresView.Cell(FiguresCsv.statusText(v), reported ? NumberText.of(v.value()) : "",
                         reported ? NumberText.of(v.normalisedValue()) : "",
-                        v.classIndex() < 0 ? "" : Integer.toString(v.classIndex() + 1), v.unreliable()));
+                        v.classIndex() < 0 ? "" : Integer.toString(v.classIndex() + 1), v.unreliable(),
+                        reported && Double.isFinite(v.marginOfError()) ? "\u00b1" + NumberText.of(v.marginOfError()) : ""));
             }
             rows.add(new FiguresView.Row(region.key(), region.name(), NumberText.of(region.geodesicAreaKm2()), cells));
         }
         return new FiguresView(files.fileId(), map.spec().title(), map.spec().unit(), map.periods(), rows,
-                fileName(files.page()), fileName(files.csv()));
+                fileName(files.page()), fileName(files.csv()), rows.stream().flatMap(r -> r.cells().stream()).anyMatch(c -> !c.margin().isEmpty()));
     }
 
     /** "Lambert azimuthal equal-area projection (...) of the WGS 84 ellipsoid; figures: SOURCE, DATE." */

@@ -152,6 +152,15 @@ class DemoPublishTest {
     }
 
     @Test
+    void marginsOfErrorTravelIntoTheTableAndTheCsv() throws IOException {
+        // data-demo/figures/serrano-districts.csv gives SD-01 a change of 5.8 with a margin of 1.5
+        String table = Files.readString(site.resolve("maps/literacy-change/figures.html"));
+        String csv = Files.readString(site.resolve("maps/literacy-change/literacy-change.csv"));
+        assertTrue(table.contains("Margin of error") && table.contains("\u00b11.5"), "table shows margins");
+        assertTrue(csv.lines().anyMatch(l -> l.startsWith("\"SD-01\"") && l.contains(",5.8,") && l.contains(",1.5,")), csv);
+    }
+
+    @Test
     void thePagesSayTheDataIsInventedAndGiveTheCautions() throws IOException {
         String index = Files.readString(site.resolve("index.html"));
         String method = Files.readString(site.resolve("method.html"));

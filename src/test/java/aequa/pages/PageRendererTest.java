@@ -51,7 +51,7 @@ class PageRendererTest {
         List<String> pages = List.of(renderer.renderIndex(SITE, new IndexView(List.of())),
                 renderer.renderMethod(SITE, new MethodView(List.of())),
                 renderer.renderChanges(SITE, new ChangesView("First.", List.of(), 0)),
-                renderer.renderFigures(SITE, new FiguresView("m", "T", "u", List.of("2031"), List.of(), "index.html", "m.csv")),
+                renderer.renderFigures(SITE, new FiguresView("m", "T", "u", List.of("2031"), List.of(), "index.html", "m.csv", false)),
                 renderer.renderMap(SITE, new MapPageView("m", "T", "u", "2031", "c", "s", "<svg xmlns=\"http://www.w3.org/2000/svg\"/>",
                         "", "", List.of(), List.of(), List.of(), "figures.html")));
         for (String page : pages) {
