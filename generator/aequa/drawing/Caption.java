@@ -30,7 +30,12 @@ final class Caption {
             text.append(" (").append(String.join(", ", parameters)).append(')');
         }
         text.append(", datum WGS 84. Angular distortion \u03c9 up to ").append(Numbers.trim(choice.omegaMaxDeg(), 1))
-                .append("\u00b0, mean ").append(Numbers.trim(choice.omegaMeanDeg(), 1)).append("\u00b0.");
+                .append('\u00b0');
+        if (Math.abs(choice.worstLatDeg()) >= 89.9) {
+            // on a world map the largest omega always sits at a pole, which says little about the data
+            text.append(" (at the ").append(choice.worstLatDeg() > 0 ? "North" : "South").append(" Pole)");
+        }
+        text.append(", mean ").append(Numbers.trim(choice.omegaMeanDeg(), 1)).append("\u00b0.");
         if (model.areaAudit() != null) {
             double percent = model.areaAudit().maxRelativeError() * 100;
             text.append(" Areas are true: largest difference from the ellipsoid ")

@@ -26,7 +26,7 @@ final class Hatching {
     /**
      * Lines of slope +1 (rising to the right on the page when {@code rising}) or -1, {@code spacingU} apart
      * measured perpendicular to the lines, intersected with {@code area} (page units). Uses OverlayNGRobust,
-     * which does not fail on slightly invalid input (/work/shared/LIBRARIES.md, section 2).
+     * which does not fail on slightly invalid input (shared/LIBRARIES.md, section 2).
      */
     static Geometry lines(Geometry area, double spacingU, boolean rising) {
         Envelope e = area.getEnvelopeInternal();

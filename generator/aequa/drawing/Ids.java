@@ -3,7 +3,7 @@ package aequa.drawing;
 import java.nio.charset.StandardCharsets;
 
 /**
- * Element ids for SVG. JFreeSVG writes ids without XML escaping (/work/shared/LIBRARIES.md, section 4), so
+ * Element ids for SVG. JFreeSVG writes ids without XML escaping (shared/LIBRARIES.md, section 4), so
  * every id passes through here. The mapping is injective, so two different keys never share an id and
  * an id stays the same from one build to the next.
  */

@@ -9,7 +9,7 @@ import org.jfree.svg.ViewBox;
 
 /**
  * Sets up JFreeSVG for deterministic, compact output and finishes its text
- * (/work/shared/LIBRARIES.md, section 4, lists the pitfalls handled here).
+ * (shared/LIBRARIES.md, section 4, lists the pitfalls handled here).
  */
 final class SvgOutput {
 

@@ -85,7 +85,7 @@ class BrowserTest {
         profile = Files.createTempDirectory("aequa-chromium-");
         ChromeOptions options = new ChromeOptions();
         options.setBinary(CHROMIUM.toFile());
-        // flags from /work/shared/LIBRARIES.md section 10 (verified with Chromium 156 on Debian 12)
+        // flags from shared/LIBRARIES.md section 10 (verified with Chromium 156 on Debian 12)
         options.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking",
                 "--disable-component-update", "--disable-sync", "--no-first-run", "--disable-dev-shm-usage",
                 "--allow-file-access-from-files", "--window-size=1280,1000", "--user-data-dir=" + profile);

@@ -17,7 +17,7 @@ class NormalisationTest {
 
     /**
      * Areas of two 1 x 1 degree cells (lon 0..1) on WGS 84, from GeographicLib's Planimeter as listed in
-     * the project's reference table (/work/shared/reference/areas.csv, rows cell_eq_1x1 and cell_45N_1x1):
+     * the project's reference table (src/test/resources/geometry/areas.csv, rows cell_eq_1x1 and cell_45N_1x1):
      * 12,308,463,901.8368 m2 and 8,686,494,953.77913 m2.
      */
     private static final double EQUATOR_CELL_KM2 = 12_308.4639018368;
