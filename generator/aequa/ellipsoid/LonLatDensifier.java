@@ -48,11 +48,16 @@ public final class LonLatDensifier {
     /**
      * @param lonLat     Polygon or MultiPolygon, lon/lat degrees
      * @param maxStepDeg the largest step in longitude or latitude between consecutive vertices, degrees (&gt; 0)
-     * @return a geometry of the same type with the same factory; the input is not changed
+     * @return a geometry of the same type with the same factory; the input is not changed. When no edge is
+     *         longer than the step, the input itself is returned (JTS geometries are treated as immutable
+     *         throughout aequa), so an already dense source costs neither time nor heap here.
      */
     public static Geometry densify(Geometry lonLat, double maxStepDeg) {
         if (!(maxStepDeg > 0)) {
             throw new IllegalArgumentException("maxStepDeg must be positive: " + maxStepDeg);
+        }
+        if (!needsVertices(lonLat, maxStepDeg)) {
+            return lonLat;
         }
         GeometryFactory factory = lonLat.getFactory();
         Polygon[] parts = new Polygon[lonLat.getNumGeometries()];
@@ -107,6 +112,33 @@ public final class LonLatDensifier {
         out[k++] = ring.getX(n - 1);
         out[k++] = ring.getY(n - 1);
         return new PackedCoordinateSequence.Double(out, 2, 0);
+    }
+
+    private static boolean needsVertices(Geometry lonLat, double maxStepDeg) {
+        for (int i = 0; i < lonLat.getNumGeometries(); i++) {
+            Polygon polygon = (Polygon) lonLat.getGeometryN(i);
+            if (polygon.isEmpty()) {
+                continue;
+            }
+            if (needsVertices(polygon.getExteriorRing().getCoordinateSequence(), maxStepDeg)) {
+                return true;
+            }
+            for (int h = 0; h < polygon.getNumInteriorRing(); h++) {
+                if (needsVertices(polygon.getInteriorRingN(h).getCoordinateSequence(), maxStepDeg)) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    private static boolean needsVertices(CoordinateSequence ring, double maxStepDeg) {
+        for (int i = 0; i + 1 < ring.size(); i++) {
+            if (steps(ring.getX(i), ring.getY(i), ring.getX(i + 1), ring.getY(i + 1), maxStepDeg) > 1) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static int steps(double x0, double y0, double x1, double y1, double maxStepDeg) {

@@ -40,7 +40,7 @@ import aequa.projection.EqualAreaProjection;
  *     own edge of the map; the nudge is far larger than the frame round trip's error (about 1e-13 deg) and
  *     far smaller than anything drawn. New edges along the cut are densified to the given step.</li>
  * <li>Continuous projections: parts are projected as they are (a region around the centre needs no cut);
- *     a part reaching beyond the frame's lowest latitude is clipped to it in frame coordinates by
+ *     a part with a point the projection returns as NaN, i.e. beyond the frame's lowest latitude, is clipped to it in frame coordinates by
  *     {@link AntimeridianCutter} (the projection returns NaN beyond its domain, so clipping after
  *     projecting would be too late) and its pieces are merged again once projected.</li>
  * </ul>
@@ -124,13 +124,7 @@ public final class PolygonProjector {
     }
 
     private void projectPart(Polygon part, List<Polygon> out) {
-        FrameScan scan = scan(part);
-        boolean inside = scan.minFrameLatDeg >= frame.minFrameLatDeg();
-        if (continuous && inside) {
-            Polygon projected = projectRings(part);
-            if (projected != null) {
-                out.add(projected);
-            }
+        if (continuous && projectWithinDomain(part, out)) {
             return;
         }
         if (continuous) {
@@ -154,7 +148,7 @@ public final class PolygonProjector {
             }
             return;
         }
-        if (scan.fitsFrame) {
+        if (fitsFrame(part)) {
             Polygon projected = projectRings(part);
             if (projected != null) {
                 out.add(projected);
@@ -171,31 +165,28 @@ public final class PolygonProjector {
         }
     }
 
-    /** What the frame coordinates of a part say, found without building any geometry (the common, fast case). */
-    private static final class FrameScan {
-        double minFrameLatDeg = Double.POSITIVE_INFINITY;
-        boolean fitsFrame = true;
-    }
-
-    private FrameScan scan(Polygon part) {
-        FrameScan scan = new FrameScan();
+    /**
+     * True when every vertex of the part lies within the frame's strip and latitude band, none on the cut
+     * and no edge jumps across it: the part can be projected as it is (the common, fast case, decided
+     * without building any geometry).
+     */
+    private boolean fitsFrame(Polygon part) {
         double[] xy = new double[2];
         for (int r = -1; r < part.getNumInteriorRing(); r++) {
             CoordinateSequence ring = (r < 0 ? part.getExteriorRing() : part.getInteriorRingN(r)).getCoordinateSequence();
             double previousX = Double.NaN;
             for (int i = 0; i < ring.size(); i++) {
                 frame.toFrame(ring.getX(i), ring.getY(i), xy);
-                scan.minFrameLatDeg = Math.min(scan.minFrameLatDeg, xy[1]);
                 boolean onCut = Math.abs(xy[0]) >= 180 - CUT_SNAP_DEG;
                 boolean offBand = xy[1] < frame.minFrameLatDeg() || xy[1] > frame.maxFrameLatDeg() || Math.abs(xy[1]) >= 90 - CUT_SNAP_DEG;
                 boolean crossing = Math.abs(xy[0] - previousX) > 180;
                 if (onCut || offBand || crossing) {
-                    scan.fitsFrame = false;
+                    return false;
                 }
                 previousX = xy[0];
             }
         }
-        return scan;
+        return true;
     }
 
     private Polygon toFrame(Polygon lonLat, Map<Coordinate, Coordinate> geoByFrame) {
@@ -244,15 +235,48 @@ public final class PolygonProjector {
         return METRES.createLinearRing(out);
     }
 
+    /**
+     * The fast path of a continuous projection: projects the part as it is and adds it to {@code out}
+     * unless some point came out NaN, that is beyond the projection's domain (the {@link EqualAreaProjection}
+     * contract), in which case nothing is added and false returned so the caller clips the part in the
+     * frame. This spares the frame scan (an authalic latitude and a rotation per vertex, as costly as the
+     * projection itself) for the common region that lies well inside the domain.
+     */
+    private boolean projectWithinDomain(Polygon lonLat, List<Polygon> out) {
+        double[][] rings = new double[1 + lonLat.getNumInteriorRing()][];
+        for (int r = 0; r < rings.length; r++) {
+            rings[r] = forward((r == 0 ? lonLat.getExteriorRing() : lonLat.getInteriorRingN(r - 1)).getCoordinateSequence());
+            for (double v : rings[r]) {
+                if (Double.isNaN(v)) {
+                    return false;
+                }
+            }
+        }
+        Polygon projected = polygon(rings);
+        if (projected != null) {
+            out.add(projected);
+        }
+        return true;
+    }
+
     /** Projects each ring with one batch call; drops NaN points and repeated points; null when the shell collapses. */
     private Polygon projectRings(Polygon lonLat) {
-        LinearRing shell = projectRing(lonLat.getExteriorRing().getCoordinateSequence());
+        double[][] rings = new double[1 + lonLat.getNumInteriorRing()][];
+        for (int r = 0; r < rings.length; r++) {
+            rings[r] = forward((r == 0 ? lonLat.getExteriorRing() : lonLat.getInteriorRingN(r - 1)).getCoordinateSequence());
+        }
+        return polygon(rings);
+    }
+
+    /** Builds the polygon from projected rings (shell first); null when the shell collapses. */
+    private static Polygon polygon(double[][] projectedRings) {
+        LinearRing shell = compactRing(projectedRings[0]);
         if (shell == null) {
             return null;
         }
         List<LinearRing> holes = new ArrayList<>();
-        for (int h = 0; h < lonLat.getNumInteriorRing(); h++) {
-            LinearRing hole = projectRing(lonLat.getInteriorRingN(h).getCoordinateSequence());
+        for (int h = 1; h < projectedRings.length; h++) {
+            LinearRing hole = compactRing(projectedRings[h]);
             if (hole != null) {
                 holes.add(hole);
             }
@@ -260,14 +284,26 @@ public final class PolygonProjector {
         return METRES.createPolygon(shell, holes.toArray(new LinearRing[0]));
     }
 
-    private LinearRing projectRing(CoordinateSequence ring) {
+    /** The ring's points projected, interleaved x, y in metres, in a new array of exactly 2 * size; NaN off the domain. */
+    private double[] forward(CoordinateSequence ring) {
         int n = ring.size();
         double[] xy = new double[2 * n];
+        if (ring instanceof PackedCoordinateSequence.Double packed && packed.getDimension() == 2 && packed.getMeasures() == 0) {
+            // the readers' and the densifier's sequences: read their array directly, no copy
+            projection.forward(packed.getRawCoordinates(), 0, xy, 0, n);
+            return xy;
+        }
         for (int i = 0; i < n; i++) {
             xy[2 * i] = ring.getX(i);
             xy[2 * i + 1] = ring.getY(i);
         }
         projection.forward(xy, 0, xy, 0, n);
+        return xy;
+    }
+
+    /** Drops NaN points and repeated points from a projected ring and closes it; null when fewer than four points are left. */
+    private static LinearRing compactRing(double[] xy) {
+        int n = xy.length / 2;
         int kept = 0;
         for (int i = 0; i < n; i++) {
             double x = xy[2 * i];
@@ -287,7 +323,9 @@ public final class PolygonProjector {
         if (kept < 4) {
             return null;
         }
-        return METRES.createLinearRing(new PackedCoordinateSequence.Double(Arrays.copyOf(xy, 2 * kept), 2, 0));
+        // the array is used as it is when every point was kept (the common case): no copy
+        double[] packed = 2 * kept == xy.length ? xy : Arrays.copyOf(xy, 2 * kept);
+        return METRES.createLinearRing(new PackedCoordinateSequence.Double(packed, 2, 0));
     }
 
 }

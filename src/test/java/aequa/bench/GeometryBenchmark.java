@@ -44,7 +44,9 @@ import aequa.projection.Projections;
  * mvn -o -q -Pbench test-compile exec:exec -Dbench="GeometryBenchmark -p cells=100000"
  * </pre>
  * Peak heap, in a fresh JVM (run {@link #main} with {@code heap CELLS}), is the sum of the heap pools' peak
- * usage over one run, reported against the GeoJSON file's size.
+ * usage over one run, reported against the GeoJSON file's size; the figure that matters is the smallest
+ * {@code -Xmx} with which that run completes. {@code stages CELLS RUNS} times each stage separately, for
+ * finding where the time goes.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SingleShotTime)
@@ -104,8 +106,15 @@ public class GeometryBenchmark {
         return CoverageSimplification.simplify(keys, planar, toleranceM, CoverageSimplification.islandThresholdM2(toleranceM)).planarM();
     }
 
-    /** {@code heap CELLS}: one run in this JVM, then peak heap against file size; prints one line. */
+    /**
+     * {@code heap CELLS}: one run in this JVM, then peak heap against file size; prints one line.
+     * {@code stages CELLS RUNS}: RUNS runs in this JVM, each stage timed; prints a line per run.
+     */
     public static void main(String[] args) throws Exception {
+        if (args[0].equals("stages")) {
+            stages(Integer.parseInt(args[1]), Integer.parseInt(args[2]));
+            return;
+        }
         int cells = Integer.parseInt(args[1]);
         Path dir = Files.createTempDirectory("aequa-heap");
         long vertices = SyntheticCoverage.write(dir.resolve("cells.geojson"), cells, 20261202L);
@@ -124,6 +133,40 @@ public class GeometryBenchmark {
         long peak = heapPools.stream().mapToLong(p -> p.getPeakUsage().getUsed()).sum();
         System.out.printf(Locale.ROOT, "cells=%d vertices=%d file=%.1f MB peakHeap=%.1f MB ratio=%.2f time=%.2f s (%.2f M vertices/s) kept=%d%n",
                 cells, vertices, fileBytes / 1e6, peak / 1e6, (double) peak / fileBytes, seconds, vertices / seconds / 1e6, kept);
+        Files.delete(dir.resolve("cells.geojson"));
+        Files.delete(dir);
+    }
+
+    private static void stages(int cells, int runs) throws Exception {
+        Path dir = Files.createTempDirectory("aequa-stages");
+        long vertices = SyntheticCoverage.write(dir.resolve("cells.geojson"), cells, 20261202L);
+        for (int run = 0; run < runs; run++) {
+            long t0 = System.nanoTime();
+            Findings findings = new Findings();
+            List<Region> regions = RegionReaders.read(dir, new RegionSourceSpec("cells.geojson", "@id", "name", ""), findings);
+            long t1 = System.nanoTime();
+            EqualAreaProjection laea = Projections.lambertAzimuthal(SyntheticCoverage.BOX.centre().x, SyntheticCoverage.BOX.centre().y);
+            double mapWidthM = 4_000_000;
+            double stepDeg = LonLatDensifier.stepDeg(mapWidthM, OUTPUT_WIDTH_PX);
+            List<String> keys = new ArrayList<>(regions.size());
+            List<Geometry> dense = new ArrayList<>(regions.size());
+            for (Region region : regions) {
+                keys.add(region.key());
+                dense.add(LonLatDensifier.densify(region.lonLat(), stepDeg));
+            }
+            long t2 = System.nanoTime();
+            PolygonProjector projector = new PolygonProjector(laea, stepDeg);
+            List<Geometry> planar = new ArrayList<>(regions.size());
+            for (Geometry geometry : dense) {
+                planar.add(projector.project(geometry));
+            }
+            long t3 = System.nanoTime();
+            double toleranceM = CoverageSimplification.screenToleranceM(mapWidthM, OUTPUT_WIDTH_PX);
+            CoverageSimplification.simplify(keys, planar, toleranceM, CoverageSimplification.islandThresholdM2(toleranceM));
+            long t4 = System.nanoTime();
+            System.out.printf(Locale.ROOT, "read %.2f s, densify %.2f s, project %.2f s, simplify %.2f s: %.2f s (%.2f M vertices/s)%n",
+                    (t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9, (t4 - t3) / 1e9, (t4 - t0) / 1e9, vertices / ((t4 - t0) / 1e3));
+        }
         Files.delete(dir.resolve("cells.geojson"));
         Files.delete(dir);
     }

@@ -2,6 +2,7 @@ package aequa.ellipsoid;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Arrays;
@@ -53,5 +54,14 @@ class LonLatDensifierTest {
         assertEquals(53 + 9, dense.getNumPoints());
         assertEquals(box.getArea(), dense.getArea(), 1e-12);
         assertTrue(dense.equalsTopo(box));
+    }
+
+    @Test
+    void alreadyDenseInputIsReturnedAsItIs() throws ParseException {
+        Geometry fine = new WKTReader(FACTORY).read("MULTIPOLYGON(((0 0, 0.5 0, 0.5 0.5, 0 0)), ((2 2, 2.4 2, 2.4 2.3, 2 2)))");
+        assertSame(fine, LonLatDensifier.densify(fine, 0.5), "no edge is longer than the step: nothing to copy");
+        Geometry oneLongEdge = new WKTReader(FACTORY).read("MULTIPOLYGON(((0 0, 0.5 0, 0.5 0.5, 0 0)), ((2 2, 3 2, 3 2.3, 2 2)))");
+        Geometry dense = LonLatDensifier.densify(oneLongEdge, 0.5);
+        assertEquals(4 + 6, dense.getNumPoints(), "the second part's 1-degree edges gain one vertex each");
     }
 }

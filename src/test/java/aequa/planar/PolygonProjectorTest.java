@@ -10,6 +10,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
+import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.io.ParseException;
 import org.locationtech.jts.io.WKTReader;
@@ -109,6 +110,34 @@ class PolygonProjectorTest {
         double ratio = projector.project(dense).getArea() / GeodesicArea.areaM2(dense);
         // the box reaches 135 deg from the centre at its middle: about half of it is inside the domain
         assertTrue(ratio > 0.4 && ratio < 0.6, "ratio " + ratio);
+    }
+
+    @Test
+    void anAzimuthalProjectionCutsAStraddlingPartAlongTheDomainEdgeRatherThanDroppingPoints() throws ParseException {
+        // Projections.lambertAzimuthal: frame latitude domain [-45, 90]. A part with points beyond it must be
+        // clipped in the frame (new vertices on the frame parallel -45), not merely lose its NaN points.
+        EqualAreaProjection laea = Projections.lambertAzimuthal(0, 0);
+        PolygonProjector projector = new PolygonProjector(laea, 0.5);
+        Geometry straddling = LonLatDensifier.densify(new WKTReader().read("POLYGON((125 -5, 145 -5, 145 5, 125 5, 125 -5))"), 0.1);
+        Coordinate[] projected = projector.project(straddling).getCoordinates();
+        double[] lonLat = new double[2 * projected.length];
+        double[] xy = new double[2 * projected.length];
+        for (int i = 0; i < projected.length; i++) {
+            xy[2 * i] = projected[i].x;
+            xy[2 * i + 1] = projected[i].y;
+        }
+        laea.inverse(xy, 0, lonLat, 0, projected.length);
+        int onEdge = 0;
+        double[] frame = new double[2];
+        for (int i = 0; i < projected.length; i++) {
+            laea.frame().toFrame(lonLat[2 * i], lonLat[2 * i + 1], frame);
+            assertTrue(frame[1] > -45 - 1e-6, "inside the domain: " + frame[1]);
+            if (Math.abs(frame[1] + 45) < 1e-6) {
+                onEdge++;
+            }
+        }
+        // the edge crosses the 10-degree-tall box; cut edges are densified to the 0.5 deg step: about 20 vertices
+        assertTrue(onEdge >= 15, onEdge + " vertices on the domain edge");
     }
 
     /** Normal-aspect Lambert cylindrical equal-area on WGS 84: a projection with a cut at lon0 + 180. */
