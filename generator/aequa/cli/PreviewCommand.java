@@ -1,16 +1,15 @@
 package aequa.cli;
 
 import java.io.IOException;
-import java.nio.file.Path;
 import java.time.Duration;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 
 import aequa.publish.PreviewServer;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** Publishes, serves the site on this computer only, and rebuilds and reloads when an input changes. */
@@ -19,11 +18,8 @@ import picocli.CommandLine.Spec;
                 "The site is served at http://127.0.0.1:PORT/ only; open pages reload by themselves. Stop with Ctrl-C."})
 final class PreviewCommand implements Callable<Integer> {
 
-    @Parameters(paramLabel = "PROJECT_DIR", defaultValue = "data-demo", description = "The project folder (default: ${DEFAULT-VALUE}).")
-    Path projectDir;
-
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = "site-out", description = "The output folder (default: ${DEFAULT-VALUE}).")
-    Path outDir;
+    @Mixin
+    ProjectAndOutput folders;
 
     @Option(names = "--port", defaultValue = "8123", description = "The port on 127.0.0.1 (default: ${DEFAULT-VALUE}; 0 for any free port).")
     int port;
@@ -36,23 +32,23 @@ final class PreviewCommand implements Callable<Integer> {
         var out = spec.commandLine().getOut();
         var err = spec.commandLine().getErr();
         SiteBuilder builder = new SiteBuilder(out, err);
-        ExitCode first = builder.build(projectDir, outDir, true);
+        ExitCode first = builder.build(folders.projectDir, folders.outDir, true);
         if (first != ExitCode.OK) {
             err.println("aequa: fix the problems above, then run preview again.");
             return first.code;
         }
         PreviewServer.Rebuild rebuild = () -> {
-            ExitCode code = builder.build(projectDir, outDir, false);
+            ExitCode code = builder.build(folders.projectDir, folders.outDir, false);
             if (code != ExitCode.OK) {
                 throw new IllegalStateException("the project has problems (listed above)");
             }
         };
-        try (PreviewServer server = PreviewServer.start(outDir, projectDir, rebuild, port, Duration.ofSeconds(1),
+        try (PreviewServer server = PreviewServer.start(folders.outDir, folders.projectDir, rebuild, port, Duration.ofSeconds(1),
                 line -> {
                     out.println("aequa preview: " + line);
                     out.flush();
                 })) {
-            out.println("Serving " + outDir + " at " + server.address() + " (this computer only). Stop with Ctrl-C.");
+            out.println("Serving " + folders.outDir + " at " + server.address() + " (this computer only). Stop with Ctrl-C.");
             out.flush();
             new CountDownLatch(1).await();
         }

@@ -1,13 +1,11 @@
 package aequa.cli;
 
 import java.io.IOException;
-import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** Builds the site: checks every input, draws every map and swaps the new site into place. */
@@ -16,11 +14,8 @@ import picocli.CommandLine.Spec;
                 "Nothing is written when the data has errors; the previous site stays as it was until the new one is complete."})
 final class PublishCommand implements Callable<Integer> {
 
-    @Parameters(paramLabel = "PROJECT_DIR", defaultValue = "data-demo", description = "The project folder (default: ${DEFAULT-VALUE}).")
-    Path projectDir;
-
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = "site-out", description = "The output folder (default: ${DEFAULT-VALUE}).")
-    Path outDir;
+    @Mixin
+    ProjectAndOutput folders;
 
     @Spec
     CommandSpec spec;
@@ -28,6 +23,6 @@ final class PublishCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         return new SiteBuilder(spec.commandLine().getOut(), spec.commandLine().getErr())
-                .build(projectDir, outDir, true).code;
+                .build(folders.projectDir, folders.outDir, true).code;
     }
 }

@@ -28,7 +28,7 @@ final class AuthalicProjection implements EqualAreaProjection {
     private final double sinAzimuth;
     private final double cosAzimuth;
     private final AuthalicFrame frame;
-    private volatile String wkt2;
+    private final LazyWkt wkt2 = new LazyWkt(() -> CrsDescription.wkt2(this));
 
     private AuthalicProjection(ProjectionFamily family, EllipsoidAxes ellipsoid, List<ProjectionParameter> parameters,
                                AuthalicLatitude authalic, SphereRotation rotation, SphereKernel kernel, double azimuthDeg) {
@@ -141,15 +141,9 @@ final class AuthalicProjection implements EqualAreaProjection {
         return frame;
     }
 
-    /** Built on first use (it needs Apache SIS's WKT formatter), then kept; the text never changes. */
     @Override
     public String wkt2() {
-        String text = wkt2;
-        if (text == null) {
-            text = CrsDescription.wkt2(this);
-            wkt2 = text;
-        }
-        return text;
+        return wkt2.text();
     }
 
     @Override

@@ -44,7 +44,7 @@ final class SisProjection implements EqualAreaProjection {
     private final double domainD;
     private final double domainRadiusM;
     private volatile MathTransform inverse;
-    private volatile String wkt2;
+    private final LazyWkt wkt2 = new LazyWkt(() -> CrsDescription.wkt2(this));
 
     private SisProjection(ProjectionFamily family, EllipsoidAxes ellipsoid, List<ProjectionParameter> parameters,
                           AuthalicFrame frame, double domainD, double domainRadiusM) {
@@ -236,15 +236,9 @@ final class SisProjection implements EqualAreaProjection {
         return frame;
     }
 
-    /** Built on first use, then kept; the text never changes. */
     @Override
     public String wkt2() {
-        String text = wkt2;
-        if (text == null) {
-            text = CrsDescription.wkt2(this);
-            wkt2 = text;
-        }
-        return text;
+        return wkt2.text();
     }
 
     /** The EPSG method name SIS knows the family by. */
