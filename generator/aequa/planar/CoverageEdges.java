@@ -5,7 +5,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.CoordinateSequence;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.LinearRing;
 import org.locationtech.jts.geom.Polygon;
@@ -73,9 +73,9 @@ final class CoverageEdges {
         int n = ring.getNumPoints() - 1;
         int[] ids = new int[n];
         int count = 0;
+        CoordinateSequence sequence = ring.getCoordinateSequence();
         for (int i = 0; i < n; i++) {
-            Coordinate c = ring.getCoordinateN(i);
-            int id = vertices.idOf(c.x, c.y);
+            int id = vertices.idOf(sequence.getX(i), sequence.getY(i));
             if (count == 0 || ids[count - 1] != id) {
                 ids[count++] = id;
             }
@@ -157,9 +157,11 @@ final class CoverageEdges {
     private int edgeRef(int[] path, Map<Long, Integer> edgeByKey) {
         int last = path.length - 1;
         boolean forward = path[0] < path[last] || (path[0] == path[last] && path[1] <= path[last - 1]);
-        long key = forward
+        // (start << 32 | next) times an odd constant: a bijection that spreads Long.hashCode, which would
+        // otherwise collide for every start ^ next alike
+        long key = (forward
                 ? ((long) path[0] << 32) | path[1]
-                : ((long) path[last] << 32) | path[last - 1];
+                : ((long) path[last] << 32) | path[last - 1]) * 0x9E3779B97F4A7C15L;
         Integer edge = edgeByKey.get(key);
         if (edge == null) {
             edge = edges.size();

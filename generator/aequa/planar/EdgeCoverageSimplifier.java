@@ -84,15 +84,12 @@ final class EdgeCoverageSimplifier {
         PriorityQueue<double[]> queue = new PriorityQueue<>((p, q) -> p[0] != q[0]
                 ? Double.compare(p[0], q[0]) : Double.compare(p[1], q[1]));
         for (int i = 1; i < n - 1; i++) {
-            queue.add(new double[] {triangleArea(edge, previous[i], i, next[i]), i, 0});
+            offer(queue, edge, previous[i], i, next[i], 0);
         }
         int live = n;
         while (!queue.isEmpty() && live > minimumVertices) {
             double[] entry = queue.poll();
             int i = (int) entry[1];
-            if (entry[0] > areaToleranceM2) {
-                break;
-            }
             if (entry[2] != version[i]) {
                 continue;
             }
@@ -115,8 +112,7 @@ final class EdgeCoverageSimplifier {
             for (int neighbour : new int[] {a, b}) {
                 if (neighbour > 0 && neighbour < n - 1) {
                     version[neighbour]++;
-                    queue.add(new double[] {triangleArea(edge, previous[neighbour], neighbour, next[neighbour]),
-                        neighbour, version[neighbour]});
+                    offer(queue, edge, previous[neighbour], neighbour, next[neighbour], version[neighbour]);
                 }
             }
         }
@@ -126,6 +122,14 @@ final class EdgeCoverageSimplifier {
             kept[count++] = edge[i];
         }
         return kept;
+    }
+
+    /** Queues vertex {@code v} as (area, index, version) only if its triangle is within the tolerance. */
+    private void offer(PriorityQueue<double[]> queue, int[] edge, int a, int v, int b, int version) {
+        double areaM2 = triangleArea(edge, a, v, b);
+        if (areaM2 <= areaToleranceM2) {
+            queue.add(new double[] {areaM2, v, version});
+        }
     }
 
     private double triangleArea(int[] edge, int a, int v, int b) {
