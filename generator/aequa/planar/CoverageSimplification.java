@@ -3,14 +3,13 @@ package aequa.planar;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.locationtech.jts.coverage.CoverageSimplifier;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.Polygon;
 import org.locationtech.jts.index.strtree.STRtree;
 
 /**
- * Simplifies a map's projected regions together, as one coverage, with JTS CoverageSimplifier (a
- * topology-preserving Visvalingam-Whyatt variant): each border shared by two regions is simplified once
+ * Simplifies a map's projected regions together, as one coverage, with {@link EdgeCoverageSimplifier}
+ * (Visvalingam-Whyatt on each border with guards that keep the coverage valid): each border shared by two regions is simplified once
  * and used by both, so no gaps or slivers appear between neighbours; node vertices never move. The input
  * must be vertex-exact along shared borders, which the readers, the lon/lat densifier and the projector
  * preserve.
@@ -75,7 +74,7 @@ public final class CoverageSimplification {
      */
     public static Result simplify(List<String> keys, List<Geometry> planarM, double toleranceM, double islandM2) {
         Geometry[] simplified = toleranceM > 0
-                ? CoverageSimplifier.simplify(planarM.toArray(new Geometry[0]), toleranceM)
+                ? EdgeCoverageSimplifier.simplify(planarM.toArray(new Geometry[0]), toleranceM)
                 : planarM.toArray(new Geometry[0]);
         List<DroppedPart> dropped = new ArrayList<>();
         if (islandM2 > 0) {
