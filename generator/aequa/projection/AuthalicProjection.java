@@ -1,6 +1,5 @@
 package aequa.projection;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
@@ -16,32 +15,25 @@ import java.util.Map;
  *
  * <p>Numeric contract as in {@link EqualAreaProjection}: |lat| > 90 or NaN gives NaN. Immutable.
  */
-final class AuthalicProjection implements EqualAreaProjection {
+final class AuthalicProjection extends FixedProjection {
 
-    private final ProjectionFamily family;
-    private final EllipsoidAxes ellipsoid;
-    private final List<ProjectionParameter> parameters;
     private final AuthalicLatitude authalic;
     private final SphereRotation rotation;
     private final SphereKernel kernel;
     private final double radiusM;
     private final double sinAzimuth;
     private final double cosAzimuth;
-    private final AuthalicFrame frame;
     private final LazyWkt wkt2 = new LazyWkt(() -> CrsDescription.wkt2(this));
 
     private AuthalicProjection(ProjectionFamily family, EllipsoidAxes ellipsoid, List<ProjectionParameter> parameters,
                                AuthalicLatitude authalic, SphereRotation rotation, SphereKernel kernel, double azimuthDeg) {
-        this.family = family;
-        this.ellipsoid = ellipsoid;
-        this.parameters = List.copyOf(parameters);
+        super(family, ellipsoid, parameters, new AuthalicFrame(authalic, rotation, -90.0, true));
         this.authalic = authalic;
         this.rotation = rotation;
         this.kernel = kernel;
         this.radiusM = authalic.radiusM();
         this.sinAzimuth = Math.sin(Math.toRadians(azimuthDeg));
         this.cosAzimuth = Math.cos(Math.toRadians(azimuthDeg));
-        this.frame = new AuthalicFrame(authalic, rotation, -90.0, true);
     }
 
     /**
@@ -55,10 +47,7 @@ final class AuthalicProjection implements EqualAreaProjection {
      */
     static AuthalicProjection create(ProjectionFamily family, EllipsoidAxes ellipsoid, Map<String, Double> values) {
         AuthalicLatitude authalic = new AuthalicLatitude(ellipsoid);
-        List<ProjectionParameter> parameters = new ArrayList<>();
-        for (ParameterDefinition d : FamilyDefinitions.of(family)) {
-            parameters.add(d.withValue(values.get(d.key())));
-        }
+        List<ProjectionParameter> parameters = FamilyDefinitions.values(family, values);   // centre-lon first
         double centreLon = values.get(FamilyDefinitions.CENTRE_LON);
         switch (family) {
             case EQUAL_EARTH:
@@ -78,20 +67,6 @@ final class AuthalicProjection implements EqualAreaProjection {
             default:
                 throw new IllegalArgumentException(family + " is not computed on the authalic sphere");
         }
-    }
-
-    @Override
-    public ProjectionFamily family() {
-        return family;
-    }
-
-    @Override
-    public List<ProjectionParameter> parameters() {
-        return parameters;
-    }
-
-    EllipsoidAxes ellipsoid() {
-        return ellipsoid;
     }
 
     @Override
@@ -137,17 +112,7 @@ final class AuthalicProjection implements EqualAreaProjection {
     }
 
     @Override
-    public AspectFrame frame() {
-        return frame;
-    }
-
-    @Override
     public String wkt2() {
         return wkt2.text();
-    }
-
-    @Override
-    public String toString() {
-        return family.configName() + parameters;
     }
 }

@@ -1,5 +1,6 @@
 package aequa.projection;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
@@ -68,5 +69,14 @@ final class FamilyDefinitions {
             }
         }
         return null;
+    }
+
+    /** The family's parameters with the given values (degrees, by key), in caption order; every key must be present. */
+    static List<ProjectionParameter> values(ProjectionFamily family, Map<String, Double> valuesByKey) {
+        List<ProjectionParameter> parameters = new ArrayList<>();
+        for (ParameterDefinition d : of(family)) {
+            parameters.add(d.withValue(valuesByKey.get(d.key())));
+        }
+        return parameters;
     }
 }

@@ -1,6 +1,5 @@
 package aequa.projection;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
@@ -22,7 +21,7 @@ import org.opengis.util.FactoryException;
  * <p>This wrapper adds only what SIS leaves to the caller: latitudes beyond +-90 (which SIS accepts
  * silently) and, for the azimuthal family, points outside the domain cap come out as NaN. Immutable.
  */
-final class SisProjection implements EqualAreaProjection {
+final class SisProjection extends FixedProjection {
 
     static {
         SisLogging.silence();
@@ -35,10 +34,6 @@ final class SisProjection implements EqualAreaProjection {
      */
     static final double MIN_AZIMUTHAL_FRAME_LAT_DEG = -45.0;
 
-    private final ProjectionFamily family;
-    private final EllipsoidAxes ellipsoid;
-    private final List<ProjectionParameter> parameters;
-    private final AuthalicFrame frame;
     private final MathTransform forward;
     private final double centralLonDeg;
     private final double domainD;
@@ -48,10 +43,7 @@ final class SisProjection implements EqualAreaProjection {
 
     private SisProjection(ProjectionFamily family, EllipsoidAxes ellipsoid, List<ProjectionParameter> parameters,
                           AuthalicFrame frame, double domainD, double domainRadiusM) {
-        this.family = family;
-        this.ellipsoid = ellipsoid;
-        this.parameters = List.copyOf(parameters);
-        this.frame = frame;
+        super(family, ellipsoid, parameters, frame);
         this.centralLonDeg = parameters.get(0).value();
         this.domainD = domainD;
         this.domainRadiusM = domainRadiusM;
@@ -67,10 +59,7 @@ final class SisProjection implements EqualAreaProjection {
      * values of {@link FamilyDefinitions#of}, in degrees, by key; every key must be present.
      */
     static SisProjection create(ProjectionFamily family, EllipsoidAxes ellipsoid, Map<String, Double> values) {
-        List<ProjectionParameter> parameters = new ArrayList<>();   // centre-lon first in every SIS family
-        for (ParameterDefinition d : FamilyDefinitions.of(family)) {
-            parameters.add(d.withValue(values.get(d.key())));
-        }
+        List<ProjectionParameter> parameters = FamilyDefinitions.values(family, values);   // centre-lon first
         AuthalicLatitude authalic = new AuthalicLatitude(ellipsoid);
         double lon0 = values.get(FamilyDefinitions.CENTRE_LON);
         if (family != ProjectionFamily.LAMBERT_AZIMUTHAL) {
@@ -93,20 +82,6 @@ final class SisProjection implements EqualAreaProjection {
         double maxDistanceRad = Math.toRadians(90.0 - MIN_AZIMUTHAL_FRAME_LAT_DEG);
         double radiusM = 2.0 * authalic.radiusM() * Math.sin(maxDistanceRad / 2.0);
         return new SisProjection(family, ellipsoid, parameters, frame, d, radiusM);
-    }
-
-    @Override
-    public ProjectionFamily family() {
-        return family;
-    }
-
-    @Override
-    public List<ProjectionParameter> parameters() {
-        return parameters;
-    }
-
-    EllipsoidAxes ellipsoid() {
-        return ellipsoid;
     }
 
     /** The SIS transform itself, (lon, lat) degrees to metres, for benchmarks and tests. */
@@ -232,11 +207,6 @@ final class SisProjection implements EqualAreaProjection {
     }
 
     @Override
-    public AspectFrame frame() {
-        return frame;
-    }
-
-    @Override
     public String wkt2() {
         return wkt2.text();
     }
@@ -255,11 +225,6 @@ final class SisProjection implements EqualAreaProjection {
         }
     }
 
-    @Override
-    public String toString() {
-        return family.configName() + parameters;
-    }
-
     private MathTransform inverseTransform() {
         MathTransform t = inverse;
         if (t == null) {
@@ -274,11 +239,11 @@ final class SisProjection implements EqualAreaProjection {
     }
 
     private MathTransform buildTransform() throws FactoryException {
-        var builder = DefaultMathTransformFactory.provider().builder(epsgMethodName(family));
+        var builder = DefaultMathTransformFactory.provider().builder(epsgMethodName(family()));
         ParameterValueGroup values = builder.parameters();
-        values.parameter("semi_major").setValue(ellipsoid.semiMajorM());
-        values.parameter("semi_minor").setValue(ellipsoid.semiMinorM());
-        for (ProjectionParameter p : parameters) {
+        values.parameter("semi_major").setValue(ellipsoid().semiMajorM());
+        values.parameter("semi_minor").setValue(ellipsoid().semiMinorM());
+        for (ProjectionParameter p : parameters()) {
             values.parameter(p.name()).setValue(p.value());
         }
         return builder.create();
