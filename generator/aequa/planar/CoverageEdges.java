@@ -1,9 +1,8 @@
 package aequa.planar;
 
 import java.util.ArrayList;
-import java.util.HashMap;
+import java.util.Arrays;
 import java.util.List;
-import java.util.Map;
 
 import org.locationtech.jts.geom.CoordinateSequence;
 import org.locationtech.jts.geom.Geometry;
@@ -31,10 +30,17 @@ final class CoverageEdges {
     final List<List<List<int[]>>> ringsByGeometry = new ArrayList<>();
     /** Edge vertex numbers in canonical direction (first and last are nodes; equal for a loop). */
     final List<int[]> edges = new ArrayList<>();
-    final VertexTable vertices = new VertexTable();
+    /** The distinct vertices, numbered cell by cell; the simplifier marks the ones it removes. */
+    final VertexGrid vertices;
     final boolean[] isNode;
 
     CoverageEdges(Geometry[] coverage) {
+        int points = 0;
+        for (Geometry geometry : coverage) {
+            points += geometry.getNumPoints();
+        }
+        // in a coverage most vertices lie on a border shared by two polygons
+        VertexTable table = new VertexTable(points / 2 + points / 64);
         List<int[]> rings = new ArrayList<>();
         for (Geometry geometry : coverage) {
             for (int p = 0; p < geometry.getNumGeometries(); p++) {
@@ -42,14 +48,16 @@ final class CoverageEdges {
                 if (polygon.isEmpty()) {
                     continue;
                 }
-                rings.add(number(polygon.getExteriorRing()));
+                rings.add(number(polygon.getExteriorRing(), table));
                 for (int h = 0; h < polygon.getNumInteriorRing(); h++) {
-                    rings.add(number(polygon.getInteriorRingN(h)));
+                    rings.add(number(polygon.getInteriorRingN(h), table));
                 }
             }
         }
+        vertices = new VertexGrid(table, rings);
         isNode = findNodes(rings, vertices.size());
-        Map<Long, Integer> edgeByKey = new HashMap<>();
+        // about three borders per ring in a tiling (Euler: a planar map of F faces has about 3F edges)
+        LongIntTable edgeByKey = new LongIntTable(3 * rings.size());
         int ringIndex = 0;
         for (Geometry geometry : coverage) {
             List<List<int[]>> polygons = new ArrayList<>();
@@ -69,13 +77,13 @@ final class CoverageEdges {
     }
 
     /** The ring's distinct vertex numbers in order, without the closing repeat or consecutive duplicates. */
-    private int[] number(LinearRing ring) {
+    private static int[] number(LinearRing ring, VertexTable table) {
         int n = ring.getNumPoints() - 1;
         int[] ids = new int[n];
         int count = 0;
         CoordinateSequence sequence = ring.getCoordinateSequence();
         for (int i = 0; i < n; i++) {
-            int id = vertices.idOf(sequence.getX(i), sequence.getY(i));
+            int id = table.idOf(sequence.getX(i), sequence.getY(i));
             if (count == 0 || ids[count - 1] != id) {
                 ids[count++] = id;
             }
@@ -83,20 +91,20 @@ final class CoverageEdges {
         while (count > 1 && ids[count - 1] == ids[0]) {
             count--;
         }
-        return java.util.Arrays.copyOf(ids, count);
+        return Arrays.copyOf(ids, count);
     }
 
     private static boolean[] findNodes(List<int[]> rings, int vertexCount) {
         int[] first = new int[vertexCount];
         int[] second = new int[vertexCount];
-        java.util.Arrays.fill(first, -1);
-        java.util.Arrays.fill(second, -1);
+        Arrays.fill(first, -1);
+        Arrays.fill(second, -1);
         boolean[] node = new boolean[vertexCount];
         for (int[] ring : rings) {
             int n = ring.length;
             for (int i = 0; i < n; i++) {
                 int v = ring[i];
-                for (int neighbour : new int[] {ring[(i + n - 1) % n], ring[(i + 1) % n]}) {
+                for (int neighbour : new int[] {ring[i == 0 ? n - 1 : i - 1], ring[i == n - 1 ? 0 : i + 1]}) {
                     if (neighbour == first[v] || neighbour == second[v]) {
                         continue;
                     }
@@ -131,51 +139,56 @@ final class CoverageEdges {
      * The ring as edge refs: {@code e + 1} when the ring runs along edge {@code e} in its canonical
      * direction, {@code -(e + 1)} when it runs backwards.
      */
-    private int[] splitIntoEdges(int[] ring, Map<Long, Integer> edgeByKey) {
+    private int[] splitIntoEdges(int[] ring, LongIntTable edgeByKey) {
         int n = ring.length;
         int start = 0;
         while (!isNode[ring[start]]) {
             start++;
         }
-        List<Integer> refs = new ArrayList<>();
-        int i = 0;
-        while (i < n) {
-            int length = 1;
-            while (!isNode[ring[(start + i + length) % n]]) {
-                length++;
+        // the ring rotated to start (and end) at a node, so every edge is a run of consecutive entries
+        int[] rotated = new int[n + 1];
+        System.arraycopy(ring, start, rotated, 0, n - start);
+        System.arraycopy(ring, 0, rotated, n - start, start + 1);
+        int[] refs = new int[8];
+        int count = 0;
+        for (int first = 0; first < n; ) {
+            int last = first + 1;
+            while (!isNode[rotated[last]]) {
+                last++;
             }
-            int[] path = new int[length + 1];
-            for (int k = 0; k <= length; k++) {
-                path[k] = ring[(start + i + k) % n];
+            if (count == refs.length) {
+                refs = Arrays.copyOf(refs, 2 * count);
             }
-            refs.add(edgeRef(path, edgeByKey));
-            i += length;
+            refs[count++] = edgeRef(rotated, first, last, edgeByKey);
+            first = last;
         }
-        return refs.stream().mapToInt(Integer::intValue).toArray();
+        return Arrays.copyOf(refs, count);
     }
 
-    private int edgeRef(int[] path, Map<Long, Integer> edgeByKey) {
-        int last = path.length - 1;
-        boolean forward = path[0] < path[last] || (path[0] == path[last] && path[1] <= path[last - 1]);
-        // (start << 32 | next) times an odd constant: a bijection that spreads Long.hashCode, which would
-        // otherwise collide for every start ^ next alike
-        long key = (forward
-                ? ((long) path[0] << 32) | path[1]
-                : ((long) path[last] << 32) | path[last - 1]) * 0x9E3779B97F4A7C15L;
-        Integer edge = edgeByKey.get(key);
-        if (edge == null) {
+    /** The ref of the edge that runs along {@code ring[first..last]}; the edge is added when new. */
+    private int edgeRef(int[] ring, int first, int last, LongIntTable edgeByKey) {
+        int start = ring[first];
+        int end = ring[last];
+        boolean forward = start < end || (start == end && ring[first + 1] <= ring[last - 1]);
+        long key = forward
+                ? ((long) start << 32) | ring[first + 1]
+                : ((long) end << 32) | ring[last - 1];
+        int edge = edgeByKey.get(key);
+        if (edge < 0) {
             edge = edges.size();
-            edges.add(forward ? path : reversed(path));
+            int[] path = Arrays.copyOfRange(ring, first, last + 1);
+            edges.add(forward ? path : reverseInPlace(path));
             edgeByKey.put(key, edge);
         }
         return forward ? edge + 1 : -(edge + 1);
     }
 
-    static int[] reversed(int[] path) {
-        int[] r = new int[path.length];
-        for (int k = 0; k < path.length; k++) {
-            r[k] = path[path.length - 1 - k];
+    private static int[] reverseInPlace(int[] path) {
+        for (int i = 0, j = path.length - 1; i < j; i++, j--) {
+            int swap = path[i];
+            path[i] = path[j];
+            path[j] = swap;
         }
-        return r;
+        return path;
     }
 }

@@ -1,16 +1,13 @@
 package aequa.planar;
 
 import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.List;
-import java.util.PriorityQueue;
-import java.util.Set;
 
-import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.LinearRing;
 import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.geom.impl.PackedCoordinateSequence;
 
 /**
  * Simplifies a polygon coverage edge by edge, so that every border shared by two polygons is simplified
@@ -35,14 +32,20 @@ import org.locationtech.jts.geom.Polygon;
 final class EdgeCoverageSimplifier {
 
     private final CoverageEdges structure;
-    private final VertexGrid grid;
+    private final VertexGrid vertices;
     private final double areaToleranceM2;
-    private final Set<Long> straightNodePairs = new HashSet<>();
+    /** Node pairs (see {@link #nodePair}) already joined by an edge that is a single straight segment. */
+    private final LongIntTable straightNodePairs;
+    // scratch for one edge at a time: the live neighbours of each position and the queue of removable ones
+    private int[] previous = new int[16];
+    private int[] next = new int[16];
+    private final AreaHeap queue = new AreaHeap();
 
     private EdgeCoverageSimplifier(Geometry[] coverage, double toleranceM) {
         this.structure = new CoverageEdges(coverage);
-        this.grid = new VertexGrid(structure.vertices);
+        this.vertices = structure.vertices;
         this.areaToleranceM2 = toleranceM * toleranceM;
+        this.straightNodePairs = new LongIntTable(structure.edges.size() / 8);
     }
 
     /** The coverage simplified to {@code toleranceM} metres; same length and order, same part structure. */
@@ -51,7 +54,7 @@ final class EdgeCoverageSimplifier {
         List<int[]> edges = simplifier.structure.edges;
         for (int[] edge : edges) {
             if (edge.length == 2) {
-                simplifier.straightNodePairs.add(nodePair(edge));
+                simplifier.straightNodePairs.put(nodePair(edge), 0);
             }
         }
         List<int[]> simplified = new ArrayList<>(edges.size());
@@ -74,46 +77,42 @@ final class EdgeCoverageSimplifier {
         if (n <= minimumVertices) {
             return edge;
         }
-        int[] previous = new int[n];
-        int[] next = new int[n];
-        int[] version = new int[n];
+        if (previous.length < n) {
+            previous = new int[Math.max(n, 2 * previous.length)];
+            next = new int[previous.length];
+        }
         for (int i = 0; i < n; i++) {
             previous[i] = i - 1;
             next[i] = i + 1;
         }
-        PriorityQueue<double[]> queue = new PriorityQueue<>((p, q) -> p[0] != q[0]
-                ? Double.compare(p[0], q[0]) : Double.compare(p[1], q[1]));
+        queue.reset(n);
         for (int i = 1; i < n - 1; i++) {
-            offer(queue, edge, previous[i], i, next[i], 0);
+            offer(edge, i);
         }
         int live = n;
         while (!queue.isEmpty() && live > minimumVertices) {
-            double[] entry = queue.poll();
-            int i = (int) entry[1];
-            if (entry[2] != version[i]) {
-                continue;
-            }
+            int i = queue.poll();
             int a = previous[i];
             int b = next[i];
-            if (live == 3 && !loop && !straightNodePairs.add(nodePair(edge))) {
+            boolean lastInnerVertex = live == 3 && !loop;
+            if (lastInnerVertex && straightNodePairs.containsKey(nodePair(edge))) {
                 continue;
             }
-            if (grid.anyInTriangle(edge[a], edge[i], edge[b])) {
-                if (live == 3 && !loop) {
-                    straightNodePairs.remove(nodePair(edge));
-                }
+            if (vertices.anyInTriangle(edge[a], edge[i], edge[b])) {
                 continue;
             }
-            grid.remove(edge[i]);
-            version[i] = -1;
+            if (lastInnerVertex) {
+                straightNodePairs.put(nodePair(edge), 0);
+            }
+            vertices.remove(edge[i]);
             next[a] = b;
             previous[b] = a;
             live--;
-            for (int neighbour : new int[] {a, b}) {
-                if (neighbour > 0 && neighbour < n - 1) {
-                    version[neighbour]++;
-                    offer(queue, edge, previous[neighbour], neighbour, next[neighbour], version[neighbour]);
-                }
+            if (a > 0) {
+                offer(edge, a);
+            }
+            if (b < n - 1) {
+                offer(edge, b);
             }
         }
         int[] kept = new int[live];
@@ -124,19 +123,19 @@ final class EdgeCoverageSimplifier {
         return kept;
     }
 
-    /** Queues vertex {@code v} as (area, index, version) only if its triangle is within the tolerance. */
-    private void offer(PriorityQueue<double[]> queue, int[] edge, int a, int v, int b, int version) {
-        double areaM2 = triangleArea(edge, a, v, b);
+    /** Queues (or requeues) the inner vertex at position {@code v} when its triangle is within the tolerance, else takes it out. */
+    private void offer(int[] edge, int v) {
+        int a = edge[previous[v]];
+        int b = edge[next[v]];
+        int c = edge[v];
+        double ax = vertices.x(a);
+        double ay = vertices.y(a);
+        double areaM2 = Math.abs((vertices.x(c) - ax) * (vertices.y(b) - ay) - (vertices.x(b) - ax) * (vertices.y(c) - ay)) / 2;
         if (areaM2 <= areaToleranceM2) {
-            queue.add(new double[] {areaM2, v, version});
+            queue.put(v, areaM2);
+        } else {
+            queue.remove(v);
         }
-    }
-
-    private double triangleArea(int[] edge, int a, int v, int b) {
-        VertexTable t = structure.vertices;
-        double ax = t.x(edge[a]);
-        double ay = t.y(edge[a]);
-        return Math.abs((t.x(edge[v]) - ax) * (t.y(edge[b]) - ay) - (t.x(edge[b]) - ax) * (t.y(edge[v]) - ay)) / 2;
     }
 
     private Geometry[] assemble(Geometry[] coverage, List<int[]> simplifiedEdges) {
@@ -163,16 +162,24 @@ final class EdgeCoverageSimplifier {
         return result;
     }
 
+    /** The ring's coordinates from its simplified edges, packed x, y; the first point repeated at the end. */
     private LinearRing ring(GeometryFactory factory, int[] refs, List<int[]> simplifiedEdges) {
-        List<Coordinate> coordinates = new ArrayList<>();
-        VertexTable t = structure.vertices;
+        int points = 1;
+        for (int ref : refs) {
+            points += simplifiedEdges.get(Math.abs(ref) - 1).length - 1;
+        }
+        double[] xy = new double[2 * points];
+        int count = 0;
         for (int ref : refs) {
             int[] edge = simplifiedEdges.get(Math.abs(ref) - 1);
-            int[] path = ref > 0 ? edge : CoverageEdges.reversed(edge);
-            for (int k = coordinates.isEmpty() ? 0 : 1; k < path.length; k++) {
-                coordinates.add(new Coordinate(t.x(path[k]), t.y(path[k])));
+            int last = edge.length - 1;
+            for (int k = count == 0 ? 0 : 1; k <= last; k++) {
+                int vertex = ref > 0 ? edge[k] : edge[last - k];
+                xy[2 * count] = vertices.x(vertex);
+                xy[2 * count + 1] = vertices.y(vertex);
+                count++;
             }
         }
-        return factory.createLinearRing(coordinates.toArray(new Coordinate[0]));
+        return factory.createLinearRing(new PackedCoordinateSequence.Double(xy, 2, 0));
     }
 }

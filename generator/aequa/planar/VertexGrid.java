@@ -1,33 +1,42 @@
 package aequa.planar;
 
+import java.util.Arrays;
+import java.util.List;
+
 /**
- * A fixed uniform grid over the live vertices of a {@link VertexTable}, about one vertex per cell, answering
- * "does any other live vertex lie inside or on this triangle?". Vertices can be removed, not added.
+ * The distinct vertices of a coverage on a uniform grid of about one vertex per cell, renumbered cell by
+ * cell: the vertices of a cell have consecutive numbers and their coordinates lie side by side in memory,
+ * so the question the simplifier asks for every removal, "does any other live vertex lie inside or on this
+ * triangle?", is answered by sweeping a few short runs of memory. Vertices can be removed, not added.
  */
 final class VertexGrid {
 
     private final VertexTable vertices;
+    private final boolean[] removed;
     private final double minX;
     private final double minY;
     private final double cellM;
     private final int columns;
     private final int rows;
+    /** The vertices of cell c are numbers cellStart[c] .. cellStart[c + 1] - 1. */
     private final int[] cellStart;
-    private final int[] members;
-    private final boolean[] removed;
 
-    VertexGrid(VertexTable vertices) {
-        this.vertices = vertices;
-        int n = vertices.size();
+    /**
+     * Renumbers the points of {@code table} cell by cell (see {@link VertexTable#renumber}; they keep
+     * their order within a cell) and the vertex numbers in {@code rings} to match, both in place.
+     */
+    VertexGrid(VertexTable table, List<int[]> rings) {
+        this.vertices = table;
+        int n = table.size();
         double loX = Double.POSITIVE_INFINITY;
         double loY = Double.POSITIVE_INFINITY;
         double hiX = Double.NEGATIVE_INFINITY;
         double hiY = Double.NEGATIVE_INFINITY;
         for (int v = 0; v < n; v++) {
-            loX = Math.min(loX, vertices.x(v));
-            loY = Math.min(loY, vertices.y(v));
-            hiX = Math.max(hiX, vertices.x(v));
-            hiY = Math.max(hiY, vertices.y(v));
+            loX = Math.min(loX, table.x(v));
+            loY = Math.min(loY, table.y(v));
+            hiX = Math.max(hiX, table.x(v));
+            hiY = Math.max(hiY, table.y(v));
         }
         minX = n == 0 ? 0 : loX;
         minY = n == 0 ? 0 : loY;
@@ -37,20 +46,37 @@ final class VertexGrid {
         columns = side + 1;
         rows = side + 1;
         cellStart = new int[columns * rows + 1];
-        members = new int[n];
-        removed = new boolean[n];
-        int[] cellOf = new int[n];
+        int[] gridIdOf = new int[n];
         for (int v = 0; v < n; v++) {
-            cellOf[v] = cell(column(vertices.x(v)), row(vertices.y(v)));
-            cellStart[cellOf[v] + 1]++;
+            gridIdOf[v] = cell(column(table.x(v)), row(table.y(v)));
+            cellStart[gridIdOf[v] + 1]++;
         }
         for (int c = 0; c < columns * rows; c++) {
             cellStart[c + 1] += cellStart[c];
         }
-        int[] fill = cellStart.clone();
+        int[] fill = Arrays.copyOf(cellStart, cellStart.length - 1);
         for (int v = 0; v < n; v++) {
-            members[fill[cellOf[v]]++] = v;
+            gridIdOf[v] = fill[gridIdOf[v]]++;
         }
+        for (int[] ring : rings) {
+            for (int i = 0; i < ring.length; i++) {
+                ring[i] = gridIdOf[ring[i]];
+            }
+        }
+        table.renumber(gridIdOf);
+        removed = new boolean[n];
+    }
+
+    int size() {
+        return removed.length;
+    }
+
+    double x(int vertex) {
+        return vertices.x(vertex);
+    }
+
+    double y(int vertex) {
+        return vertices.y(vertex);
     }
 
     void remove(int vertex) {
@@ -59,30 +85,26 @@ final class VertexGrid {
 
     /** Whether a live vertex other than a, v, b lies inside or on the triangle (a, v, b), closed. */
     boolean anyInTriangle(int a, int v, int b) {
-        double ax = vertices.x(a);
-        double ay = vertices.y(a);
-        double vx = vertices.x(v);
-        double vy = vertices.y(v);
-        double bx = vertices.x(b);
-        double by = vertices.y(b);
+        double ax = x(a);
+        double ay = y(a);
+        double vx = x(v);
+        double vy = y(v);
+        double bx = x(b);
+        double by = y(b);
         double loX = Math.min(ax, Math.min(vx, bx));
         double hiX = Math.max(ax, Math.max(vx, bx));
         double loY = Math.min(ay, Math.min(vy, by));
         double hiY = Math.max(ay, Math.max(vy, by));
-        for (int r = row(loY); r <= row(hiY); r++) {
-            for (int c = column(loX); c <= column(hiX); c++) {
-                int cell = cell(c, r);
-                for (int k = cellStart[cell]; k < cellStart[cell + 1]; k++) {
-                    int p = members[k];
-                    if (removed[p] || p == a || p == v || p == b) {
-                        continue;
-                    }
-                    double px = vertices.x(p);
-                    double py = vertices.y(p);
-                    if (px >= loX && px <= hiX && py >= loY && py <= hiY
-                            && insideOrOn(ax, ay, vx, vy, bx, by, px, py)) {
-                        return true;
-                    }
+        int firstColumn = column(loX);
+        int lastColumn = column(hiX);
+        for (int r = row(loY), lastRow = row(hiY); r <= lastRow; r++) {
+            // the cells of one row of the box are consecutive, and so are their vertices
+            for (int p = cellStart[cell(firstColumn, r)], end = cellStart[cell(lastColumn, r) + 1]; p < end; p++) {
+                double px = vertices.x(p);
+                double py = vertices.y(p);
+                if (px >= loX && px <= hiX && py >= loY && py <= hiY && !removed[p]
+                        && p != a && p != v && p != b && insideOrOn(ax, ay, vx, vy, bx, by, px, py)) {
+                    return true;
                 }
             }
         }
