@@ -5,15 +5,16 @@ import java.util.Arrays;
 /**
  * An indexed binary min-heap of the inner vertices of one edge, keyed by triangle area: each vertex is in
  * the heap at most once and its key can be changed in place, so no stale entries pile up and nothing is
- * boxed (Sedgewick &amp; Wayne, Algorithms 4th ed., section 2.4, "index priority queue"). Equal areas are
- * ordered by vertex position, so the order of removal is deterministic. Reused edge after edge.
+ * boxed (Sedgewick &amp; Wayne, Algorithms 4th ed., section 2.4, "index priority queue"). Keys are stored
+ * beside the vertex at each heap position, so a comparison reads one place. Equal areas are ordered by
+ * vertex, so the order of removal is deterministic. Reused edge after edge.
  */
 final class AreaHeap {
 
-    private double[] areaM2 = new double[16];
-    /** heap[k]: the vertex at heap position k. */
-    private int[] heap = new int[16];
-    /** positionOf[v]: where vertex v sits in the heap, or -1. */
+    /** The vertex at heap position k, and its area. */
+    private int[] vertexAt = new int[16];
+    private double[] areaAt = new double[16];
+    /** Where vertex v sits in the heap, or -1. */
     private int[] positionOf = new int[16];
     private int size;
 
@@ -21,8 +22,8 @@ final class AreaHeap {
     void reset(int vertexCount) {
         if (positionOf.length < vertexCount) {
             int capacity = Math.max(vertexCount, 2 * positionOf.length);
-            areaM2 = new double[capacity];
-            heap = new int[capacity];
+            vertexAt = new int[capacity];
+            areaAt = new double[capacity];
             positionOf = new int[capacity];
         }
         Arrays.fill(positionOf, 0, vertexCount, -1);
@@ -36,13 +37,10 @@ final class AreaHeap {
     /** Inserts {@code vertex} with this area, or changes its area when it is already queued. */
     void put(int vertex, double area) {
         int k = positionOf[vertex];
-        areaM2[vertex] = area;
         if (k < 0) {
             k = size++;
-            heap[k] = vertex;
-            positionOf[vertex] = k;
         }
-        siftDown(siftUp(k));
+        settle(vertex, area, k);
     }
 
     /** Takes {@code vertex} out of the heap if it is queued. */
@@ -54,58 +52,51 @@ final class AreaHeap {
         positionOf[vertex] = -1;
         size--;
         if (k < size) {
-            heap[k] = heap[size];
-            positionOf[heap[k]] = k;
-            siftDown(siftUp(k));
+            settle(vertexAt[size], areaAt[size], k);
         }
     }
 
     /** Removes and returns the vertex of smallest area (ties: smallest vertex). */
     int poll() {
-        int top = heap[0];
+        int top = vertexAt[0];
         remove(top);
         return top;
     }
 
-    private int siftUp(int k) {
-        int vertex = heap[k];
+    /** Puts (vertex, area) into the hole at position k, moving it up or down to where it belongs. */
+    private void settle(int vertex, double area, int k) {
         while (k > 0) {
             int parent = (k - 1) >>> 1;
-            if (!less(vertex, heap[parent])) {
+            if (!less(area, vertex, areaAt[parent], vertexAt[parent])) {
                 break;
             }
-            place(heap[parent], k);
+            place(vertexAt[parent], areaAt[parent], k);
             k = parent;
         }
-        place(vertex, k);
-        return k;
-    }
-
-    private void siftDown(int k) {
-        int vertex = heap[k];
         while (true) {
             int child = 2 * k + 1;
             if (child >= size) {
                 break;
             }
-            if (child + 1 < size && less(heap[child + 1], heap[child])) {
+            if (child + 1 < size && less(areaAt[child + 1], vertexAt[child + 1], areaAt[child], vertexAt[child])) {
                 child++;
             }
-            if (!less(heap[child], vertex)) {
+            if (!less(areaAt[child], vertexAt[child], area, vertex)) {
                 break;
             }
-            place(heap[child], k);
+            place(vertexAt[child], areaAt[child], k);
             k = child;
         }
-        place(vertex, k);
+        place(vertex, area, k);
     }
 
-    private void place(int vertex, int k) {
-        heap[k] = vertex;
+    private void place(int vertex, double area, int k) {
+        vertexAt[k] = vertex;
+        areaAt[k] = area;
         positionOf[vertex] = k;
     }
 
-    private boolean less(int v, int w) {
-        return areaM2[v] < areaM2[w] || (areaM2[v] == areaM2[w] && v < w);
+    private static boolean less(double area, int vertex, double otherArea, int otherVertex) {
+        return area < otherArea || (area == otherArea && vertex < otherVertex);
     }
 }

@@ -83,7 +83,7 @@ final class CoverageEdges {
         int count = 0;
         CoordinateSequence sequence = ring.getCoordinateSequence();
         for (int i = 0; i < n; i++) {
-            int id = table.idOf(sequence.getX(i), sequence.getY(i));
+            int id = table.idOf(sequence.getX(i), sequence.getY(i), count == 0 ? -1 : ids[count - 1]);
             if (count == 0 || ids[count - 1] != id) {
                 ids[count++] = id;
             }
@@ -91,7 +91,7 @@ final class CoverageEdges {
         while (count > 1 && ids[count - 1] == ids[0]) {
             count--;
         }
-        return Arrays.copyOf(ids, count);
+        return count == n ? ids : Arrays.copyOf(ids, count);
     }
 
     private static boolean[] findNodes(List<int[]> rings, int vertexCount) {
@@ -145,50 +145,47 @@ final class CoverageEdges {
         while (!isNode[ring[start]]) {
             start++;
         }
-        // the ring rotated to start (and end) at a node, so every edge is a run of consecutive entries
-        int[] rotated = new int[n + 1];
-        System.arraycopy(ring, start, rotated, 0, n - start);
-        System.arraycopy(ring, 0, rotated, n - start, start + 1);
         int[] refs = new int[8];
         int count = 0;
-        for (int first = 0; first < n; ) {
+        // positions are counted from the first node, modulo n
+        for (int first = start, end = start + n; first < end; ) {
             int last = first + 1;
-            while (!isNode[rotated[last]]) {
+            while (!isNode[ring[wrap(last, n)]]) {
                 last++;
             }
             if (count == refs.length) {
                 refs = Arrays.copyOf(refs, 2 * count);
             }
-            refs[count++] = edgeRef(rotated, first, last, edgeByKey);
+            refs[count++] = edgeRef(ring, first, last, edgeByKey);
             first = last;
         }
         return Arrays.copyOf(refs, count);
     }
 
-    /** The ref of the edge that runs along {@code ring[first..last]}; the edge is added when new. */
+    /** The ref of the edge that runs along ring positions {@code first..last} (modulo its length); the edge is added when new. */
     private int edgeRef(int[] ring, int first, int last, LongIntTable edgeByKey) {
-        int start = ring[first];
-        int end = ring[last];
-        boolean forward = start < end || (start == end && ring[first + 1] <= ring[last - 1]);
-        long key = forward
-                ? ((long) start << 32) | ring[first + 1]
-                : ((long) end << 32) | ring[last - 1];
+        int n = ring.length;
+        int start = ring[wrap(first, n)];
+        int end = ring[wrap(last, n)];
+        int second = ring[wrap(first + 1, n)];
+        int beforeEnd = ring[wrap(last - 1, n)];
+        boolean forward = start < end || (start == end && second <= beforeEnd);
+        long key = forward ? ((long) start << 32) | second : ((long) end << 32) | beforeEnd;
         int edge = edgeByKey.get(key);
         if (edge < 0) {
             edge = edges.size();
-            int[] path = Arrays.copyOfRange(ring, first, last + 1);
-            edges.add(forward ? path : reverseInPlace(path));
+            int[] path = new int[last - first + 1];
+            for (int k = 0; k < path.length; k++) {
+                path[forward ? k : path.length - 1 - k] = ring[wrap(first + k, n)];
+            }
+            edges.add(path);
             edgeByKey.put(key, edge);
         }
         return forward ? edge + 1 : -(edge + 1);
     }
 
-    private static int[] reverseInPlace(int[] path) {
-        for (int i = 0, j = path.length - 1; i < j; i++, j--) {
-            int swap = path[i];
-            path[i] = path[j];
-            path[j] = swap;
-        }
-        return path;
+    /** A ring position in 0 .. 2n - 1 brought into 0 .. n - 1. */
+    private static int wrap(int position, int n) {
+        return position < n ? position : position - n;
     }
 }

@@ -77,7 +77,7 @@ public final class CoverageSimplification {
                 ? EdgeCoverageSimplifier.simplify(planarM.toArray(new Geometry[0]), toleranceM)
                 : planarM.toArray(new Geometry[0]);
         List<DroppedPart> dropped = new ArrayList<>();
-        if (islandM2 > 0) {
+        if (islandM2 > 0 && anyMultiPart(simplified)) {
             STRtree index = new STRtree();
             for (int i = 0; i < simplified.length; i++) {
                 for (int p = 0; p < simplified[i].getNumGeometries(); p++) {
@@ -91,6 +91,16 @@ public final class CoverageSimplification {
             }
         }
         return new Result(List.of(simplified), dropped);
+    }
+
+    /** Only a region of several parts can lose one: with none, the part index need not be built. */
+    private static boolean anyMultiPart(Geometry[] regions) {
+        for (Geometry region : regions) {
+            if (region.getNumGeometries() > 1) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static Geometry dropIslands(String key, int region, Geometry[] all, STRtree index, double islandM2,

@@ -1,6 +1,5 @@
 package aequa.planar;
 
-import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -54,10 +53,13 @@ final class VertexGrid {
         for (int c = 0; c < columns * rows; c++) {
             cellStart[c + 1] += cellStart[c];
         }
-        int[] fill = Arrays.copyOf(cellStart, cellStart.length - 1);
+        // counting sort: each vertex takes the next number of its cell, which moves cellStart[c] on to
+        // where cell c + 1 starts; shifting the array by one then restores the starts
         for (int v = 0; v < n; v++) {
-            gridIdOf[v] = fill[gridIdOf[v]]++;
+            gridIdOf[v] = cellStart[gridIdOf[v]]++;
         }
+        System.arraycopy(cellStart, 0, cellStart, 1, cellStart.length - 1);
+        cellStart[0] = 0;
         for (int[] ring : rings) {
             for (int i = 0; i < ring.length; i++) {
                 ring[i] = gridIdOf[ring[i]];

@@ -9,12 +9,12 @@ final class DoubleList {
     private int size;
 
     DoubleList(int initialCapacity) {
-        values = new double[Math.max(4, initialCapacity)];
+        values = new double[initialCapacity];
     }
 
     void add(double value) {
         if (size == values.length) {
-            values = Arrays.copyOf(values, values.length * 2);
+            values = Arrays.copyOf(values, Math.max(8, values.length * 2));
         }
         values[size++] = value;
     }
@@ -32,7 +32,23 @@ final class DoubleList {
         return values;
     }
 
-    double[] toArray() {
-        return Arrays.copyOf(values, size);
+    void clear() {
+        size = 0;
+    }
+
+    /** A new list holding these numbers in an array of exactly {@link #size()} entries. */
+    DoubleList exactCopy() {
+        DoubleList copy = new DoubleList(0);
+        copy.values = Arrays.copyOf(values, size);
+        copy.size = size;
+        return copy;
+    }
+
+    /**
+     * The numbers in an array of exactly {@link #size()} entries: the backing array itself when it has no
+     * spare room (then the list must not be changed afterwards), else a copy.
+     */
+    double[] trimmedArray() {
+        return values.length == size ? values : Arrays.copyOf(values, size);
     }
 }

@@ -31,8 +31,12 @@ final class GeoJsonCoordinates {
     private GeoJsonCoordinates() {
     }
 
-    /** Reads the array whose START_ARRAY is the parser's current token, up to and including its END_ARRAY. */
-    static Object readArray(JsonParser parser) throws IOException, MalformedCoordinates {
+    /**
+     * Reads the array whose START_ARRAY is the parser's current token, up to and including its END_ARRAY.
+     * {@code scratch} collects one ring's numbers at a time (its contents are overwritten), so each ring
+     * costs one array of exactly its size rather than a doubling buffer's garbage.
+     */
+    static Object readArray(JsonParser parser, DoubleList scratch) throws IOException, MalformedCoordinates {
         JsonToken token = parser.nextToken();
         if (token == JsonToken.END_ARRAY) {
             return new ArrayList<>(0);
@@ -43,10 +47,11 @@ final class GeoJsonCoordinates {
         if (token != JsonToken.START_ARRAY) {
             throw new MalformedCoordinates("coordinates must be arrays of numbers, found " + describe(token), parser);
         }
-        Object first = readArray(parser);
+        Object first = readArray(parser, scratch);
         if (first instanceof double[]) {
             double[] position = (double[]) first;
-            DoubleList ring = new DoubleList(64);
+            DoubleList ring = scratch;
+            ring.clear();
             ring.add(position[0]);
             ring.add(position[1]);
             while ((token = parser.nextToken()) == JsonToken.START_ARRAY) {
@@ -64,12 +69,12 @@ final class GeoJsonCoordinates {
                 skipExtraNumbers(parser);
             }
             expectEndArray(token, parser);
-            return ring;
+            return ring.exactCopy();
         }
         List<Object> list = new ArrayList<>();
         list.add(first);
         while ((token = parser.nextToken()) == JsonToken.START_ARRAY) {
-            list.add(readArray(parser));
+            list.add(readArray(parser, scratch));
         }
         expectEndArray(token, parser);
         return list;

@@ -39,6 +39,7 @@ final class GeoJsonRegionReader {
     private final Findings findings;
     private final RingAssembler rings;
     private final List<Region> regions = new ArrayList<>();
+    private final DoubleList ringScratch = new DoubleList(256);
     private int featureCount;
 
     GeoJsonRegionReader(String file, RegionSourceSpec spec, Findings findings) {
@@ -165,7 +166,7 @@ final class GeoJsonRegionReader {
                 type = parser.getText();
             } else if ("coordinates".equals(name) && value == JsonToken.START_ARRAY) {
                 try {
-                    coordinates = GeoJsonCoordinates.readArray(parser);
+                    coordinates = GeoJsonCoordinates.readArray(parser, ringScratch);
                 } catch (GeoJsonCoordinates.MalformedCoordinates e) {
                     feature.problem("geojson-wrong-type", e.getMessage());
                     feature.unusable = true;

@@ -70,7 +70,7 @@ final class RingAssembler {
         boolean closed = n > 0 && xy.get(0) == xy.get(2 * n - 2) && xy.get(1) == xy.get(2 * n - 1);
         double[] packed;
         if (closed) {
-            packed = xy.toArray();
+            packed = xy.trimmedArray();
         } else {
             packed = new double[2 * n + 2];
             System.arraycopy(xy.raw(), 0, packed, 0, 2 * n);
