@@ -17,9 +17,10 @@ import org.locationtech.jts.geom.Polygon;
  * <p>A node is a vertex whose set of distinct neighbouring vertices is not exactly two (a junction of three
  * or more borders, or a point where a ring touches another). A ring without any node (an island, or a hole
  * filled by one other polygon) gets one forced node: its vertex with the smallest number, which is the same
- * vertex for every ring that runs along that loop. Edges are identified by their start node and the vertex
- * that follows it, read in the direction that makes (start, next) smaller; two rings sharing a border thus
- * find the same edge.
+ * vertex for every ring that runs along that loop. Each vertex that is not a node lies on exactly one edge,
+ * so a ring finds an edge that another ring has already stored through its first inner vertex (an array
+ * look-up); an edge without inner vertices, a single segment between two nodes, through its pair of nodes.
+ * An edge is stored in the direction of the first ring that runs along it.
  *
  * <p>Guarantee: the input must be vertex-exact along shared borders (a valid coverage); borders that share
  * no vertices are treated as separate edges.
@@ -33,6 +34,10 @@ final class CoverageEdges {
     /** The distinct vertices, numbered cell by cell; the simplifier marks the ones it removes. */
     final VertexGrid vertices;
     final boolean[] isNode;
+    /** For a vertex next to an end of a stored edge (not a node): that edge; else -1. */
+    private final int[] edgeOfInnerVertex;
+    /** Edges that are a single segment, by their pair of nodes (see {@link #nodePair}). */
+    private final LongIntTable straightEdgeByNodes = new LongIntTable(1024);
 
     CoverageEdges(Geometry[] coverage) {
         int points = 0;
@@ -56,8 +61,8 @@ final class CoverageEdges {
         }
         vertices = new VertexGrid(table, rings);
         isNode = findNodes(rings, vertices.size());
-        // about three borders per ring in a tiling (Euler: a planar map of F faces has about 3F edges)
-        LongIntTable edgeByKey = new LongIntTable(3 * rings.size());
+        edgeOfInnerVertex = new int[vertices.size()];
+        Arrays.fill(edgeOfInnerVertex, -1);
         int ringIndex = 0;
         for (Geometry geometry : coverage) {
             List<List<int[]>> polygons = new ArrayList<>();
@@ -68,7 +73,7 @@ final class CoverageEdges {
                 }
                 List<int[]> polygonRings = new ArrayList<>();
                 for (int r = 0; r <= polygon.getNumInteriorRing(); r++) {
-                    polygonRings.add(splitIntoEdges(rings.get(ringIndex++), edgeByKey));
+                    polygonRings.add(splitIntoEdges(rings.get(ringIndex++)));
                 }
                 polygons.add(polygonRings);
             }
@@ -139,7 +144,7 @@ final class CoverageEdges {
      * The ring as edge refs: {@code e + 1} when the ring runs along edge {@code e} in its canonical
      * direction, {@code -(e + 1)} when it runs backwards.
      */
-    private int[] splitIntoEdges(int[] ring, LongIntTable edgeByKey) {
+    private int[] splitIntoEdges(int[] ring) {
         int n = ring.length;
         int start = 0;
         while (!isNode[ring[start]]) {
@@ -156,32 +161,41 @@ final class CoverageEdges {
             if (count == refs.length) {
                 refs = Arrays.copyOf(refs, 2 * count);
             }
-            refs[count++] = edgeRef(ring, first, last, edgeByKey);
+            refs[count++] = edgeRef(ring, first, last);
             first = last;
         }
         return Arrays.copyOf(refs, count);
     }
 
     /** The ref of the edge that runs along ring positions {@code first..last} (modulo its length); the edge is added when new. */
-    private int edgeRef(int[] ring, int first, int last, LongIntTable edgeByKey) {
+    private int edgeRef(int[] ring, int first, int last) {
         int n = ring.length;
         int start = ring[wrap(first, n)];
-        int end = ring[wrap(last, n)];
         int second = ring[wrap(first + 1, n)];
-        int beforeEnd = ring[wrap(last - 1, n)];
-        boolean forward = start < end || (start == end && second <= beforeEnd);
-        long key = forward ? ((long) start << 32) | second : ((long) end << 32) | beforeEnd;
-        int edge = edgeByKey.get(key);
-        if (edge < 0) {
-            edge = edges.size();
-            int[] path = new int[last - first + 1];
-            for (int k = 0; k < path.length; k++) {
-                path[forward ? k : path.length - 1 - k] = ring[wrap(first + k, n)];
-            }
-            edges.add(path);
-            edgeByKey.put(key, edge);
+        boolean straight = last == first + 1;
+        int edge = straight ? straightEdgeByNodes.get(nodePair(start, second)) : edgeOfInnerVertex[second];
+        if (edge >= 0) {
+            int[] path = edges.get(edge);
+            return path[0] == start && path[1] == second ? edge + 1 : -(edge + 1);
         }
-        return forward ? edge + 1 : -(edge + 1);
+        edge = edges.size();
+        int[] path = new int[last - first + 1];
+        for (int k = 0; k < path.length; k++) {
+            path[k] = ring[wrap(first + k, n)];
+        }
+        edges.add(path);
+        if (straight) {
+            straightEdgeByNodes.put(nodePair(start, second), edge);
+        } else {
+            edgeOfInnerVertex[path[1]] = edge;
+            edgeOfInnerVertex[path[path.length - 2]] = edge;
+        }
+        return edge + 1;
+    }
+
+    /** Two node numbers as one key, the same whichever comes first. */
+    static long nodePair(int a, int b) {
+        return ((long) Math.min(a, b) << 32) | Math.max(a, b);
     }
 
     /** A ring position in 0 .. 2n - 1 brought into 0 .. n - 1. */

@@ -65,9 +65,7 @@ final class EdgeCoverageSimplifier {
     }
 
     private static long nodePair(int[] edge) {
-        int a = Math.min(edge[0], edge[edge.length - 1]);
-        int b = Math.max(edge[0], edge[edge.length - 1]);
-        return ((long) a << 32) | b;
+        return CoverageEdges.nodePair(edge[0], edge[edge.length - 1]);
     }
 
     private int[] simplifyEdge(int[] edge) {

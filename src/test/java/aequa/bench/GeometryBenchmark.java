@@ -51,7 +51,7 @@ import aequa.projection.Projections;
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SingleShotTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
-@Fork(value = 1, jvmArgsAppend = {"-Xmx4g"})
+@Fork(value = 1, jvmArgsAppend = {"-Xmx4g", "-XX:+UseParallelGC"}) // the collector the ./aequa launcher asks for
 @Warmup(iterations = 2)
 @Measurement(iterations = 5)
 public class GeometryBenchmark {
