@@ -109,18 +109,8 @@ final class CoverageEdges {
             int n = ring.length;
             for (int i = 0; i < n; i++) {
                 int v = ring[i];
-                for (int neighbour : new int[] {ring[i == 0 ? n - 1 : i - 1], ring[i == n - 1 ? 0 : i + 1]}) {
-                    if (neighbour == first[v] || neighbour == second[v]) {
-                        continue;
-                    }
-                    if (first[v] < 0) {
-                        first[v] = neighbour;
-                    } else if (second[v] < 0) {
-                        second[v] = neighbour;
-                    } else {
-                        node[v] = true;
-                    }
-                }
+                addNeighbour(v, ring[i == 0 ? n - 1 : i - 1], first, second, node);
+                addNeighbour(v, ring[i == n - 1 ? 0 : i + 1], first, second, node);
             }
         }
         for (int v = 0; v < vertexCount; v++) {
@@ -138,6 +128,20 @@ final class CoverageEdges {
             }
         }
         return node;
+    }
+
+    /** Records that {@code neighbour} is next to {@code v}; a third distinct neighbour makes v a node. */
+    private static void addNeighbour(int v, int neighbour, int[] first, int[] second, boolean[] node) {
+        if (neighbour == first[v] || neighbour == second[v]) {
+            return;
+        }
+        if (first[v] < 0) {
+            first[v] = neighbour;
+        } else if (second[v] < 0) {
+            second[v] = neighbour;
+        } else {
+            node[v] = true;
+        }
     }
 
     /**

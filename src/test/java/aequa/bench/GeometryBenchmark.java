@@ -53,7 +53,7 @@ import aequa.projection.Projections;
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Fork(value = 1, jvmArgsAppend = {"-Xmx4g", "-XX:+UseParallelGC"}) // the collector the ./aequa launcher asks for
 @Warmup(iterations = 2)
-@Measurement(iterations = 5)
+@Measurement(iterations = 9)
 public class GeometryBenchmark {
 
     /** Map width the tolerance and densification are chosen for, pixels. */
