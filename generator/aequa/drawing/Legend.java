@@ -102,7 +102,12 @@ final class Legend {
 
     private String heading() {
         String unit = model.spec().unit().isBlank() ? "Value" : model.spec().unit();
-        return symbols == null && !unclassed() && !histogram ? unit + " (regions)" : unit;
+        if (symbols != null || unclassed() || histogram) {
+            return unit;
+        }
+        // small multiples share one legend: say that its counts are of all panels together
+        int periods = model.periods().size();
+        return periods > 1 ? unit + " (regions, all " + periods + " periods)" : unit + " (regions)";
     }
 
     double height(double widthU) {

@@ -46,6 +46,8 @@ class LegendAndScaleTest {
         assertNotNull(svg.byId("legend"));
         int sum = multiples.classification().counts().stream().mapToInt(Integer::intValue).sum();
         assertEquals(3 * (multiples.regions().size() - 3), sum, "fixture sanity: pooled counts over three periods");
+        assertTrue(svg.byId("legend").getTextContent().contains("(regions, all 3 periods)"),
+                "the shared legend says its counts pool the panels");
     }
 
     /**
