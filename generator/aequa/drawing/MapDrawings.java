@@ -13,6 +13,7 @@ import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
 
 import org.jfree.pdf.PDFDocument;
+import org.jfree.pdf.PDFHints;
 import org.jfree.pdf.Page;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.SVGUnits;
@@ -127,9 +128,11 @@ public final class MapDrawings {
     }
 
     /**
-     * A one-page PDF of the print layout (JFreePDF). Text is set in the PDF standard Helvetica, which
-     * JFreePDF maps Java's SansSerif to; it covers Latin text (JFreePDF writes MacRoman-encoded Type 1 text,
-     * so characters outside that set do not survive; use the print SVG for other scripts).
+     * A one-page PDF of the print layout (JFreePDF). Text is drawn as outlines of the font it was measured
+     * with (JFreePDF's vector string mode): every script that font covers survives, and the text sits
+     * exactly where the layout put it. JFreePDF's other mode sets live text in the standard Helvetica with
+     * MacRoman encoding, which loses other scripts and has other widths. Text converted to outlines is
+     * common practice in prepress; the print SVG keeps live, editable text.
      */
     public static DrawnMap pdf(MapModel model, Theme theme, PrintSize size, DrawOptions options) {
         Medium medium = Medium.PRINT;
@@ -141,6 +144,7 @@ public final class MapDrawings {
         document.setTitle(model.spec().title());
         Page page = document.createPage(new java.awt.geom.Rectangle2D.Double(0, 0, size.widthMm() * ptPerMm, layout.heightU() * ptPerMm));
         Graphics2D g = page.getGraphics2D();
+        g.setRenderingHint(PDFHints.KEY_DRAW_STRING_TYPE, PDFHints.VALUE_DRAW_STRING_TYPE_VECTOR);
         g.scale(ptPerMm, ptPerMm);
         Canvas canvas = new Canvas(g, type);
         painter.paint(canvas, layout, medium.coordinates(), false);

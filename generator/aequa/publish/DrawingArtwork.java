@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import aequa.atlas.MapModel;
+import aequa.drawing.DrawOptions;
 import aequa.drawing.DrawnMap;
 import aequa.drawing.MapDrawings;
 import aequa.drawing.PrintPreflight;
@@ -48,6 +49,11 @@ public final class DrawingArtwork implements MapArtwork {
         DrawnMap drawn = MapDrawings.printSvg(map, printTheme, printSize);
         preflight.addAll(PrintPreflight.check(map, printTheme, drawn, "maps/" + map.id() + "/" + map.id() + ".svg"));
         return drawn.bytes();
+    }
+
+    @Override
+    public byte[] pdf(MapModel map) {
+        return MapDrawings.pdf(map, printTheme, printSize, DrawOptions.print()).bytes();
     }
 
     @Override

@@ -21,6 +21,9 @@ public interface MapArtwork {
     /** The print-ready SVG file, offered as a download. */
     byte[] printSvg(MapModel map);
 
+    /** The same print layout as a one-page PDF, offered as a download. */
+    byte[] pdf(MapModel map);
+
     /**
      * A PNG of the map laid out {@code widthPx} pixels wide and rendered at {@code scale} times that many
      * pixels (1 for the download and the index thumbnail, 2 for high-density screens and social previews).

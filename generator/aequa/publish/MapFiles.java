@@ -6,18 +6,18 @@ import java.util.List;
  * Where one map's files go, relative to the output root ('/'-separated). All names derive from the map's
  * file-safe id ({@link SafePaths#fileSafeId}), never from raw user text.
  */
-record MapFiles(String fileId, String page, String figures, String printSvg, String webSvg, String png,
+record MapFiles(String fileId, String page, String figures, String printSvg, String pdf, String webSvg, String png,
                 String pngDouble, String csv) {
 
     static MapFiles of(String fileId) {
         String dir = "maps/" + fileId + "/";
-        return new MapFiles(fileId, dir + "index.html", dir + "figures.html", dir + fileId + ".svg",
+        return new MapFiles(fileId, dir + "index.html", dir + "figures.html", dir + fileId + ".svg", dir + fileId + ".pdf",
                 dir + fileId + "-web.svg", dir + fileId + ".png", dir + fileId + "-2x.png", dir + fileId + ".csv");
     }
 
     /** The files the drawing stage makes. */
     List<String> drawn() {
-        return List.of(webSvg, printSvg, png, pngDouble);
+        return List.of(webSvg, printSvg, pdf, png, pngDouble);
     }
 
     /** The files made from the model and templates, without drawing. */

@@ -32,6 +32,7 @@ final class MapViews {
     static MapPageView page(MapModel map, MapFiles files, String webSvg) {
         List<MapPageView.Download> downloads = List.of(
                 new MapPageView.Download("Map for print (SVG)", fileName(files.printSvg()), "image/svg+xml"),
+                new MapPageView.Download("Map for print (PDF)", fileName(files.pdf()), "application/pdf"),
                 new MapPageView.Download("Map as picture (PNG)", fileName(files.png()), "image/png"),
                 new MapPageView.Download("Map as picture, double resolution (PNG)", fileName(files.pngDouble()), "image/png"),
                 new MapPageView.Download("Figures shown (CSV)", fileName(files.csv()), "text/csv"));

@@ -144,6 +144,7 @@ final class SiteBuild {
             }
             write(files.webSvg(), utf8(webSvg), drawHash);
             write(files.printSvg(), artwork.printSvg(map), drawHash);
+            write(files.pdf(), artwork.pdf(map), drawHash);
             write(files.png(), artwork.png(map, options.pngWidthPx(), 1), drawHash);
             write(files.pngDouble(), artwork.png(map, options.pngWidthPx(), 2), drawHash);
             mapsDrawn.add(map.id());

@@ -106,7 +106,7 @@ final class SiteReport {
         map.periods().forEach(node.putArray("periods")::add);
         node.put("source", map.spec().source());
         ObjectNode links = node.putObject("files");
-        links.put("page", files.page()).put("figures", files.figures()).put("printSvg", files.printSvg())
+        links.put("page", files.page()).put("figures", files.figures()).put("printSvg", files.printSvg()).put("pdf", files.pdf())
                 .put("webSvg", files.webSvg()).put("png", files.png()).put("pngDouble", files.pngDouble()).put("csv", files.csv());
         node.set("projection", projection(map.projection(), json));
         ObjectNode audit = node.putObject("areaAudit");

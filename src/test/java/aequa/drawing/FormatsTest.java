@@ -1,5 +1,6 @@
 package aequa.drawing;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -48,7 +49,13 @@ class FormatsTest {
         double widthPt = 104 * 72 / 25.4; // 1 in = 25.4 mm = 72 pt
         assertTrue(text.contains("/MediaBox [0.0 0.0 " + (float) widthPt) || text.contains("/MediaBox [0.0 0.0 " + widthPt), text.substring(0, 600));
         assertTrue(text.contains("(D:20000101000000"), "fixed dates");
-        assertTrue(text.contains("/BaseFont /Helvetica"), "standard font");
+        // text is drawn as outlines of the font the layout measured (so any script that font covers
+        // survives): the file needs no font resource at all (ISO 32000-1, section 9.2: text-showing
+        // operators need a /Font entry in the page resources)
+        assertFalse(text.contains("/Font"), "no font resource");
+        assertFalse(text.contains("/Helvetica"), "no standard font");
+        byte[] again = MapDrawings.pdf(model, Themes.bundled("newsprint"), PrintSize.of(PrintPreset.TWO_COLUMNS), DrawOptions.print()).bytes();
+        assertArrayEquals(pdf.bytes(), again, "two renders are byte-identical");
     }
 
     @Test

@@ -151,6 +151,25 @@ class DemoPublishTest {
         }
     }
 
+    /**
+     * The print PDF has the print SVG's physical size: the SVG states its width in mm, the PDF its
+     * MediaBox in points (ISO 32000-1, section 14.11.2; 1 in = 25.4 mm = 72 pt), within 0.01 pt.
+     */
+    @Test
+    void everyMapHasAPrintPdfOfThePrintSvgsSize() throws IOException {
+        for (JsonNode map : report.path("maps")) {
+            String id = map.path("id").asText();
+            assertEquals("maps/" + id + "/" + id + ".pdf", map.path("files").path("pdf").asText(), id);
+            String pdf = new String(Files.readAllBytes(site.resolve("maps").resolve(id).resolve(id + ".pdf")), StandardCharsets.ISO_8859_1);
+            assertTrue(pdf.startsWith("%PDF-1.") && pdf.stripTrailing().endsWith("%%EOF"), id);
+            String svg = Files.readString(site.resolve("maps").resolve(id).resolve(id + ".svg"));
+            Matcher svgWidth = Pattern.compile("width=['\"]([0-9.]+)mm['\"]").matcher(svg);
+            Matcher box = Pattern.compile("/MediaBox \\[0\\.0 0\\.0 ([0-9.]+) ([0-9.]+)\\]").matcher(pdf);
+            assertTrue(svgWidth.find() && box.find(), id);
+            assertEquals(Double.parseDouble(svgWidth.group(1)) * 72 / 25.4, Double.parseDouble(box.group(1)), 0.01, id);
+        }
+    }
+
     @Test
     void marginsOfErrorTravelIntoTheTableAndTheCsv() throws IOException {
         // data-demo/figures/serrano-districts.csv gives SD-01 a change of 5.8 with a margin of 1.5

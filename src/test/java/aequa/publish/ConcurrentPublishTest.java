@@ -56,6 +56,11 @@ class ConcurrentPublishTest {
         }
 
         @Override
+        public byte[] pdf(MapModel map) {
+            return inner.pdf(map);
+        }
+
+        @Override
         public byte[] png(MapModel map, int widthPx, int scale) {
             return inner.png(map, widthPx, scale);
         }

@@ -64,6 +64,11 @@ final class FakeArtwork implements MapArtwork {
     }
 
     @Override
+    public byte[] pdf(MapModel map) {
+        return ("%PDF-1.4\n% stand-in for the print layout of " + map.id() + "\n%%EOF\n").getBytes(StandardCharsets.US_ASCII);
+    }
+
+    @Override
     public byte[] printSvg(MapModel map) {
         return ("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" + svg(map).replace("viewBox", "width=\"100mm\" height=\"70mm\" viewBox"))
                 .getBytes(StandardCharsets.UTF_8);

@@ -19,7 +19,7 @@ public final class PublishBenchmarkSupport {
         return SiteFixtures.atlas(projectDir, SiteFixtures.Texts.plain(), maps, regions);
     }
 
-    /** Fake artwork that sleeps {@value #DRAW_MILLIS} ms for each of the web SVG, print SVG and PNG. */
+    /** Fake artwork that sleeps {@value #DRAW_MILLIS} ms for each of the web SVG, print SVG, PDF and PNG. */
     public static MapArtwork artwork() {
         FakeArtwork fake = new FakeArtwork();
         return new MapArtwork() {
@@ -33,6 +33,12 @@ public final class PublishBenchmarkSupport {
             public byte[] printSvg(MapModel map) {
                 pause();
                 return fake.printSvg(map);
+            }
+
+            @Override
+            public byte[] pdf(MapModel map) {
+                pause();
+                return fake.pdf(map);
             }
 
             @Override
