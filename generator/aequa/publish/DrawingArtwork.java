@@ -25,12 +25,14 @@ public final class DrawingArtwork implements MapArtwork {
     private final PrintSize printSize;
     private final String version;
     private final List<Finding> preflight = new ArrayList<>();
+    private String fingerprint;
 
     /**
      * @param theme      the site's theme, for web maps and PNGs
      * @param printTheme the theme of the print SVGs
      * @param printSize  the physical size of the print SVGs
-     * @param version    aequa's version, part of the fingerprint so a new release redraws every map
+     * @param version    aequa's version, part of the fingerprint (with a hash of the drawing code) so a new
+     *                   release or build redraws every map
      */
     public DrawingArtwork(Theme theme, Theme printTheme, PrintSize printSize, String version) {
         this.theme = theme;
@@ -63,7 +65,11 @@ public final class DrawingArtwork implements MapArtwork {
 
     @Override
     public String fingerprint() {
-        return Sha256.of((version + "\n" + theme + "\n" + printTheme + "\n" + printSize).getBytes(StandardCharsets.UTF_8));
+        if (fingerprint == null) {
+            fingerprint = new Sha256().add(version).add(DrawingCode.fingerprint()).add(theme.toString())
+                    .add(printTheme.toString()).add(printSize.toString()).hex();
+        }
+        return fingerprint;
     }
 
     /** What the print preflight found in the drawings made so far (maps carried over are not redrawn). */
