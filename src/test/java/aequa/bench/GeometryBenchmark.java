@@ -38,10 +38,13 @@ import aequa.projection.Projections;
 /**
  * The geometry stage end to end on one core: read GeoJSON (streaming) -> densify -> project (Lambert
  * azimuthal equal-area through SIS) -> coverage simplification for a 1,000-pixel-wide map, on a synthetic
- * Voronoi coverage ({@link SyntheticCoverage}). Throughput = input vertices / time per run.
+ * Voronoi coverage ({@link SyntheticCoverage}). Throughput = input vertices / time per run. The work runs
+ * on one thread; the fork uses the launcher's collector. To hold the whole JVM, collector included, to one
+ * processor, replace the fork's options as shown in the second command.
  *
  * <pre>
  * mvn -o -q -Pbench test-compile exec:exec -Dbench="GeometryBenchmark -p cells=100000"
+ * mvn -o -q -Pbench test-compile exec:exec -Dbench="GeometryBenchmark -p cells=100000 -jvmArgsAppend '-Xmx4g -XX:+UseParallelGC -XX:ActiveProcessorCount=1'"
  * </pre>
  * Peak heap, in a fresh JVM (run {@link #main} with {@code heap CELLS}), is the sum of the heap pools' peak
  * usage over one run, reported against the GeoJSON file's size; the figure that matters is the smallest
