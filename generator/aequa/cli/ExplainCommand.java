@@ -54,7 +54,8 @@ final class ExplainCommand implements Callable<Integer> {
         RegionSourceSpec source = new RegionSourceSpec(absolute.getFileName().toString(), RegionSourceSpec.FEATURE_ID, "", layer);
         List<Region> read = RegionReaders.read(absolute.getParent(), source, SourceCrs::toLonLat, findings);
         List<Region> regions = RegionValidator.validate(read, source.file(), findings);
-        FindingsPrinter.print(findings.list(), err, false);
+        FindingsPrinter.print(findings.list(), err, false, FindingsPrinter.SHOWN_PER_KIND,
+                "; `aequa audit` of a project that reads this file lists every one");
         if (regions.isEmpty()) {
             err.println("aequa: " + file + " holds no usable regions, so there is no extent to fit a projection to.");
             return ExitCode.DATA_PROBLEMS.code;

@@ -62,7 +62,7 @@ final class SiteBuilder {
         }
         LoadOptions options = new LoadOptions(theme.colours().background(), PreviousProjections.read(outDir));
         Atlas atlas = AtlasLoader.load(project, options, findings);
-        FindingsPrinter.print(findings.list(), err, false);
+        FindingsPrinter.print(findings.list(), err, false, FindingsPrinter.SHOWN_PER_KIND, "; `aequa audit` lists every one");
         if (findings.hasErrors()) {
             err.println("aequa: nothing was published: " + FindingsPrinter.tally(findings.list())
                     + ". The site in " + outDir + " is unchanged.");
