@@ -14,9 +14,12 @@ import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
 /**
  * Hatch lines cut to a shape by geometry, not by an SVG clip path or pattern, so print files stay free of
  * clipping masks and every line is an ordinary, editable path. Lines run through the page at 45 or 135
- * degrees, anchored to the page origin, so neighbouring regions' hatching lines up.
+ * degrees or level, anchored to the page origin, so neighbouring regions' hatching lines up.
  */
 final class Hatching {
+
+    /** Which way the lines run on the page. */
+    enum Direction { RISING, FALLING, LEVEL }
 
     private static final GeometryFactory FACTORY = new GeometryFactory();
 
@@ -24,15 +27,23 @@ final class Hatching {
     }
 
     /**
-     * Lines of slope +1 (rising to the right on the page when {@code rising}) or -1, {@code spacingU} apart
+     * Lines rising to the right on the page (slope +1), falling (slope -1) or level, {@code spacingU} apart
      * measured perpendicular to the lines, intersected with {@code area} (page units). Uses OverlayNGRobust,
      * which does not fail on slightly invalid input (shared/LIBRARIES.md, section 2).
      */
-    static Geometry lines(Geometry area, double spacingU, boolean rising) {
+    static Geometry lines(Geometry area, double spacingU, Direction direction) {
         Envelope e = area.getEnvelopeInternal();
         if (e.isNull() || spacingU <= 0) {
             return FACTORY.createMultiLineString();
         }
+        if (direction == Direction.LEVEL) {
+            List<LineString> lines = new ArrayList<>();
+            for (double y = Math.floor(e.getMinY() / spacingU) * spacingU; y <= e.getMaxY(); y += spacingU) {
+                lines.add(FACTORY.createLineString(new Coordinate[]{new Coordinate(e.getMinX(), y), new Coordinate(e.getMaxX(), y)}));
+            }
+            return OverlayNGRobust.overlay(FACTORY.createMultiLineString(lines.toArray(new LineString[0])), area, OverlayNG.INTERSECTION);
+        }
+        boolean rising = direction == Direction.RISING;
         // on the page y grows downwards: a rising line has y + x constant, a falling one y - x constant
         double step = spacingU * Math.sqrt(2);
         double low = rising ? e.getMinX() + e.getMinY() : e.getMinY() - e.getMaxX();

@@ -74,7 +74,7 @@ final class Legend {
         Theme.Colours c = theme.colours();
         addStatus(counts, FigureStatus.NO_DATA, c.noData(), RegionFills.Hatch.SINGLE, "No data");
         addStatus(counts, FigureStatus.SUPPRESSED, c.noData(), RegionFills.Hatch.CROSS, "Withheld");
-        addStatus(counts, FigureStatus.NOT_APPLICABLE, c.notApplicable(), RegionFills.Hatch.NONE, "Not applicable");
+        addStatus(counts, FigureStatus.NOT_APPLICABLE, c.notApplicable(), RegionFills.Hatch.LEVEL, "Not applicable");
         if (unreliable > 0) {
             statusEntries.add(new Entry(c.background(), RegionFills.Hatch.NONE, true, "Unreliable estimate", "(" + unreliable + ")"));
         }
@@ -206,11 +206,9 @@ final class Legend {
             var area = FACTORY.toGeometry(new org.locationtech.jts.geom.Envelope(
                     swatch.getMinX(), swatch.getMaxX(), swatch.getMinY(), swatch.getMaxY()));
             Rgb ink = e.unreliable() ? theme.colours().unreliableHatch() : theme.colours().noDataHatch();
-            if (e.hatch() != RegionFills.Hatch.NONE) {
-                canvas.stroke(PagePaths.lines(Hatching.lines(area, spacing, true), new FixedDecimal(3)), ink, theme.lines().hatch().pt());
-            }
-            if (e.hatch() == RegionFills.Hatch.CROSS || e.unreliable()) {
-                canvas.stroke(PagePaths.lines(Hatching.lines(area, spacing, false), new FixedDecimal(3)), ink, theme.lines().hatch().pt());
+            List<Hatching.Direction> directions = e.unreliable() ? List.of(Hatching.Direction.FALLING) : RegionFills.directions(e.hatch());
+            for (Hatching.Direction direction : directions) {
+                canvas.stroke(PagePaths.lines(Hatching.lines(area, spacing, direction), new FixedDecimal(3)), ink, theme.lines().hatch().pt());
             }
         }
         canvas.stroke(swatch, theme.colours().outline(), theme.lines().hatch().pt());

@@ -16,7 +16,8 @@ import aequa.statistics.FigureStatus;
 final class RegionFills {
 
     /** How a region without a class is marked. */
-    enum Hatch { NONE, SINGLE, CROSS }
+    /** Status patterns: single for no data, crossed for withheld, level lines for not applicable. */
+    enum Hatch { NONE, SINGLE, CROSS, LEVEL }
 
     private final MapModel model;
     private final Theme theme;
@@ -53,8 +54,25 @@ final class RegionFills {
                 return Hatch.SINGLE;
             case SUPPRESSED:
                 return Hatch.CROSS;
+            case NOT_APPLICABLE:
+                // level lines keep it apart from a light class colour, such as a diverging ramp's middle
+                return Hatch.LEVEL;
             default:
                 return Hatch.NONE;
+        }
+    }
+
+    /** The line directions that draw a pattern. */
+    static List<Hatching.Direction> directions(Hatch hatch) {
+        switch (hatch) {
+            case SINGLE:
+                return List.of(Hatching.Direction.RISING);
+            case CROSS:
+                return List.of(Hatching.Direction.RISING, Hatching.Direction.FALLING);
+            case LEVEL:
+                return List.of(Hatching.Direction.LEVEL);
+            default:
+                return List.of();
         }
     }
 

@@ -62,15 +62,11 @@ final class RegionLayer {
             Rgb fill = plainFill && RegionFills.classed(value) ? theme.colours().land() : fills.fill(value);
             canvas.fill(path, fill);
             RegionFills.Hatch hatch = RegionFills.hatching(value);
-            if (hatch != RegionFills.Hatch.NONE) {
-                Rgb ink = theme.colours().noDataHatch();
-                canvas.stroke(PagePaths.lines(Hatching.lines(page, spacing, true), precision), ink, hatchPt);
-                if (hatch == RegionFills.Hatch.CROSS) {
-                    canvas.stroke(PagePaths.lines(Hatching.lines(page, spacing, false), precision), ink, hatchPt);
-                }
+            for (Hatching.Direction direction : RegionFills.directions(hatch)) {
+                canvas.stroke(PagePaths.lines(Hatching.lines(page, spacing, direction), precision), theme.colours().noDataHatch(), hatchPt);
             }
             if (!plainFill && RegionFills.classed(value) && value.unreliable()) {
-                canvas.stroke(PagePaths.lines(Hatching.lines(page, spacing, false), precision), fills.text(value), hatchPt);
+                canvas.stroke(PagePaths.lines(Hatching.lines(page, spacing, Hatching.Direction.FALLING), precision), fills.text(value), hatchPt);
             }
             canvas.end();
         }

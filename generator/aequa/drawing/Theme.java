@@ -42,7 +42,7 @@ public record Theme(String name, String description, Colours colours, Fonts font
      * @param graticule      meridians and parallels
      * @param sea            the fill of the projected globe on world maps
      * @param noData         fill of regions without a figure
-     * @param noDataHatch    hatch lines over no-data and withheld regions
+     * @param noDataHatch    pattern lines over no-data, withheld and not-applicable regions
      * @param notApplicable  fill of regions where the indicator does not apply
      * @param unreliableHatch hatch lines over unreliable values
      * @param land           fill of regions under proportional symbols

@@ -63,6 +63,19 @@ class SvgDrawingTest {
         }
     }
 
+    /** Whether a path of separate segments ("Mx,y" then a relative "ldx,dy") has only level ones (dy = 0). */
+    private static boolean levelLines(String d) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("M[-0-9.]+,[-0-9.]+l[-0-9.]+,([-0-9.]+)").matcher(d);
+        int segments = 0;
+        while (m.find()) {
+            segments++;
+            if (Double.parseDouble(m.group(1)) != 0) {
+                return false;
+            }
+        }
+        return segments > 0;
+    }
+
     @Test
     void noDataIsHatchedAndNeverARampColour() {
         SvgDoc svg = SvgDoc.parse(MapDrawings.webSvg(MODEL, DAYLIGHT, WebSize.STANDARD).bytes());
@@ -80,10 +93,19 @@ class SvgDrawingTest {
                 boolean hatched = SvgDoc.elements(g, "g").stream()
                         .anyMatch(e -> e.getAttribute("style").contains("stroke:" + rgb(DAYLIGHT.colours().noDataHatch())));
                 assertTrue(hatched, "no-data and withheld regions carry hatch lines");
+                Element firstHatch = SvgDoc.elements(g, "g").stream()
+                        .filter(e -> e.getAttribute("style").contains("stroke:" + rgb(DAYLIGHT.colours().noDataHatch()))).findFirst().orElseThrow();
+                assertFalse(levelLines(SvgDoc.elements(firstHatch, "path").get(0).getAttribute("d")), "their lines are slanted");
             }
             if (cls.equals("not-applicable")) {
                 statuses++;
                 assertTrue(style.contains(rgb(DAYLIGHT.colours().notApplicable())), style);
+                // level lines, so a near-white "not applicable" is not read as a light class colour
+                List<Element> hatch = SvgDoc.elements(g, "g").stream()
+                        .filter(e -> e.getAttribute("style").contains("stroke:" + rgb(DAYLIGHT.colours().noDataHatch()))).toList();
+                assertEquals(1, hatch.size(), "one set of hatch lines");
+                String d = SvgDoc.elements(hatch.get(0), "path").get(0).getAttribute("d");
+                assertTrue(levelLines(d), "the lines are level: " + d);
             }
             if (!cls.matches("\\d+")) {
                 for (String ramp : rampFills) {
