@@ -24,7 +24,8 @@ import aequa.project.ColoursSpec;
  *       then holds fewer fills than asked for, with the WARNING {@code colours-fewer-classes}: the caller
  *       classifies again with {@code ramp.fills().size()} classes.</li>
  * </ol>
- * Qualitative sets try equal lightness, then alternating lightness; their count is never reduced (each
+ * Qualitative sets try equal lightness, then alternating lightness, then a search over lightness, chroma
+ * and hue ({@link QualitativeSearch}); their count is never reduced (each
  * fill is a category). A ramp that still fails is returned with its failed checks and the WARNING
  * {@code colours-ramp-fails-checks}. An unknown scheme is the ERROR {@code colours-unknown-scheme}.
  *
@@ -42,6 +43,11 @@ public final class ColourRamps {
     /** OKLCh chroma aimed at for the loud end; gamut mapping lowers it where sRGB cannot reach it. */
     static final double MAX_CHROMA = 0.16;
     static final double QUALITATIVE_CHROMA = 0.13;
+    /** The lightness band a searched qualitative set may use (OKLab L); the border and hatch contrast bound it too. */
+    static final double QUALITATIVE_LOWEST_ON_LIGHT = 0.55;
+    static final double QUALITATIVE_HIGHEST_ON_LIGHT = 0.90;
+    static final double QUALITATIVE_LOWEST_ON_DARK = 0.30;
+    static final double QUALITATIVE_HIGHEST_ON_DARK = 0.70;
     /** Contrast margin above 3:1 when bounding the loud end, absorbing 8-bit rounding of the fills. */
     private static final double BOUND_MARGIN = 1.03;
     private static final double BOUND_STEP = 0.005;
@@ -129,8 +135,27 @@ public final class ColourRamps {
         }
         findings.add(adjusted(file, place, String.format(Locale.ROOT,
                 "Alternated lightness %.2f and %.2f (OKLab L) so categories stay apart without hue.", lightness, other)));
-        return withChecks("qualitative",
+        ramp = withChecks("qualitative",
                 RampShapes.qualitative(hue, classCount, lightness, other, QUALITATIVE_CHROMA, true), nonText);
+        if (ramp.passes()) {
+            return ramp;
+        }
+        double low = lightPage ? QUALITATIVE_LOWEST_ON_LIGHT : QUALITATIVE_LOWEST_ON_DARK;
+        double high = lightPage ? QUALITATIVE_HIGHEST_ON_LIGHT : QUALITATIVE_HIGHEST_ON_DARK;
+        ColourRamp searched = withChecks("qualitative", new QualitativeSearch(nonText, low, high)
+                .search(QualitativeSearch.spread(hue, classCount, lightness, other, QUALITATIVE_CHROMA)), nonText);
+        if (smallestCheckedDifference(searched) <= smallestCheckedDifference(ramp)) {
+            return ramp;
+        }
+        findings.add(adjusted(file, place, String.format(Locale.ROOT,
+                "Searched lightness %.2f-%.2f, chroma and hue for categories every reader can tell apart.", low, high)));
+        return searched;
+    }
+
+    /** The smallest of a qualitative set's colour differences over all visions. */
+    private static double smallestCheckedDifference(ColourRamp ramp) {
+        return ramp.checks().stream().filter(c -> c.name().startsWith("pairwise-deltaE-"))
+                .mapToDouble(ColourRamp.RampCheck::measured).min().orElse(0);
     }
 
     private static ColourRamp build(String scheme, double hue, double hueLow, int count, RampShapes.Shape shape,

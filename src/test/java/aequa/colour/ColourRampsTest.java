@@ -100,14 +100,40 @@ class ColourRampsTest {
         assertEquals("colours-fewer-classes", codes.get(codes.size() - 1));
     }
 
+    /**
+     * Nine categories at one or two lightnesses cannot stay apart for dichromats; the search over lightness,
+     * chroma and hue finds a set that every check passes (checked by RampChecks, independently of the
+     * search), with no neutral grey among them and each apart from the page, on a light and a dark page.
+     */
+    @Test
+    void manyCategoriesAreSearchedUntilEveryReaderCanTellThemApart() {
+        for (Rgb page : List.of(WHITE, Rgb.fromHex("#1b1f24"))) {
+            for (int count : new int[] {5, 7, 9, 12}) {
+                RampOutcome outcome = generate("qualitative", 0, 0, count, page);
+                ColourRamp ramp = outcome.ramp().orElseThrow();
+                assertEquals(count, ramp.fills().size());
+                assertTrue(ramp.passes(), count + " on " + page.hex() + ": " + failed(ramp));
+                for (Rgb fill : ramp.fills()) {
+                    assertTrue(OkLch.of(OkLab.fromRgb(fill)).chroma() >= 0.04, fill.hex() + " is nearly grey");
+                    for (ColourVision vision : ColourVision.values()) {
+                        assertTrue(vision.seen(fill).deltaE(vision.seen(page)) >= 0.06, fill.hex() + " too close to the page");
+                    }
+                }
+                assertEquals(generate("qualitative", 0, 0, count, page), outcome, "the search is repeatable");
+            }
+        }
+        RampOutcome nine = generate("qualitative", 0, 0, 9, WHITE);
+        assertEquals(List.of("colours-ramp-adjusted", "colours-ramp-adjusted"), codes(nine)); // alternated, then searched
+    }
+
     @Test
     void failingSetIsReturnedWithItsFailedChecksAndAWarning() {
-        // nine categories at (nearly) one lightness cannot stay apart for dichromats
-        RampOutcome outcome = generate("qualitative", 0, 0, 9, WHITE);
+        // 28 categories cannot all stay three JNDs apart for every reader within the usable lightness band
+        RampOutcome outcome = generate("qualitative", 0, 0, 28, WHITE);
         ColourRamp ramp = outcome.ramp().orElseThrow();
-        assertEquals(9, ramp.fills().size());
+        assertEquals(28, ramp.fills().size());
         assertTrue(!ramp.passes());
-        assertEquals(List.of("colours-ramp-adjusted", "colours-ramp-fails-checks"), codes(outcome));
+        assertEquals(List.of("colours-ramp-adjusted", "colours-ramp-adjusted", "colours-ramp-fails-checks"), codes(outcome));
     }
 
     @Test
