@@ -3,6 +3,8 @@ package aequa.projection;
 import java.util.List;
 import java.util.Map;
 
+import org.opengis.referencing.operation.OperationMethod;
+
 /**
  * aequa's own equal-area projections: Equal Earth, Mollweide, and the transverse and oblique aspects of the
  * cylindrical equal-area projection, which Apache SIS does not provide in an ellipsoidal, equal-area form.
@@ -23,7 +25,6 @@ final class AuthalicProjection extends FixedProjection {
     private final double radiusM;
     private final double sinAzimuth;
     private final double cosAzimuth;
-    private final LazyWkt wkt2 = new LazyWkt(() -> CrsDescription.wkt2(this));
 
     private AuthalicProjection(ProjectionFamily family, EllipsoidAxes ellipsoid, List<ProjectionParameter> parameters,
                                AuthalicLatitude authalic, SphereRotation rotation, SphereKernel kernel, double azimuthDeg) {
@@ -112,7 +113,7 @@ final class AuthalicProjection extends FixedProjection {
     }
 
     @Override
-    public String wkt2() {
-        return wkt2.text();
+    OperationMethod operationMethod() {
+        return AuthalicMethods.of(family());
     }
 }

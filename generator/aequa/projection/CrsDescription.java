@@ -10,7 +10,6 @@ import org.apache.sis.measure.Units;
 import org.apache.sis.referencing.CommonCRS;
 import org.apache.sis.referencing.factory.GeodeticObjectFactory;
 import org.apache.sis.referencing.operation.DefaultCoordinateOperationFactory;
-import org.apache.sis.referencing.operation.transform.DefaultMathTransformFactory;
 import org.opengis.parameter.ParameterValueGroup;
 import org.opengis.referencing.IdentifiedObject;
 import org.opengis.referencing.crs.ProjectedCRS;
@@ -35,20 +34,10 @@ final class CrsDescription {
     private CrsDescription() {
     }
 
-    static String wkt2(SisProjection projection) {
+    static String wkt2(FixedProjection projection) {
         requireWgs84(projection.ellipsoid());
         try {
-            OperationMethod method = DefaultMathTransformFactory.provider().getOperationMethod(SisProjection.epsgMethodName(projection.family()));
-            return format(projection, method);
-        } catch (FactoryException e) {
-            throw new IllegalStateException("Apache SIS cannot describe " + projection, e);
-        }
-    }
-
-    static String wkt2(AuthalicProjection projection) {
-        requireWgs84(projection.ellipsoid());
-        try {
-            return format(projection, AuthalicMethods.of(projection.family()));
+            return format(projection, projection.operationMethod());
         } catch (FactoryException e) {
             throw new IllegalStateException("Apache SIS cannot describe " + projection, e);
         }

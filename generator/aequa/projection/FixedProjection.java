@@ -2,9 +2,13 @@ package aequa.projection;
 
 import java.util.List;
 
+import org.opengis.referencing.operation.OperationMethod;
+import org.opengis.util.FactoryException;
+
 /**
  * What every projection of aequa holds once its parameters are fixed: its family, the ellipsoid, the
- * parameter values in the order captions list them, and its aspect frame. Subclasses add the kernel.
+ * parameter values in the order captions list them, its aspect frame and its WKT 2 (made on first use).
+ * Subclasses add the kernel.
  */
 abstract class FixedProjection implements EqualAreaProjection {
 
@@ -12,6 +16,7 @@ abstract class FixedProjection implements EqualAreaProjection {
     private final EllipsoidAxes ellipsoid;
     private final List<ProjectionParameter> parameters;
     private final AuthalicFrame frame;
+    private final LazyWkt wkt2 = new LazyWkt(() -> CrsDescription.wkt2(this));
 
     FixedProjection(ProjectionFamily family, EllipsoidAxes ellipsoid, List<ProjectionParameter> parameters,
                     AuthalicFrame frame) {
@@ -35,6 +40,14 @@ abstract class FixedProjection implements EqualAreaProjection {
     public final AspectFrame frame() {
         return frame;
     }
+
+    @Override
+    public final String wkt2() {
+        return wkt2.text();
+    }
+
+    /** The operation method its WKT 2 names (see {@link CrsDescription}). */
+    abstract OperationMethod operationMethod() throws FactoryException;
 
     final EllipsoidAxes ellipsoid() {
         return ellipsoid;

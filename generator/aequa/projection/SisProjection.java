@@ -8,6 +8,7 @@ import org.apache.sis.referencing.operation.transform.MathTransforms;
 import org.opengis.parameter.ParameterValueGroup;
 import org.opengis.referencing.operation.MathTransform;
 import org.opengis.referencing.operation.Matrix;
+import org.opengis.referencing.operation.OperationMethod;
 import org.opengis.referencing.operation.NoninvertibleTransformException;
 import org.opengis.referencing.operation.TransformException;
 import org.opengis.util.FactoryException;
@@ -39,7 +40,6 @@ final class SisProjection extends FixedProjection {
     private final double domainD;
     private final double domainRadiusM;
     private volatile MathTransform inverse;
-    private final LazyWkt wkt2 = new LazyWkt(() -> CrsDescription.wkt2(this));
 
     private SisProjection(ProjectionFamily family, EllipsoidAxes ellipsoid, List<ProjectionParameter> parameters,
                           AuthalicFrame frame, double domainD, double domainRadiusM) {
@@ -206,13 +206,13 @@ final class SisProjection extends FixedProjection {
         }
     }
 
+    /** The EPSG method name SIS knows the family by. */
     @Override
-    public String wkt2() {
-        return wkt2.text();
+    OperationMethod operationMethod() throws FactoryException {
+        return DefaultMathTransformFactory.provider().getOperationMethod(epsgMethodName(family()));
     }
 
-    /** The EPSG method name SIS knows the family by. */
-    static String epsgMethodName(ProjectionFamily family) {
+    private static String epsgMethodName(ProjectionFamily family) {
         switch (family) {
             case LAMBERT_AZIMUTHAL:
                 return "Lambert Azimuthal Equal Area";

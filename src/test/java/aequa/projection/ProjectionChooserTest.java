@@ -8,6 +8,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.DoubleBinaryOperator;
 
 import org.junit.jupiter.api.Test;
 import org.locationtech.jts.geom.Geometry;
@@ -41,22 +42,8 @@ class ProjectionChooserTest {
         Footprint box = Footprint.of(List.of(Regions.box(-125, 25, -65, 50)));
         ProjectionChoice choice = ProjectionChooser.choose(box, ProjectionRequest.automatic());
         assertEquals(ProjectionFamily.ALBERS_CONIC, choice.projection().family(), choice.reason());
-        double best = Double.POSITIVE_INFINITY;
-        double[] bestAt = new double[2];
-        for (double p1 = 22; p1 <= 35; p1 += 1) {
-            for (double p2 = 38; p2 <= 52; p2 += 1) {
-                double omega = omegaMax(ProjectionFamily.ALBERS_CONIC, albers(p1, p2), box);
-                if (omega < best) {
-                    best = omega;
-                    bestAt = new double[] {p1, p2};
-                }
-            }
-        }
-        for (double p1 = bestAt[0] - 0.5; p1 <= bestAt[0] + 0.5; p1 += 0.1) {
-            for (double p2 = bestAt[1] - 0.5; p2 <= bestAt[1] + 0.5; p2 += 0.1) {
-                best = Math.min(best, omegaMax(ProjectionFamily.ALBERS_CONIC, albers(p1, p2), box));
-            }
-        }
+        double best = gridMinimum((p1, p2) -> omegaMax(ProjectionFamily.ALBERS_CONIC, albers(p1, p2), box),
+                new Range(22, 35, 1), new Range(38, 52, 1), 0.5, 0.1, Double.NEGATIVE_INFINITY);
         assertTrue(choice.omegaMaxDeg() <= best * WITHIN, choice.omegaMaxDeg() + " vs grid " + best);
         assertComplete(choice, box);
     }
@@ -94,22 +81,8 @@ class ProjectionChooserTest {
         Footprint strip = Footprint.of(List.of(Regions.box(10, -40, 16, 40)));
         ProjectionChoice choice = ProjectionChooser.choose(strip, ProjectionRequest.automatic());
         assertEquals(ProjectionFamily.CYLINDRICAL_TRANSVERSE, choice.projection().family(), choice.reason());
-        double best = Double.POSITIVE_INFINITY;
-        double[] bestAt = new double[2];
-        for (double lon = 10; lon <= 16; lon += 0.5) {
-            for (double offset = 0; offset <= 5; offset += 0.5) {
-                double omega = omegaMax(ProjectionFamily.CYLINDRICAL_TRANSVERSE, transverse(lon, offset), strip);
-                if (omega < best) {
-                    best = omega;
-                    bestAt = new double[] {lon, offset};
-                }
-            }
-        }
-        for (double lon = bestAt[0] - 0.25; lon <= bestAt[0] + 0.25; lon += 0.05) {
-            for (double offset = Math.max(0, bestAt[1] - 0.25); offset <= bestAt[1] + 0.25; offset += 0.05) {
-                best = Math.min(best, omegaMax(ProjectionFamily.CYLINDRICAL_TRANSVERSE, transverse(lon, offset), strip));
-            }
-        }
+        double best = gridMinimum((lon, offset) -> omegaMax(ProjectionFamily.CYLINDRICAL_TRANSVERSE, transverse(lon, offset), strip),
+                new Range(10, 16, 0.5), new Range(0, 5, 0.5), 0.25, 0.05, 0);
         assertTrue(choice.omegaMaxDeg() <= best * WITHIN, choice.omegaMaxDeg() + " vs grid " + best);
     }
 
@@ -166,6 +139,36 @@ class ProjectionChooserTest {
         }
         assertTrue(choice.reason().startsWith(choice.projection().family().displayName()), choice.reason());
         assertTrue(choice.reason().endsWith("."), choice.reason());
+    }
+
+    /** A grid's bounds and step. */
+    private record Range(double from, double to, double step) {
+    }
+
+    /**
+     * The smallest value of {@code f} on a coarse grid over {@code a} x {@code b}, then on a fine grid of
+     * step {@code fineStep} within {@code fineRadius} of the coarse best (b kept at or above {@code bFloor}).
+     */
+    private static double gridMinimum(DoubleBinaryOperator f, Range a, Range b, double fineRadius, double fineStep, double bFloor) {
+        double best = Double.POSITIVE_INFINITY;
+        double bestA = a.from();
+        double bestB = b.from();
+        for (double x = a.from(); x <= a.to(); x += a.step()) {
+            for (double y = b.from(); y <= b.to(); y += b.step()) {
+                double value = f.applyAsDouble(x, y);
+                if (value < best) {
+                    best = value;
+                    bestA = x;
+                    bestB = y;
+                }
+            }
+        }
+        for (double x = bestA - fineRadius; x <= bestA + fineRadius; x += fineStep) {
+            for (double y = Math.max(bFloor, bestB - fineRadius); y <= bestB + fineRadius; y += fineStep) {
+                best = Math.min(best, f.applyAsDouble(x, y));
+            }
+        }
+        return best;
     }
 
     private static double omegaMax(ProjectionFamily family, Map<String, Double> parameters, Footprint footprint) {
