@@ -143,7 +143,7 @@ public final class ColourRamps {
         double low = lightPage ? QUALITATIVE_LOWEST_ON_LIGHT : QUALITATIVE_LOWEST_ON_DARK;
         double high = lightPage ? QUALITATIVE_HIGHEST_ON_LIGHT : QUALITATIVE_HIGHEST_ON_DARK;
         ColourRamp searched = withChecks("qualitative", new QualitativeSearch(nonText, low, high)
-                .search(QualitativeSearch.spread(hue, classCount, lightness, other, QUALITATIVE_CHROMA)), nonText);
+                .search(RampShapes.qualitativePoints(hue, classCount, lightness, other, QUALITATIVE_CHROMA)), nonText);
         if (smallestCheckedDifference(searched) <= smallestCheckedDifference(ramp)) {
             return ramp;
         }

@@ -1,6 +1,5 @@
 package aequa.colour;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 
@@ -123,25 +122,12 @@ final class QualitativeSearch {
     private static double smallestDifference(OkLab[][] seen) {
         double smallest = Double.POSITIVE_INFINITY;
         for (OkLab[] byVision : seen) {
-            for (int i = 0; i < byVision.length; i++) {
-                for (int j = i + 1; j < byVision.length; j++) {
-                    smallest = Math.min(smallest, byVision[i].deltaE(byVision[j]));
-                }
-            }
+            smallest = Math.min(smallest, RampChecks.smallestPairwise(byVision));
         }
         return smallest;
     }
 
     private static double clamp(double v, double low, double high) {
         return Math.max(low, Math.min(high, v));
-    }
-
-    /** The OKLCh points of an evenly spread set, as {@link RampShapes#qualitative} makes it. */
-    static List<OkLch> spread(double startHueDeg, int count, double lightness, double otherLightness, double chroma) {
-        List<OkLch> points = new ArrayList<>(count);
-        for (int i = 0; i < count; i++) {
-            points.add(new OkLch(i % 2 == 1 ? otherLightness : lightness, chroma, (startHueDeg + 360.0 * i / count) % 360));
-        }
-        return points;
     }
 }

@@ -75,10 +75,15 @@ final class RampChecks {
     }
 
     static double smallestPairwise(List<Rgb> fills, ColourVision vision) {
+        return smallestPairwise(fills.stream().map(vision::seen).toArray(OkLab[]::new));
+    }
+
+    /** The smallest OKLab difference between any two of {@code colours}. */
+    static double smallestPairwise(OkLab[] colours) {
         double smallest = Double.POSITIVE_INFINITY;
-        for (int i = 0; i < fills.size(); i++) {
-            for (int j = i + 1; j < fills.size(); j++) {
-                smallest = Math.min(smallest, vision.seen(fills.get(i)).deltaE(vision.seen(fills.get(j))));
+        for (int i = 0; i < colours.length; i++) {
+            for (int j = i + 1; j < colours.length; j++) {
+                smallest = Math.min(smallest, colours[i].deltaE(colours[j]));
             }
         }
         return smallest;

@@ -2,6 +2,7 @@ package aequa.colour;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.stream.Collectors;
 
 /**
  * Generates class fills from hue and lightness parameters in OKLCh (Ottosson 2020), then gamut-maps them
@@ -82,12 +83,17 @@ final class RampShapes {
      */
     static List<Rgb> qualitative(double startHueDeg, int count, double lightness, double otherLightness,
                                  double chroma, boolean alternate) {
-        List<Rgb> fills = new ArrayList<>(count);
+        return qualitativePoints(startHueDeg, count, lightness, alternate ? otherLightness : lightness, chroma).stream()
+                .map(GamutMapping::toRgb).collect(Collectors.toList());
+    }
+
+    /** The OKLCh points of {@link #qualitative} with alternating lightness, before gamut mapping. */
+    static List<OkLch> qualitativePoints(double startHueDeg, int count, double lightness, double otherLightness,
+                                         double chroma) {
+        List<OkLch> points = new ArrayList<>(count);
         for (int i = 0; i < count; i++) {
-            double hue = (startHueDeg + 360.0 * i / count) % 360;
-            double l = alternate && i % 2 == 1 ? otherLightness : lightness;
-            fills.add(GamutMapping.toRgb(new OkLch(l, chroma, hue)));
+            points.add(new OkLch(i % 2 == 1 ? otherLightness : lightness, chroma, (startHueDeg + 360.0 * i / count) % 360));
         }
-        return fills;
+        return points;
     }
 }
