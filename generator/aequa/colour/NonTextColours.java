@@ -34,7 +34,7 @@ public record NonTextColours(Rgb background, Rgb border, Rgb noDataHatch, Rgb no
 
     /** Whether black contrasts at least as much with {@code colour} as white does (a "light" page). */
     static boolean isLight(Rgb colour) {
-        return WcagContrast.ratio(colour, WcagContrast.DARK_TEXT) >= WcagContrast.ratio(colour, WcagContrast.LIGHT_TEXT);
+        return WcagContrast.labelColour(colour).equals(WcagContrast.DARK_TEXT); // dark text reads best on it
     }
 
     /** The neutral at {@code lightness}, moved away from the page until it reaches 3:1 against it. */

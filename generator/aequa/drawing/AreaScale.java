@@ -11,8 +11,6 @@ package aequa.drawing;
  */
 public record AreaScale(double areaKm2, double sideU) {
 
-    private static final double[] NICE = {5, 2, 1};
-
     /**
      * The largest round area whose square is no wider than {@code targetSideU} at {@code scaleUnitsPerM}.
      *
@@ -24,14 +22,7 @@ public record AreaScale(double areaKm2, double sideU) {
         }
         double sideM = targetSideU / scaleUnitsPerM;
         double rawKm2 = sideM * sideM / 1e6;
-        double decade = Math.pow(10, Math.floor(Math.log10(rawKm2)));
-        double areaKm2 = decade;
-        for (double n : NICE) {
-            if (n * decade <= rawKm2 * (1 + 1e-12)) {
-                areaKm2 = n * decade;
-                break;
-            }
-        }
+        double areaKm2 = Symbols.niceFloor(rawKm2);
         return new AreaScale(areaKm2, Math.sqrt(areaKm2 * 1e6) * scaleUnitsPerM);
     }
 

@@ -59,10 +59,6 @@ final class Canvas {
         return type.unitsPerPt();
     }
 
-    boolean writesSvg() {
-        return svg != null;
-    }
-
     /**
      * Opens a group. {@code id} must already be an XML-safe id (see {@link Ids}); a repeated id gets a
      * numeric suffix, since JFreeSVG would leave a broken tag behind on a duplicate.

@@ -34,10 +34,6 @@ public record DrawOptions(boolean title, boolean labels, Graticule graticule, bo
         return new DrawOptions(title, labels, graticule, on);
     }
 
-    public DrawOptions withLabels(boolean on) {
-        return new DrawOptions(title, on, graticule, histogram);
-    }
-
     public DrawOptions withTitle(boolean on) {
         return new DrawOptions(on, labels, graticule, histogram);
     }

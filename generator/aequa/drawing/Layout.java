@@ -18,9 +18,9 @@ import aequa.atlas.MapModel;
  * @param heightU     page height (rounded up to the output's coarse step: 0.1 mm or 1 px)
  * @param marginU     margin on every side
  * @param titleLines  the title, broken into lines (empty when the options leave it out)
- * @param titleTopU   top of the title block
  * @param panels      the map panels, in period order
  * @param areaScale   the area-scale square
+ * @param legend      the legend, as measured for {@code legendBox}
  * @param legendBox   where the legend goes
  * @param scaleBox    where the area scale goes
  * @param captionLines the caption, broken into lines
@@ -29,8 +29,8 @@ import aequa.atlas.MapModel;
  * @param creditsTopU  top of the credits block
  * @param symbols     proportional circles, or null for a choropleth
  */
-record Layout(double widthU, double heightU, double marginU, List<String> titleLines, double titleTopU,
-              List<Panel> panels, AreaScale areaScale, Rectangle2D legendBox, Rectangle2D scaleBox,
+record Layout(double widthU, double heightU, double marginU, List<String> titleLines,
+              List<Panel> panels, AreaScale areaScale, Legend legend, Rectangle2D legendBox, Rectangle2D scaleBox,
               List<String> captionLines, double captionTopU, List<String> creditLines, double creditsTopU,
               Symbols symbols) {
 
@@ -135,7 +135,7 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
 
         double stepsPerUnit = medium == Medium.PRINT ? 10 : 1; // heights in whole 0.1 mm or whole px
         double height = Double.isNaN(fixedHeightU) ? Math.ceil(y * stepsPerUnit - 1e-6) / stepsPerUnit : fixedHeightU;
-        return new Layout(widthU, height, margin, titleLines, margin, panels, areaScale, legendBox, scaleBox,
+        return new Layout(widthU, height, margin, titleLines, panels, areaScale, legend, legendBox, scaleBox,
                 captionLines, captionTop, creditLines, creditsTop, symbols);
     }
 

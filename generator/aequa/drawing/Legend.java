@@ -87,15 +87,6 @@ final class Legend {
         }
     }
 
-    /** The class entries, low to high (empty for unclassed and symbol maps' main part). */
-    List<Entry> classEntries() {
-        return List.copyOf(classEntries);
-    }
-
-    List<Entry> statusEntries() {
-        return List.copyOf(statusEntries);
-    }
-
     private boolean unclassed() {
         return model.classification().method() == ClassMethod.UNCLASSED;
     }

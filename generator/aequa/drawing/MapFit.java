@@ -20,27 +20,11 @@ import org.locationtech.jts.geom.util.AffineTransformation;
  */
 public record MapFit(double scaleUnitsPerM, double minXM, double maxYM, double originXU, double originYU) {
 
-    /** The largest scale at which {@code extentM} fits {@code box}, centred in it. */
-    public static MapFit into(Envelope extentM, Rectangle2D box) {
-        double widthM = Math.max(extentM.getWidth(), 1e-9);
-        double heightM = Math.max(extentM.getHeight(), 1e-9);
-        double scale = Math.min(box.getWidth() / widthM, box.getHeight() / heightM);
-        return at(scale, extentM, box);
-    }
-
     /** {@code extentM} at the given scale, centred in {@code box}. */
     public static MapFit at(double scaleUnitsPerM, Envelope extentM, Rectangle2D box) {
         double originX = box.getX() + (box.getWidth() - extentM.getWidth() * scaleUnitsPerM) / 2;
         double originY = box.getY() + (box.getHeight() - extentM.getHeight() * scaleUnitsPerM) / 2;
         return new MapFit(scaleUnitsPerM, extentM.getMinX(), extentM.getMaxY(), originX, originY);
-    }
-
-    public double x(double xM) {
-        return originXU + (xM - minXM) * scaleUnitsPerM;
-    }
-
-    public double y(double yM) {
-        return originYU + (maxYM - yM) * scaleUnitsPerM;
     }
 
     /** A copy of {@code geometryM} in page units. */
@@ -49,10 +33,5 @@ public record MapFit(double scaleUnitsPerM, double minXM, double maxYM, double o
                 scaleUnitsPerM, 0, originXU - minXM * scaleUnitsPerM,
                 0, -scaleUnitsPerM, originYU + maxYM * scaleUnitsPerM);
         return t.transform(geometryM);
-    }
-
-    /** The page length of {@code metres} on the map: the same everywhere, as the scale is uniform. */
-    public double units(double metres) {
-        return metres * scaleUnitsPerM;
     }
 }

@@ -6,6 +6,7 @@ import java.util.List;
 
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.Polygon;
 
 import aequa.atlas.MapModel;
 import aequa.atlas.MapRegion;
@@ -30,6 +31,8 @@ final class MapPainter {
     private final boolean wholeGlobe;
     private final boolean graticule;
     private final Envelope extentM;
+    /** The outline of the whole globe in metres, when it is drawn (world maps with a graticule); else null. */
+    private final Polygon globeM;
 
     MapPainter(MapModel model, Theme theme, DrawOptions options) {
         this.model = model;
@@ -45,8 +48,9 @@ final class MapPainter {
                 extent.expandToInclude(region.planarM().getEnvelopeInternal());
             }
         }
-        if (wholeGlobe && graticule) {
-            extent.expandToInclude(GlobeLines.globe(model.projection().projection()).getEnvelopeInternal());
+        this.globeM = wholeGlobe && graticule ? GlobeLines.globe(model.projection().projection()) : null;
+        if (globeM != null) {
+            extent.expandToInclude(globeM.getEnvelopeInternal());
         }
         if (extent.isNull()) {
             extent = new Envelope(-1, 1, -1, 1);
@@ -70,7 +74,7 @@ final class MapPainter {
         canvas.end();
         if (!layout.titleLines().isEmpty()) {
             canvas.begin("title");
-            double baseline = layout.titleTopU() + type.capHeight(sizes.title());
+            double baseline = layout.marginU() + type.capHeight(sizes.title()); // the title block starts at the margin
             for (String line : layout.titleLines()) {
                 canvas.text(line, layout.marginU(), baseline, sizes.title(), true, Canvas.Anchor.START, c.text(), c.background());
                 baseline += type.lineHeight(sizes.title());
@@ -114,8 +118,7 @@ final class MapPainter {
         }
         Rectangle2D legendBox = layout.legendBox();
         canvas.begin("legend");
-        new Legend(model, theme, type, options.histogram(), layout.symbols())
-                .paint(canvas, legendBox.getX(), legendBox.getY(), legendBox.getWidth());
+        layout.legend().paint(canvas, legendBox.getX(), legendBox.getY(), legendBox.getWidth());
         canvas.end();
         paintAreaScale(canvas, layout);
         paintParagraph(canvas, "caption", layout.captionLines(), layout.captionTopU(), layout.marginU(), c.textMuted());
@@ -141,7 +144,7 @@ final class MapPainter {
 
     private void paintGlobe(Canvas canvas, MapFit fit, Geometry graticuleM, FixedDecimal precision, String suffix) {
         Theme.Colours c = theme.colours();
-        Geometry globe = fit.toPage(GlobeLines.globe(model.projection().projection()));
+        Geometry globe = fit.toPage(globeM);
         canvas.begin("globe" + suffix);
         canvas.fill(PagePaths.area(globe, precision), c.sea());
         canvas.stroke(PagePaths.lines(fit.toPage(graticuleM), precision), c.graticule(), theme.lines().graticule().pt());

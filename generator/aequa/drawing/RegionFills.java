@@ -109,8 +109,4 @@ final class RegionFills {
         }
         return Math.max(0, Math.min(1, (v - low) / (high - low)));
     }
-
-    private static int mix(int a, int b, double f) {
-        return (int) Math.round(a + (b - a) * f);
-    }
 }

@@ -36,8 +36,11 @@ final class CoverageEdges {
     final boolean[] isNode;
     /** For a vertex next to an end of a stored edge (not a node): that edge; else -1. */
     private final int[] edgeOfInnerVertex;
-    /** Edges that are a single segment, by their pair of nodes (see {@link #nodePair}). */
-    private final LongIntTable straightEdgeByNodes = new LongIntTable(1024);
+    /**
+     * Edges that are a single segment, by their pair of nodes (see {@link #nodePair}). The simplifier adds
+     * the pairs of edges it shrinks to a single segment (with any value: it asks only whether a pair is in).
+     */
+    final LongIntTable straightEdgeByNodes = new LongIntTable(1024);
 
     CoverageEdges(Geometry[] coverage) {
         int points = 0;

@@ -45,18 +45,13 @@ final class EdgeCoverageSimplifier {
         this.structure = new CoverageEdges(coverage);
         this.vertices = structure.vertices;
         this.areaToleranceM2 = toleranceM * toleranceM;
-        this.straightNodePairs = new LongIntTable(structure.edges.size() / 8);
+        this.straightNodePairs = structure.straightEdgeByNodes;
     }
 
     /** The coverage simplified to {@code toleranceM} metres; same length and order, same part structure. */
     static Geometry[] simplify(Geometry[] coverage, double toleranceM) {
         EdgeCoverageSimplifier simplifier = new EdgeCoverageSimplifier(coverage, toleranceM);
         List<int[]> edges = simplifier.structure.edges;
-        for (int[] edge : edges) {
-            if (edge.length == 2) {
-                simplifier.straightNodePairs.put(nodePair(edge), 0);
-            }
-        }
         List<int[]> simplified = new ArrayList<>(edges.size());
         for (int[] edge : edges) {
             simplified.add(simplifier.simplifyEdge(edge));
