@@ -86,7 +86,7 @@ record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAre
     /** The footprint's width on the ground, roughly, to choose the densification step before projecting. */
     private static double roughWidthM(Footprint footprint) {
         double metresPerDeg = 111_320;
-        double midLat = Math.toRadians((footprint.minLatDeg() + footprint.maxLatDeg()) / 2);
+        double midLat = Math.toRadians(footprint.midLatDeg());
         double eastWest = footprint.lonSpanDeg() * Math.cos(midLat);
         double northSouth = footprint.maxLatDeg() - footprint.minLatDeg();
         return Math.max(eastWest, northSouth) * metresPerDeg;

@@ -75,7 +75,8 @@ public final class GeodesicArea {
         return result.area;
     }
 
-    private static boolean jumpsAcrossAntimeridian(CoordinateSequence ring) {
+    /** Whether an edge of the ring jumps more than 180 deg of longitude (so it is not in RFC 7946 form). */
+    static boolean jumpsAcrossAntimeridian(CoordinateSequence ring) {
         for (int i = 0; i + 1 < ring.size(); i++) {
             if (Math.abs(ring.getX(i + 1) - ring.getX(i)) > 180) {
                 return true;

@@ -105,9 +105,10 @@ public final class RegionValidator {
             int holes = part.getNumInteriorRing();
             part = withoutCollapsedHoles(part);
             collapsed += holes - part.getNumInteriorRing();
-            if (jumpsAcrossAntimeridian(part)) {
+            boolean aroundPole = encirclesPole(part.getExteriorRing().getCoordinates());
+            if (aroundPole || anyRingJumps(part)) {
                 cut = true;
-                poleClosed |= encirclesPole(part.getExteriorRing().getCoordinates());
+                poleClosed |= aroundPole;
                 parts.addAll(AntimeridianCutter.cut(part, GEOGRAPHIC, factory));
             } else {
                 parts.add(part);
@@ -148,16 +149,11 @@ public final class RegionValidator {
         return oriented(result);
     }
 
-    static boolean jumpsAcrossAntimeridian(Polygon polygon) {
-        if (encirclesPole(polygon.getExteriorRing().getCoordinates())) {
-            return true;
-        }
+    /** Whether an edge of any of the polygon's rings jumps more than 180 deg of longitude. */
+    private static boolean anyRingJumps(Polygon polygon) {
         for (int r = -1; r < polygon.getNumInteriorRing(); r++) {
-            Coordinate[] ring = (r < 0 ? polygon.getExteriorRing() : polygon.getInteriorRingN(r)).getCoordinates();
-            for (int i = 0; i + 1 < ring.length; i++) {
-                if (Math.abs(ring[i + 1].x - ring[i].x) > 180) {
-                    return true;
-                }
+            if (GeodesicArea.jumpsAcrossAntimeridian((r < 0 ? polygon.getExteriorRing() : polygon.getInteriorRingN(r)).getCoordinateSequence())) {
+                return true;
             }
         }
         return false;
@@ -177,7 +173,7 @@ public final class RegionValidator {
             if (Math.abs(ring[i + 1].x) == 180 && Math.abs(ring[i].x) == 180) {
                 continue; // along the cut itself, or +180 to -180: no turn
             }
-            turned += step - 360 * Math.round(step / 360);
+            turned += UnwrappedRing.shortWay(step);
         }
         return Math.abs(turned) > 180;
     }

@@ -146,7 +146,7 @@ final class UnwrappedRing {
     }
 
     /** The difference wrapped into (-180, 180]. */
-    private static double shortWay(double dLon) {
+    static double shortWay(double dLon) {
         return dLon - 360 * Math.round(dLon / 360);
     }
 

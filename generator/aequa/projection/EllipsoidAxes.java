@@ -28,11 +28,6 @@ record EllipsoidAxes(double semiMajorM, double semiMinorM) {
         return (1.0 - ratio) * (1.0 + ratio);
     }
 
-    /** Inverse flattening a / (a - b); infinite for a sphere. */
-    double inverseFlattening() {
-        return semiMajorM / (semiMajorM - semiMinorM);
-    }
-
     /** Meridional radius of curvature M at geodetic latitude phi (radians), in metres (Snyder 1987, eq. 4-18). */
     double meridionalRadiusM(double latRad) {
         double e2 = eccentricitySquared();

@@ -151,7 +151,7 @@ final class FamilySearch {
     private Map<String, Double> startValues() {
         Map<String, Double> v = new HashMap<>();
         double centreLon = round(CENTRE_LON, footprint.centreLonDeg());
-        double midLat = round(CENTRE_LAT, (footprint.minLatDeg() + footprint.maxLatDeg()) / 2);
+        double midLat = round(CENTRE_LAT, footprint.midLatDeg());
         double range = footprint.maxLatDeg() - footprint.minLatDeg();
         v.put(CENTRE_LON, centreLon);
         v.put(CENTRE_LAT, midLat);

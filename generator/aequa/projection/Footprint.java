@@ -10,7 +10,6 @@ import org.locationtech.jts.geom.Geometry;
  * +-180. Built by {@link #of}; all angles in degrees.
  *
  * @param centreLonDeg          centre of the smallest longitude arc that covers the data, in [-180, 180)
- * @param centreLatDeg          centre of the latitude range
  * @param lonSpanDeg            width of that arc (360 when the data go all the way round)
  * @param minLatDeg             southernmost latitude
  * @param maxLatDeg             northernmost latitude
@@ -25,7 +24,7 @@ import org.locationtech.jts.geom.Geometry;
  * @param orientationDeg        azimuth of that main axis at the spherical centre, clockwise from north, in [0, 180)
  * @param samples               area-weighted interior points and boundary points
  */
-public record Footprint(double centreLonDeg, double centreLatDeg, double lonSpanDeg, double minLatDeg, double maxLatDeg,
+public record Footprint(double centreLonDeg, double lonSpanDeg, double minLatDeg, double maxLatDeg,
                         boolean containsNorthPole, boolean containsSouthPole,
                         double sphericalCentreLonDeg, double sphericalCentreLatDeg, double angularRadiusDeg,
                         double elongation, double orientationDeg, FootprintSamples samples) {
@@ -37,6 +36,11 @@ public record Footprint(double centreLonDeg, double centreLatDeg, double lonSpan
      */
     public static Footprint of(Collection<? extends Geometry> lonLatGeometries) {
         return FootprintAnalysis.analyse(lonLatGeometries);
+    }
+
+    /** The middle of the latitude range. */
+    public double midLatDeg() {
+        return (minLatDeg + maxLatDeg) / 2;
     }
 
     /** Whether the data lie on both sides of the equator. */

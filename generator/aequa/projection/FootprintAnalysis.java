@@ -59,14 +59,14 @@ final class FootprintAnalysis {
         double[][] interior = new FootprintSampler(polygons, false).sample(west, east - west, south, north);
         FootprintSamples samples = withBoundary(interior, vertices, extremes);
         double centreLon = Double.isNaN(cutLon) ? 0.0 : Longitudes.normalize((west + east) / 2);
-        return SphericalMoments.of(samples).toFootprint(centreLon, (south + north) / 2, east - west, south, north,
+        return SphericalMoments.of(samples).toFootprint(centreLon, east - west, south, north,
                 poles[0], poles[1], samples);
     }
 
     private static Footprint wholeGlobe() {
         double[][] interior = new FootprintSampler(List.of(), true).sample(-180.0, 360.0, -90.0, 90.0);
         FootprintSamples samples = new FootprintSamples(interior[0], interior[1], interior[1].length, 0);
-        return SphericalMoments.of(samples).toFootprint(0.0, 0.0, 360.0, -90.0, 90.0, true, true, samples);
+        return SphericalMoments.of(samples).toFootprint(0.0, 360.0, -90.0, 90.0, true, true, samples);
     }
 
     private static void collect(Geometry g, List<Polygon> polygons, Vertices vertices, boolean[] covered, boolean[] poles) {

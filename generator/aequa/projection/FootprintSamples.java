@@ -37,11 +37,6 @@ public final class FootprintSamples {
         return lonLatDeg.clone();
     }
 
-    /** A copy of the weights: area in steradians for interior points, 0 for boundary points. */
-    public double[] weights() {
-        return weights.clone();
-    }
-
     double lonDeg(int i) {
         return lonLatDeg[2 * i];
     }

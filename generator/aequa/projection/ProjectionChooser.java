@@ -129,7 +129,7 @@ public final class ProjectionChooser {
      * with the square of the narrow dimension), coarse enough to read.
      */
     static double roundingStepDeg(Footprint footprint) {
-        double midLat = Math.toRadians((footprint.minLatDeg() + footprint.maxLatDeg()) / 2);
+        double midLat = Math.toRadians(footprint.midLatDeg());
         double size = Math.min(footprint.maxLatDeg() - footprint.minLatDeg(), footprint.lonSpanDeg() * Math.cos(midLat)) / 2;
         if (size >= 15) {
             return 0.5;

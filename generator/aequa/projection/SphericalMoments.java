@@ -88,12 +88,12 @@ final class SphericalMoments {
         return new SphericalMoments(lon, lat, Math.toDegrees(radius), elongation, azimuth, meaningful);
     }
 
-    Footprint toFootprint(double arcCentreLonDeg, double rangeCentreLatDeg, double lonSpanDeg, double minLatDeg,
+    Footprint toFootprint(double arcCentreLonDeg, double lonSpanDeg, double minLatDeg,
                           double maxLatDeg, boolean northPole, boolean southPole, FootprintSamples samples) {
         double lon = meaningful ? this.centreLonDeg : arcCentreLonDeg;
         double lat = meaningful ? this.centreLatDeg : 0.0;
         double radius = meaningful ? this.radiusDeg : 180.0;
-        return new Footprint(arcCentreLonDeg, rangeCentreLatDeg, lonSpanDeg, minLatDeg, maxLatDeg, northPole, southPole,
+        return new Footprint(arcCentreLonDeg, lonSpanDeg, minLatDeg, maxLatDeg, northPole, southPole,
                 lon, lat, radius, elongation, orientationDeg, samples);
     }
 
