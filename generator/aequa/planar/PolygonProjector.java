@@ -127,42 +127,40 @@ public final class PolygonProjector {
         if (continuous && projectWithinDomain(part, out)) {
             return;
         }
-        if (continuous) {
-            // clipped to the domain in the frame, where the cap's edge is a parallel; the pieces the cutter
-            // makes at the frame antimeridian meet again on the map (it is continuous there) and are merged
-            Map<Coordinate, Coordinate> geoByFrame = new HashMap<>();
-            Polygon framePart = toFrame(part, geoByFrame);
-            List<Polygon> pieces = new ArrayList<>();
-            for (Polygon piece : AntimeridianCutter.cut(framePart, cutOptions, METRES)) {
-                Polygon projected = projectRings(fromFrame(piece, geoByFrame));
-                if (projected != null) {
-                    pieces.add(projected);
-                }
-            }
-            Geometry merged = pieces.size() < 2 ? METRES.createMultiPolygon(pieces.toArray(new Polygon[0]))
-                    : OverlayNGRobust.union(METRES.createMultiPolygon(pieces.toArray(new Polygon[0])));
-            for (int i = 0; i < merged.getNumGeometries(); i++) {
-                if (merged.getGeometryN(i) instanceof Polygon polygon && !polygon.isEmpty()) {
-                    out.add(polygon);
-                }
-            }
-            return;
-        }
-        if (fitsFrame(part)) {
+        if (!continuous && fitsFrame(part)) {
             Polygon projected = projectRings(part);
             if (projected != null) {
                 out.add(projected);
             }
             return;
         }
+        List<Polygon> pieces = cutAndProject(part);
+        if (continuous && pieces.size() > 1) {
+            // clipped to the domain in the frame, where the cap's edge is a parallel; the pieces the cutter
+            // makes at the frame antimeridian meet again on the map (it is continuous there) and are merged
+            Geometry merged = OverlayNGRobust.union(METRES.createMultiPolygon(pieces.toArray(new Polygon[0])));
+            for (int i = 0; i < merged.getNumGeometries(); i++) {
+                if (merged.getGeometryN(i) instanceof Polygon polygon && !polygon.isEmpty()) {
+                    out.add(polygon);
+                }
+            }
+        } else {
+            out.addAll(pieces);
+        }
+    }
+
+    /** The part cut (or clipped) by {@link AntimeridianCutter} in frame coordinates, each piece projected. */
+    private List<Polygon> cutAndProject(Polygon part) {
         Map<Coordinate, Coordinate> geoByFrame = new HashMap<>();
         Polygon framePart = toFrame(part, geoByFrame);
+        List<Polygon> pieces = new ArrayList<>();
         for (Polygon piece : AntimeridianCutter.cut(framePart, cutOptions, METRES)) {
             Polygon projected = projectRings(fromFrame(piece, geoByFrame));
             if (projected != null) {
-                out.add(projected);
+                pieces.add(projected);
             }
         }
+        return pieces;
     }
 
     /**
