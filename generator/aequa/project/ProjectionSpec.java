@@ -16,8 +16,4 @@ public record ProjectionSpec(String family, Map<String, Double> parameters) {
         family = family == null ? "auto" : family;
         parameters = parameters == null ? Map.of() : java.util.Collections.unmodifiableMap(new java.util.TreeMap<>(parameters));
     }
-
-    public boolean isAutomatic() {
-        return "auto".equals(family) && parameters.isEmpty();
-    }
 }

@@ -39,8 +39,4 @@ public record PublishOptions(int pngWidthPx, Duration lockWait, PublishProgress 
     public PublishOptions withProgress(PublishProgress newProgress) {
         return new PublishOptions(pngWidthPx, lockWait, newProgress);
     }
-
-    public PublishOptions withPngWidthPx(int widthPx) {
-        return new PublishOptions(widthPx, lockWait, progress);
-    }
 }

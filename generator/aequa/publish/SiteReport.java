@@ -17,6 +17,7 @@ import aequa.atlas.MapModel;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
 import aequa.findings.Finding;
+import aequa.inputs.figures.SpecWords;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionParameter;
 
@@ -182,7 +183,7 @@ final class SiteReport {
 
     private static void figure(ObjectNode node, String period, RegionValue v) {
         node.put("period", period);
-        node.put("status", v.status().name().toLowerCase(Locale.ROOT).replace('_', '-'));
+        node.put("status", SpecWords.of(v.status()));
         number(node, "value", v.value());
         number(node, "normalisedValue", v.normalisedValue());
         if (v.classIndex() < 0) {

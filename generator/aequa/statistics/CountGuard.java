@@ -41,11 +41,10 @@ final class CountGuard {
     /**
      * @param values  the reported values as given, pooled over the periods
      * @param areaKm2 the geodesic area of the region of each value, same order
-     * @return true when the map was refused (an error finding was added)
      */
-    static boolean check(MapFigureSettings settings, List<Double> values, List<Double> areaKm2, Findings findings) {
+    static void check(MapFigureSettings settings, List<Double> values, List<Double> areaKm2, Findings findings) {
         if (settings.display() != MapDisplay.CHOROPLETH || settings.normalisation() != Normalisation.NONE) {
-            return false;
+            return;
         }
         String why;
         if (settings.measure() == Measure.COUNT) {
@@ -53,13 +52,13 @@ final class CountGuard {
         } else if (settings.measure() == Measure.UNDECLARED) {
             double correlation = countLikeness(values, areaKm2);
             if (Double.isNaN(correlation)) {
-                return false;
+                return;
             }
             why = String.format(Locale.ROOT, "its values look like counts: all %d are non-negative whole numbers,"
                     + " and they rise with region area (Spearman rank correlation %.2f, at least %.1f)",
                     countWithArea(values, areaKm2), correlation, MIN_AREA_CORRELATION);
         } else {
-            return false;
+            return;
         }
         findings.add(Finding.error("count-on-choropleth", ProjectFile.FILE_NAME, "map \"" + settings.mapId() + "\"",
                 "Map \"" + settings.mapId() + "\" would fill regions by \"" + settings.indicator()
@@ -69,7 +68,6 @@ final class CountGuard {
                         + " or show it as proportional circles with display: circles"
                         + (settings.measure() == Measure.UNDECLARED
                         ? "; if the figures already are rates or shares, declare measure: rate." : ".")));
-        return true;
     }
 
     /**

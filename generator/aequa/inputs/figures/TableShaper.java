@@ -5,6 +5,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import java.util.stream.IntStream;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
@@ -30,6 +31,8 @@ final class TableShaper {
     private final int periodIndex;
     private final int indicatorIndex;
     private final int valueIndex;
+    /** Wide layout: the columns that hold an indicator each (not key or period, named, first of their name). */
+    private final int[] indicatorColumns;
     private final List<FigureCell> cells = new ArrayList<>();
 
     private TableShaper(FigureSourceSettings settings, String tableName, List<String> columns, int[] indexes,
@@ -43,6 +46,10 @@ final class TableShaper {
         this.periodIndex = indexes[1];
         this.indicatorIndex = indexes[2];
         this.valueIndex = indexes[3];
+        this.indicatorColumns = IntStream.range(0, this.columns.size())
+                .filter(c -> c != keyIndex && c != periodIndex && !this.columns.get(c).isBlank()
+                        && this.columns.indexOf(this.columns.get(c)) == c)
+                .toArray();
     }
 
     /**
@@ -111,11 +118,8 @@ final class TableShaper {
             addCell(key, indicator, period, row, valueIndex, fields);
             return;
         }
-        for (int c = 0; c < columns.size(); c++) {
-            boolean firstOfItsName = columns.indexOf(columns.get(c)) == c;
-            if (c != keyIndex && c != periodIndex && !columns.get(c).isBlank() && firstOfItsName) {
-                addCell(key, columns.get(c), period, row, c, fields);
-            }
+        for (int c : indicatorColumns) {
+            addCell(key, columns.get(c), period, row, c, fields);
         }
     }
 

@@ -1,8 +1,5 @@
 package aequa.inputs.regions;
 
-import java.nio.ByteBuffer;
-import java.nio.ByteOrder;
-
 /**
  * The GeoPackageBinary header that precedes the WKB of every geometry in a GeoPackage feature table
  * (OGC 12-128r18, GeoPackage 1.3, clause 2.1.3.1.1 and Table 6):
@@ -16,11 +13,10 @@ import java.nio.ByteOrder;
  * bytes 8-   envelope doubles in byte order B, then the standard WKB geometry (ISO 13249-3 / OGC 06-103r4)
  * </pre>
  *
- * @param srsId     the spatial reference system id written in the header
  * @param empty     the Y flag: the geometry is empty
  * @param wkbOffset where the WKB starts in the blob
  */
-record GeoPackageBinary(int srsId, boolean empty, int wkbOffset) {
+record GeoPackageBinary(boolean empty, int wkbOffset) {
 
     private static final int[] ENVELOPE_BYTES = {0, 32, 48, 48, 64};
 
@@ -41,12 +37,11 @@ record GeoPackageBinary(int srsId, boolean empty, int wkbOffset) {
         if (extended || envelopeCode >= ENVELOPE_BYTES.length) {
             return null;
         }
-        ByteOrder order = (flags & 1) == 1 ? ByteOrder.LITTLE_ENDIAN : ByteOrder.BIG_ENDIAN;
-        int srsId = ByteBuffer.wrap(blob, 4, 4).order(order).getInt();
+        // bytes 4-7 (srs_id) are not read: the layer's srs_id in gpkg_geometry_columns decides the CRS
         int offset = 8 + ENVELOPE_BYTES[envelopeCode];
         if (blob.length < offset) {
             return null;
         }
-        return new GeoPackageBinary(srsId, empty, offset);
+        return new GeoPackageBinary(empty, offset);
     }
 }
