@@ -102,19 +102,23 @@ final class Legend {
     }
 
     double height(double widthU) {
-        double h = type.lineHeight(theme.typePt().legend()) + 0.3 * em;
+        return type.lineHeight(theme.typePt().legend()) + 0.3 * em + keyHeight() + gridHeight(gridEntries(), widthU);
+    }
+
+    /** The height of the circles, gradient or histogram between the heading and the grid; 0 for a class list. */
+    private double keyHeight() {
         if (symbols != null) {
-            h += 2 * symbols.maxRadiusU() + 0.6 * em;
-            return h + gridHeight(statusEntries, widthU);
+            return 2 * symbols.maxRadiusU() + 0.6 * em;
         }
         if (unclassed()) {
-            h += 1.1 * em + 1.6 * em;
-        } else if (histogram) {
-            h += HistogramLegend.height(em);
-        } else {
-            return h + gridHeight(concat(classEntries, statusEntries), widthU);
+            return 1.1 * em + 1.6 * em;
         }
-        return h + gridHeight(statusEntries, widthU);
+        return histogram ? HistogramLegend.height(em) : 0;
+    }
+
+    /** The entries of the grid: the statuses, after the classes when the classes are listed there. */
+    private List<Entry> gridEntries() {
+        return symbols == null && !unclassed() && !histogram ? concat(classEntries, statusEntries) : statusEntries;
     }
 
     void paint(Canvas canvas, double x, double y, double widthU) {
@@ -122,20 +126,14 @@ final class Legend {
         double baseline = y + type.capHeight(size);
         canvas.text(heading(), x, baseline, size, true, Canvas.Anchor.START, theme.colours().text(), theme.colours().background());
         double top = y + type.lineHeight(size) + 0.3 * em;
-        List<Entry> rest = statusEntries;
         if (symbols != null) {
             paintCircles(canvas, x, top);
-            top += 2 * symbols.maxRadiusU() + 0.6 * em;
         } else if (unclassed()) {
             paintGradient(canvas, x, top, Math.min(widthU, 30 * em));
-            top += 1.1 * em + 1.6 * em;
         } else if (histogram) {
             HistogramLegend.paint(canvas, model, theme, x, top, Math.min(widthU, 40 * em), em);
-            top += HistogramLegend.height(em);
-        } else {
-            rest = concat(classEntries, statusEntries);
         }
-        paintGrid(canvas, rest, x, top, widthU);
+        paintGrid(canvas, gridEntries(), x, top + keyHeight(), widthU);
     }
 
     // ----- entries in a grid, filled column by column -----

@@ -6,6 +6,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -67,7 +68,11 @@ final class SiteBuild {
         List<String> ids = atlas.maps().stream().map(MapModel::id).toList();
         List<MapFiles> files = SafePaths.distinctFileSafeIds(ids).stream().map(MapFiles::of).toList();
         byte[] themeCss = ThemeStyles.find(atlas.projectDir(), atlas.project().site().theme());
-        String siteHash = siteHash(renderer, themeCss);
+        // templates and assets read once: the hash and the copied assets come from the same bytes
+        Map<String, byte[]> sources = new LinkedHashMap<>();
+        Stream.concat(PageRenderer.TEMPLATE_NAMES.stream(), PageRenderer.ASSET_NAMES.stream())
+                .forEach(name -> sources.put(name, renderer.source(name)));
+        String siteHash = siteHash(sources, themeCss);
         SiteView site = SiteViews.site(atlas.project().site());
         progress.step(Stage.PREPARE, 1, 1);
 
@@ -105,7 +110,7 @@ final class SiteBuild {
                 put("changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files))), pagesHash);
             }
             for (String asset : PageRenderer.ASSET_NAMES) {
-                put(asset, renderer.source(asset), siteHash);
+                put(asset, sources.get(asset), siteHash);
             }
             put("assets/theme.css", themeCss, siteHash);
             progress.step(Stage.PAGES, 1, 1);
@@ -215,10 +220,9 @@ final class SiteBuild {
         kept++;
     }
 
-    private String siteHash(PageRenderer renderer, byte[] themeCss) {
+    private String siteHash(Map<String, byte[]> sources, byte[] themeCss) {
         Sha256 sha = new Sha256().add(atlas.project().site().toString());
-        Stream.concat(PageRenderer.TEMPLATE_NAMES.stream(), PageRenderer.ASSET_NAMES.stream())
-                .forEach(name -> sha.add(name).add(renderer.source(name)));
+        sources.forEach((name, bytes) -> sha.add(name).add(bytes));
         return sha.add(themeCss).hex();
     }
 
