@@ -70,6 +70,11 @@ final class ProjectChecks {
                     "The default, 1e-4, allows 0.01 % between a region's drawn and true area.");
         }
         oneOf("/checks/missing-figures", checks.missingFigures(), List.of("warning", "error"));
+        if (!(checks.minMatchedPercent() >= 0 && checks.minMatchedPercent() <= 100)) {
+            error("project-bad-value", "/checks/min-matched-percent",
+                    "'min-matched-percent' must be a number from 0 to 100.",
+                    "The default, 95, stops a build when more than 5 % of a map's regions find no figure; 0 turns the check off.");
+        }
     }
 
     private void checkMap(String at, MapSpec map, Set<String> ids) {

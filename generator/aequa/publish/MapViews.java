@@ -11,6 +11,7 @@ import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
 import aequa.classes.ClassMethod;
 import aequa.classes.Classification;
+import aequa.classes.FigureText;
 import aequa.pages.FiguresView;
 import aequa.pages.IndexView;
 import aequa.pages.MapPageView;
@@ -37,7 +38,7 @@ final class MapViews {
                 new MapPageView.Download("Map as picture, double resolution (PNG)", fileName(files.pngDouble()), "image/png"),
                 new MapPageView.Download("Figures shown (CSV)", fileName(files.csv()), "text/csv"));
         return new MapPageView(files.fileId(), map.spec().title(), map.spec().unit(), map.spec().asOf(), caption(map),
-                summary(map), webSvg, map.spec().notes(), map.spec().source(), map.notices(), legend(map), downloads,
+                summary(map), webSvg, map.spec().notes(), map.spec().source(), legend(map), downloads,
                 fileName(files.figures()));
     }
 
@@ -49,11 +50,11 @@ final class MapViews {
                 RegionValue v = p < region.values().size() ? region.values().get(p) : RegionValue.noData();
                 boolean reported = v.status() == FigureStatus.REPORTED;
                 cells.add(new FiguresView.Cell(FiguresCsv.statusText(v), reported ? NumberText.of(v.value()) : "",
-                        reported ? NumberText.of(v.normalisedValue()) : "",
+                        reported ? figure(map, v.normalisedValue()) : "",
                         v.classIndex() < 0 ? "" : Integer.toString(v.classIndex() + 1), v.unreliable(),
                         reported && Double.isFinite(v.marginOfError()) ? "\u00b1" + NumberText.of(v.marginOfError()) : ""));
             }
-            rows.add(new FiguresView.Row(region.key(), region.name(), NumberText.of(region.geodesicAreaKm2()), cells));
+            rows.add(new FiguresView.Row(region.key(), region.name(), areaText(region.geodesicAreaKm2()), cells));
         }
         return new FiguresView(files.fileId(), map.spec().title(), map.spec().unit(), map.periods(), rows,
                 fileName(files.page()), fileName(files.csv()), rows.stream().flatMap(r -> r.cells().stream()).anyMatch(c -> !c.margin().isEmpty()));
@@ -118,8 +119,8 @@ final class MapViews {
             MapRegion low = reported.get(0);
             MapRegion high = reported.get(reported.size() - 1);
             text.append(" Highest: ").append(high.name()).append(" (")
-                    .append(NumberText.of(high.values().get(latest).normalisedValue())).append("); lowest: ")
-                    .append(low.name()).append(" (").append(NumberText.of(low.values().get(latest).normalisedValue()))
+                    .append(figure(map, high.values().get(latest).normalisedValue())).append("); lowest: ")
+                    .append(low.name()).append(" (").append(figure(map, low.values().get(latest).normalisedValue()))
                     .append(").");
         }
         int without = map.regions().size() - reported.size();
@@ -130,13 +131,32 @@ final class MapViews {
         return text.toString();
     }
 
+    /**
+     * A region's area for the figures table: whole km² from 100 km² up, else two significant figures
+     * (boundary files are rarely accurate to better than a few hundredths of a region's area; report.json
+     * keeps the full figure).
+     */
+    static String areaText(double areaKm2) {
+        if (areaKm2 >= 100 || !(areaKm2 > 0)) {
+            return FigureText.format(areaKm2, 0);
+        }
+        int decimals = Math.max(0, 1 - (int) Math.floor(Math.log10(areaKm2)));
+        return FigureText.format(areaKm2, decimals);
+    }
+
+    /** A mapped figure as readers see it everywhere (see {@link FigureText}). */
+    private static String figure(MapModel map, double value) {
+        return FigureText.format(value, FigureText.valueDecimals(map.classification().limits()));
+    }
+
     static List<MapPageView.LegendRow> legend(MapModel map) {
         Classification classes = map.classification();
         List<MapPageView.LegendRow> rows = new ArrayList<>();
         int fills = map.ramp().fills().size();
+        int decimals = FigureText.limitDecimals(classes.limits());
         for (int i = 0; i < classes.classCount() && fills > 0; i++) {
-            String from = NumberText.of(classes.limits().get(i));
-            String to = NumberText.of(classes.limits().get(i + 1));
+            String from = FigureText.format(classes.limits().get(i), decimals);
+            String to = FigureText.format(classes.limits().get(i + 1), decimals);
             boolean last = i == classes.classCount() - 1;
             String range = from + (last ? " to " : " to under ") + to;
             int fillIndex = Math.min(i, fills - 1);

@@ -53,7 +53,7 @@ final class SiteViews {
                     MapViews.percent(map.areaAudit().maxRelativeError()), map.areaAudit().worstKey(),
                     MapViews.percent(map.areaAudit().tolerance()), map.areaAudit().passed(),
                     methodName(map.classification().method()), limits, map.classification().counts(),
-                    normalisation(map.spec()), map.spec().source(), map.spec().asOf(), files.get(i).page()));
+                    normalisation(map.spec()), map.spec().source(), map.spec().asOf(), map.notices(), files.get(i).page()));
         }
         return new MethodView(sections);
     }

@@ -1,0 +1,32 @@
+package aequa.publish;
+
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.Map;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The checks' findings about a map (here the fixture's "One region has no figure.") are for the author: the
+ * method page lists them, the map's own page does not; the author's notes stay on the map page.
+ */
+class CheckNotesPlacementTest {
+
+    @Test
+    void findingsGoToTheMethodPageNotTheMapPage(@TempDir Path tmp) throws IOException {
+        Path out = tmp.resolve("site");
+        SitePublisher.publish(SiteFixtures.atlas(tmp.resolve("project"), SiteFixtures.Texts.plain(), 1, 12),
+                new FakeArtwork(), out, PublishOptions.defaults());
+        Map<String, byte[]> site = PublishTestSupport.files(out);
+        String mapPage = new String(site.get("maps/map-a/index.html"), StandardCharsets.UTF_8);
+        String method = new String(site.get("method.html"), StandardCharsets.UTF_8);
+        assertFalse(mapPage.contains("One region has no figure."), mapPage);
+        assertTrue(mapPage.contains("Figures are invented."), "the author's notes stay with the map");
+        assertTrue(method.contains("<li>One region has no figure.</li>"), method);
+    }
+}
