@@ -27,7 +27,7 @@ import aequa.project.ClassesSpec;
  *   <li>When fewer classes than asked for are made (all values equal, fewer distinct values than classes,
  *       ties that make quantile breaks coincide) a NOTE {@code classes-fewer-than-requested} says why.</li>
  *   <li>The limits of quantile, equal-interval and natural-breaks classes are rounded by the rules of
- *       {@link ReadableBreaks}: one step for the whole map, a hundredth of the range or finer, and values
+ *       {@link ReadableBreaks}: one step for the whole map, a thirtieth of the range or finer, and values
  *       classed by the rounded limits. Manual breaks are used as given; diverging
  *       limits are exact multiples of a rounded step from the midpoint (see {@link CentredBreaks}).</li>
  *   <li>Deterministic: the result depends only on the multiset of values, not their order.</li>

@@ -104,9 +104,9 @@ final class MapViews {
                         .thenComparing(MapRegion::key))
                 .collect(Collectors.toList());
         StringBuilder text = new StringBuilder(String.format(Locale.ROOT, "Map of %d regions", map.regions().size()));
-        if (!map.spec().unit().isEmpty()) {
-            text.append(" coloured by ").append(map.spec().unit());
-        }
+        boolean circles = "circles".equals(map.spec().display());
+        String measure = map.spec().unit().isEmpty() ? "the figure" : "the figure (" + map.spec().unit() + ")";
+        text.append(circles ? "; the area of each circle shows " : "; the colour of each region shows ").append(measure);
         if (map.classification().method() != ClassMethod.UNCLASSED) {
             text.append(" in ").append(map.classification().classCount()).append(" classes");
         }

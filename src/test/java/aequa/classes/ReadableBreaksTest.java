@@ -11,13 +11,13 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The rounding rules of {@link ReadableBreaks}: one step for the whole map (a power of ten, at most a
- * hundredth of the range); failing that, the fewest figures (at least 2) that keep every value in its class.
+ * thirtieth of the range); failing that, the fewest figures (at least 2) that keep every value in its class.
  */
 class ReadableBreaksTest {
 
     /**
      * The step rule's promises on seeded random data of many magnitudes: every limit is a whole multiple of
-     * one power of ten no larger than a hundredth of the range (so every limit of the map has the same
+     * one power of ten no larger than a thirtieth of the range (so every limit of the map has the same
      * decimals), each inner break moved by at most half a step, the limits enclose every value, no class empty.
      */
     @Test
@@ -34,7 +34,7 @@ class ReadableBreaksTest {
             double[] limits = ReadableBreaks.onStep(sorted, raw).orElseThrow(() -> new AssertionError(Arrays.toString(sorted)));
             double range = sorted[39] - sorted[0];
             java.math.BigDecimal step = ReadableBreaks.stepFor(range);
-            assertTrue(step.doubleValue() <= range / 100 && step.doubleValue() * 10 > range / 100, "step " + step);
+            assertTrue(step.doubleValue() <= range / 30 && step.doubleValue() * 10 > range / 30, "step " + step);
             java.math.BigDecimal used = null;
             for (int d = 0; d <= ReadableBreaks.STEP_REFINEMENTS && used == null; d++) {
                 java.math.BigDecimal candidate = step.movePointLeft(d);
@@ -53,8 +53,8 @@ class ReadableBreaksTest {
 
     @Test
     void tightlyPackedValuesBelowAnOutlierGetAFinerStepOrThePerBreakRule() {
-        // four values 0.0001 apart and one at 1000: the step starts at 1 (a hundredth of the range, 9.9,
-        // rounded down to a power of ten) and three refinements reach 0.001, still too coarse to keep them apart
+        // four values 0.0001 apart and one at 1000: the step starts at 10 (a thirtieth of the range, 33,
+        // rounded down to a power of ten) and three refinements reach 0.01, still too coarse to keep them apart
         double[] sorted = {10.0001, 10.0002, 10.0003, 10.0004, 1000};
         double[] raw = {10.00015, 10.00025, 10.00035, 505};
         assertTrue(ReadableBreaks.onStep(sorted, raw).isEmpty());

