@@ -11,7 +11,8 @@ import java.util.Locale;
  * How a map's figures are written for readers, one policy for the legend, tooltips, tables, the text
  * alternative and the print files: class limits with the fewest decimals that write every limit of the map
  * exactly (limits are already rounded for readers, {@link ReadableBreaks}), the same count for all of them;
- * figures with one decimal more, so a reader can place a figure within its class. Thousands are grouped
+ * figures with one decimal more, so a reader can place a figure within its class, and no trailing zeros (a
+ * count stays "75", not "75.0"; {@link #figure}). Thousands are grouped
  * with a comma, the decimal mark is a point and negatives take a true minus sign, whatever the machine's
  * locale. Downloads (CSV, report.json) keep full precision.
  */
@@ -38,6 +39,16 @@ public final class FigureText {
     /** The decimals of a map's figures: one more than its limits. */
     public static int valueDecimals(List<Double> limits) {
         return Math.min(MAX_DECIMALS, limitDecimals(limits) + 1);
+    }
+
+    /** A mapped figure: rounded to {@link #valueDecimals} of the map's limits, trailing zeros dropped. */
+    public static String figure(double value, List<Double> limits) {
+        if (!Double.isFinite(value)) {
+            return format(value, 0);
+        }
+        int decimals = valueDecimals(limits);
+        int exact = Math.max(0, BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_EVEN).stripTrailingZeros().scale());
+        return format(value, Math.min(decimals, exact));
     }
 
     /** {@code value} with exactly {@code decimals} decimals, e.g. {@code 12,345.6}; NaN and infinities as "–". */

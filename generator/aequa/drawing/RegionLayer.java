@@ -101,7 +101,7 @@ final class RegionLayer {
             return statusName(value).replace('-', ' ');
         }
         String unit = model.spec().unit();
-        String figure = Numbers.format(value.normalisedValue(), FigureText.valueDecimals(model.classification().limits()));
+        String figure = FigureText.figure(value.normalisedValue(), model.classification().limits());
         String text = unit.isBlank() ? figure : figure + " " + unit;
         return value.unreliable() ? text + " (unreliable)" : text;
     }

@@ -38,7 +38,7 @@ final class MapViews {
                 new MapPageView.Download("Map as picture, double resolution (PNG)", fileName(files.pngDouble()), "image/png"),
                 new MapPageView.Download("Figures shown (CSV)", fileName(files.csv()), "text/csv"));
         return new MapPageView(files.fileId(), map.spec().title(), map.spec().unit(), map.spec().asOf(), caption(map),
-                summary(map), webSvg, map.spec().notes(), map.spec().source(), legend(map), downloads,
+                summary(map), webSvg, map.spec().notes(), map.spec().source(), circles(map) ? List.of() : legend(map), circleKey(map), downloads,
                 fileName(files.figures()));
     }
 
@@ -104,7 +104,7 @@ final class MapViews {
                         .thenComparing(MapRegion::key))
                 .collect(Collectors.toList());
         StringBuilder text = new StringBuilder(String.format(Locale.ROOT, "Map of %d regions", map.regions().size()));
-        boolean circles = "circles".equals(map.spec().display());
+        boolean circles = circles(map);
         String measure = map.spec().unit().isEmpty() ? "the figure" : "the figure (" + map.spec().unit() + ")";
         text.append(circles ? "; the area of each circle shows " : "; the colour of each region shows ").append(measure);
         if (map.classification().method() != ClassMethod.UNCLASSED) {
@@ -146,7 +146,38 @@ final class MapViews {
 
     /** A mapped figure as readers see it everywhere (see {@link FigureText}). */
     private static String figure(MapModel map, double value) {
-        return FigureText.format(value, FigureText.valueDecimals(map.classification().limits()));
+        return FigureText.figure(value, map.classification().limits());
+    }
+
+    private static boolean circles(MapModel map) {
+        return "circles".equals(map.spec().display());
+    }
+
+    /** What the circles of a proportional-symbol map show, and what the largest stands for; empty otherwise. */
+    static String circleKey(MapModel map) {
+        if (!circles(map)) {
+            return "";
+        }
+        MapRegion largest = null;
+        double largestValue = Double.NEGATIVE_INFINITY;
+        int latest = map.periods().size() - 1;
+        for (MapRegion region : map.regions()) {
+            for (RegionValue v : region.values()) {
+                if (v.status() == FigureStatus.REPORTED && v.normalisedValue() > largestValue) {
+                    largest = region;
+                    largestValue = v.normalisedValue();
+                }
+            }
+        }
+        String unit = map.spec().unit().isEmpty() ? "" : " " + map.spec().unit();
+        String sentence = "The area of each circle is proportional to the figure"
+                + (unit.isEmpty() ? "" : " (" + unit.strip() + ")") + ".";
+        if (largest != null) {
+            sentence += " The largest circle" + (latest > 0 ? " of all periods" : "") + " stands for "
+                    + figure(map, largestValue) + unit
+                    + ", in " + largest.name() + ".";
+        }
+        return sentence;
     }
 
     static List<MapPageView.LegendRow> legend(MapModel map) {

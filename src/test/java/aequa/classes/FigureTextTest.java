@@ -26,5 +26,10 @@ class FigureTextTest {
         assertEquals(0, FigureText.limitDecimals(List.of(0.0, 20.0, 40.0, 100.0)));
         assertEquals(1, FigureText.valueDecimals(List.of(0.0, 20.0, 40.0, 100.0)));
         assertEquals(6, FigureText.limitDecimals(List.of(0.1234567)), "capped");
+        // figures: one decimal more than the limits, no trailing zeros
+        assertEquals("43.91", FigureText.figure(43.9054, limits));
+        assertEquals("75", FigureText.figure(75, limits));
+        assertEquals("12.5", FigureText.figure(12.5, limits));
+        assertEquals("1,000", FigureText.figure(999.996, limits));
     }
 }

@@ -6,7 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Map;
+
+import aequa.atlas.MapModel;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -43,5 +46,20 @@ class ReaderWordingTest {
         assertTrue(mapPage.contains(">Downloads</h2>"), mapPage);
         assertTrue(mapPage.contains("the colour of each region shows the figure (clinics per 1,000 people)"), mapPage);
         assertFalse(mapPage.contains("coloured by per"), mapPage);
+    }
+
+    /** A circle map's key speaks of circle areas, never of colours, and names what the largest circle stands for. */
+    @Test
+    void circleMapsHaveACircleKeyNotAColourKey(@TempDir Path tmp) throws IOException {
+        Path out = tmp.resolve("site");
+        MapModel circles = SiteFixtures.map("map-a", SiteFixtures.Texts.plain(), 12, 0.0, "circles");
+        SitePublisher.publish(SiteFixtures.atlas(tmp.resolve("project"), SiteFixtures.Texts.plain(), List.of(circles)),
+                new FakeArtwork(), out, PublishOptions.defaults());
+        String mapPage = new String(PublishTestSupport.files(out).get("maps/map-a/index.html"), StandardCharsets.UTF_8);
+        assertFalse(mapPage.contains("Colour key"), mapPage);
+        assertFalse(mapPage.contains("key-swatch"), mapPage);
+        // the fixture's largest figure is 110 (region 11: 10 x 11), the unit "clinics per 1,000 people"
+        assertTrue(mapPage.contains("The largest circle stands for 110 clinics per 1,000 people, in Region 11."), mapPage);
+        assertTrue(mapPage.contains("the area of each circle shows the figure"), mapPage);
     }
 }
