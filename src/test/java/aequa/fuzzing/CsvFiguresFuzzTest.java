@@ -1,9 +1,7 @@
 package aequa.fuzzing;
 
 import java.nio.file.Path;
-import java.util.concurrent.TimeUnit;
 
-import org.junit.jupiter.api.Timeout;
 
 import com.code_intelligence.jazzer.junit.FuzzTest;
 
@@ -23,14 +21,15 @@ class CsvFiguresFuzzTest {
     private static final FigureSourceSpec LONG = new FigureSourceSpec("figures.csv", null, "code", "long", "indicator",
             "period", "value", null, ",", ".", null, null, null, "relaxed");
 
-    @Timeout(value = FuzzLimits.SECONDS_PER_INPUT, unit = TimeUnit.SECONDS)
     @FuzzTest(maxDuration = FuzzLimits.CAMPAIGN)
     void figures(byte[] input) {
-        FuzzFolder.write(FOLDER, WIDE.file(), input);
-        for (FigureSourceSpec spec : new FigureSourceSpec[] {WIDE, LONG}) {
-            Findings findings = new Findings();
-            FigureReaders.read(FOLDER, spec, findings);
-            FuzzFolder.assertClear(findings, spec.file());
-        }
+        FuzzFolder.withinSeconds(FuzzLimits.SECONDS_PER_INPUT, () -> {
+            FuzzFolder.write(FOLDER, WIDE.file(), input);
+            for (FigureSourceSpec spec : new FigureSourceSpec[] {WIDE, LONG}) {
+                Findings findings = new Findings();
+                FigureReaders.read(FOLDER, spec, findings);
+                FuzzFolder.assertClear(findings, spec.file());
+            }
+        });
     }
 }

@@ -4,6 +4,12 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.TimeoutException;
 
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -18,6 +24,13 @@ import aequa.findings.Findings;
 final class FuzzFolder {
 
     private static final Path ROOT = create();
+
+    /** Runs each input on a thread of its own, so a hang is noticed; daemon threads, so a hung one cannot keep the JVM. */
+    private static final ExecutorService RUNNER = Executors.newCachedThreadPool(r -> {
+        Thread t = new Thread(r, "aequa-fuzz-input");
+        t.setDaemon(true);
+        return t;
+    });
 
     private FuzzFolder() {
     }
@@ -39,6 +52,33 @@ final class FuzzFolder {
             Files.write(file, bytes);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
+        }
+    }
+
+    /**
+     * Runs {@code work} and fails (a finding for the fuzzer) when it takes longer than {@code seconds}: the
+     * "bounded time per input" of the fuzz property. Exceptions and errors of {@code work} are rethrown as
+     * they are. (JUnit's {@code @Timeout} is no substitute: in a fuzzing run it bounds the whole campaign.)
+     */
+    static void withinSeconds(long seconds, Runnable work) {
+        Future<?> running = RUNNER.submit(work);
+        try {
+            running.get(seconds, TimeUnit.SECONDS);
+        } catch (TimeoutException hang) {
+            running.cancel(true);
+            throw new AssertionError("the input took longer than " + seconds + " s");
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof RuntimeException runtime) {
+                throw runtime;
+            }
+            if (cause instanceof Error error) {
+                throw error;
+            }
+            throw new IllegalStateException(cause);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException(e);
         }
     }
 

@@ -4,8 +4,8 @@ package aequa.fuzzing;
 final class FuzzLimits {
 
     /**
-     * The longest one input may take (JUnit's timeout, which Jazzer also passes to libFuzzer as -timeout):
-     * hundreds of times what a valid file of the same size takes, so only a hang trips it.
+     * The longest one input may take ({@link FuzzFolder#withinSeconds}): hundreds of times what a valid
+     * file of the same size takes, so only a hang trips it.
      */
     static final long SECONDS_PER_INPUT = 10;
 

@@ -1,9 +1,7 @@
 package aequa.fuzzing;
 
 import java.nio.file.Path;
-import java.util.concurrent.TimeUnit;
 
-import org.junit.jupiter.api.Timeout;
 
 import com.code_intelligence.jazzer.junit.FuzzTest;
 
@@ -21,12 +19,13 @@ class GeoPackageFuzzTest {
     private static final Path FOLDER = FuzzFolder.of("geopackage");
     private static final RegionSourceSpec SPEC = new RegionSourceSpec("regions.gpkg", "code", "label", null);
 
-    @Timeout(value = FuzzLimits.SECONDS_PER_INPUT, unit = TimeUnit.SECONDS)
     @FuzzTest(maxDuration = FuzzLimits.CAMPAIGN)
     void regions(byte[] input) {
-        FuzzFolder.write(FOLDER, SPEC.file(), input);
-        Findings findings = new Findings();
-        RegionReaders.read(FOLDER, SPEC, SourceCrs::toLonLat, findings);
-        FuzzFolder.assertClear(findings, SPEC.file());
+        FuzzFolder.withinSeconds(FuzzLimits.SECONDS_PER_INPUT, () -> {
+            FuzzFolder.write(FOLDER, SPEC.file(), input);
+            Findings findings = new Findings();
+            RegionReaders.read(FOLDER, SPEC, SourceCrs::toLonLat, findings);
+            FuzzFolder.assertClear(findings, SPEC.file());
+        });
     }
 }

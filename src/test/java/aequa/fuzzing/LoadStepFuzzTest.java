@@ -6,10 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.Arrays;
-import java.util.concurrent.TimeUnit;
 
 import org.junit.jupiter.api.BeforeAll;
-import org.junit.jupiter.api.Timeout;
 
 import com.code_intelligence.jazzer.junit.FuzzTest;
 
@@ -65,18 +63,19 @@ class LoadStepFuzzTest {
         assertFalse(findings.hasErrors(), findings.list().toString());
     }
 
-    @Timeout(value = FuzzLimits.SECONDS_PER_LOAD, unit = TimeUnit.SECONDS)
     @FuzzTest(maxDuration = FuzzLimits.CAMPAIGN)
     void load(byte[] input) {
-        int nul = 0;
-        while (nul < input.length && input[nul] != 0) {
-            nul++;
-        }
-        FuzzFolder.write(FOLDER, "regions/r.geojson", Arrays.copyOfRange(input, 0, nul));
-        FuzzFolder.write(FOLDER, "figures/f.csv", Arrays.copyOfRange(input, Math.min(nul + 1, input.length), input.length));
-        Findings findings = new Findings();
-        LoadedProject project = ProjectLoader.load(FOLDER, findings).orElseThrow(() -> new AssertionError(findings.list()));
-        AtlasLoader.load(project, LoadOptions.defaults(), findings);
-        FuzzFolder.assertClear(findings);
+        FuzzFolder.withinSeconds(FuzzLimits.SECONDS_PER_LOAD, () -> {
+            int nul = 0;
+            while (nul < input.length && input[nul] != 0) {
+                nul++;
+            }
+            FuzzFolder.write(FOLDER, "regions/r.geojson", Arrays.copyOfRange(input, 0, nul));
+            FuzzFolder.write(FOLDER, "figures/f.csv", Arrays.copyOfRange(input, Math.min(nul + 1, input.length), input.length));
+            Findings findings = new Findings();
+            LoadedProject project = ProjectLoader.load(FOLDER, findings).orElseThrow(() -> new AssertionError(findings.list()));
+            AtlasLoader.load(project, LoadOptions.defaults(), findings);
+            FuzzFolder.assertClear(findings);
+        });
     }
 }

@@ -2,9 +2,7 @@ package aequa.fuzzing;
 
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.util.concurrent.TimeUnit;
 
-import org.junit.jupiter.api.Timeout;
 
 import com.code_intelligence.jazzer.junit.FuzzTest;
 
@@ -24,12 +22,13 @@ class ProjectFileFuzzTest {
         FuzzFolder.write(FOLDER, "figures/f.csv", "code,rate\nA,1.5\nB,2.5\n".getBytes(StandardCharsets.UTF_8));
     }
 
-    @Timeout(value = FuzzLimits.SECONDS_PER_INPUT, unit = TimeUnit.SECONDS)
     @FuzzTest(maxDuration = FuzzLimits.CAMPAIGN)
     void projectFile(byte[] input) {
-        FuzzFolder.write(FOLDER, "aequa.yaml", input);
-        Findings findings = new Findings();
-        ProjectLoader.load(FOLDER, findings);
-        FuzzFolder.assertClear(findings);
+        FuzzFolder.withinSeconds(FuzzLimits.SECONDS_PER_INPUT, () -> {
+            FuzzFolder.write(FOLDER, "aequa.yaml", input);
+            Findings findings = new Findings();
+            ProjectLoader.load(FOLDER, findings);
+            FuzzFolder.assertClear(findings);
+        });
     }
 }
