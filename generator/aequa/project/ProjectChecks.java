@@ -48,7 +48,7 @@ final class ProjectChecks {
     }
 
     private void checkRegionSource(String at, RegionSourceSpec source) {
-        checkFile(at, source.file(), List.of(".geojson", ".json", ".gpkg"));
+        checkFile(at, source.file(), List.of(".geojson", ".json", ".topojson", ".gpkg", ".shp", ".zip"));
         if (source.key().isBlank()) {
             error("project-missing-key", at + "/key", "The region source has an empty 'key'.",
                     "Name the property that holds each region's code, or '" + RegionSourceSpec.FEATURE_ID + "' for the feature id.");

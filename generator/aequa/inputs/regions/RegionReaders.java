@@ -14,7 +14,8 @@ import aequa.project.RegionSourceSpec;
 
 /**
  * Front door of the region readers: picks the reader from the file's extension ({@code .geojson} or
- * {@code .json}: GeoJSON; {@code .gpkg}: GeoPackage) and returns the regions in file order. Problems in the
+ * {@code .json}: GeoJSON; {@code .topojson}, or {@code .json} with an {@code object} set: TopoJSON;
+ * {@code .gpkg}: GeoPackage; {@code .shp} or {@code .zip}: Shapefile) and returns the regions in file order. Problems in the
  * file are added to {@code findings}; this never throws for bad data. The regions are as read: rings are
  * closed but otherwise unchecked; pass them to {@code aequa.ellipsoid.RegionValidator} next.
  */
@@ -29,7 +30,7 @@ public final class RegionReaders {
     }
 
     /**
-     * Reads a source, transforming GeoPackage layers in another CRS with {@code crs}
+     * Reads a source, transforming GeoPackage layers and Shapefiles in another CRS with {@code crs}
      * (pass {@code aequa.projection.SourceCrs::toLonLat}).
      */
     public static List<Region> read(Path projectDir, RegionSourceSpec spec, SourceCrsResolver crs, Findings findings) {
@@ -44,6 +45,15 @@ public final class RegionReaders {
         if (name.endsWith(".gpkg")) {
             return new GeoPackageRegionReader(file, spec, crs, findings).read(path);
         }
+        if (name.endsWith(".shp") || name.endsWith(".zip")) {
+            try {
+                return new ShapefileRegionReader(file, spec, crs, findings).read(path);
+            } catch (IOException e) {
+                findings.add(Finding.error("file-unreadable", file, "", "The file could not be read: " + e.getMessage() + ".",
+                        "Check that the file is readable."));
+                return List.of();
+            }
+        }
         if (name.endsWith(".geojson") || name.endsWith(".json")) {
             try (InputStream in = new BufferedInputStream(Files.newInputStream(path), 1 << 16)) {
                 return new GeoJsonRegionReader(file, spec, findings).read(in);
@@ -54,8 +64,9 @@ public final class RegionReaders {
             }
         }
         findings.add(Finding.error("file-type-unknown", file, "",
-                "aequa reads region geometry from GeoJSON (.geojson, .json) or GeoPackage (.gpkg) files.",
-                "Convert the file to GeoJSON or GeoPackage."));
+                "aequa reads region geometry from GeoJSON (.geojson, .json), TopoJSON (.topojson, or .json with an 'object'),"
+                        + " GeoPackage (.gpkg) or Shapefile (.shp, or a .zip holding one) files.",
+                "Convert the file to one of these formats."));
         return List.of();
     }
 }
