@@ -3,10 +3,12 @@ package aequa.inputs.regions;
 import java.io.BufferedInputStream;
 import java.io.IOException;
 import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import java.util.regex.Pattern;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
@@ -21,7 +23,24 @@ import aequa.project.RegionSourceSpec;
  */
 public final class RegionReaders {
 
+    private static final Pattern TOPOLOGY_TYPE = Pattern.compile("\"type\"\\s*:\\s*\"Topology\"");
+
     private RegionReaders() {
+    }
+
+    /**
+     * The regions of a source, and whether their borders are shared by construction: a clean TopoJSON topology
+     * draws each border once, as one arc walked by both neighbours, so they cannot overlap or leave a gap.
+     */
+    public record RegionSource(List<Region> regions, boolean bordersShared) {
+
+        public RegionSource {
+            regions = List.copyOf(regions);
+        }
+
+        static RegionSource of(List<Region> regions) {
+            return new RegionSource(regions, false);
+        }
     }
 
     /** Reads a source whose layers are all in WGS 84 lon/lat; other CRSs are reported as unsupported. */
@@ -34,39 +53,66 @@ public final class RegionReaders {
      * (pass {@code aequa.projection.SourceCrs::toLonLat}).
      */
     public static List<Region> read(Path projectDir, RegionSourceSpec spec, SourceCrsResolver crs, Findings findings) {
+        return readSource(projectDir, spec, crs, findings).regions();
+    }
+
+    /** As {@link #read(Path, RegionSourceSpec, SourceCrsResolver, Findings)}, saying whether borders are shared. */
+    public static RegionSource readSource(Path projectDir, RegionSourceSpec spec, SourceCrsResolver crs, Findings findings) {
         Path path = projectDir.resolve(spec.file());
         String file = spec.file();
         if (!Files.isRegularFile(path)) {
             findings.add(Finding.error("file-missing", file, "", "The geometry file does not exist.",
                     "Check the file name in the project file; paths are relative to the project folder."));
-            return List.of();
+            return RegionSource.of(List.of());
         }
         String name = path.getFileName().toString().toLowerCase(Locale.ROOT);
         if (name.endsWith(".gpkg")) {
-            return new GeoPackageRegionReader(file, spec, crs, findings).read(path);
+            return RegionSource.of(new GeoPackageRegionReader(file, spec, crs, findings).read(path));
         }
         if (name.endsWith(".shp") || name.endsWith(".zip")) {
             try {
-                return new ShapefileRegionReader(file, spec, crs, findings).read(path);
+                return RegionSource.of(new ShapefileRegionReader(file, spec, crs, findings).read(path));
             } catch (IOException e) {
-                findings.add(Finding.error("file-unreadable", file, "", "The file could not be read: " + e.getMessage() + ".",
-                        "Check that the file is readable."));
-                return List.of();
+                return unreadable(file, e, findings);
+            }
+        }
+        if (name.endsWith(".topojson") || name.endsWith(".json") && (!spec.object().isEmpty() || looksLikeTopology(path))) {
+            try (InputStream in = new BufferedInputStream(Files.newInputStream(path), 1 << 16)) {
+                return new TopoJsonRegionReader(file, spec, findings).read(in);
+            } catch (IOException e) {
+                return unreadable(file, e, findings);
             }
         }
         if (name.endsWith(".geojson") || name.endsWith(".json")) {
             try (InputStream in = new BufferedInputStream(Files.newInputStream(path), 1 << 16)) {
-                return new GeoJsonRegionReader(file, spec, findings).read(in);
+                return RegionSource.of(new GeoJsonRegionReader(file, spec, findings).read(in));
             } catch (IOException e) {
-                findings.add(Finding.error("file-unreadable", file, "", "The file could not be read: " + e.getMessage() + ".",
-                        "Check that the file is readable."));
-                return List.of();
+                return unreadable(file, e, findings);
             }
         }
         findings.add(Finding.error("file-type-unknown", file, "",
                 "aequa reads region geometry from GeoJSON (.geojson, .json), TopoJSON (.topojson, or .json with an 'object'),"
                         + " GeoPackage (.gpkg) or Shapefile (.shp, or a .zip holding one) files.",
                 "Convert the file to one of these formats."));
-        return List.of();
+        return RegionSource.of(List.of());
+    }
+
+    private static RegionSource unreadable(String file, IOException e, Findings findings) {
+        findings.add(Finding.error("file-unreadable", file, "", "The file could not be read: " + e.getMessage() + ".",
+                "Check that the file is readable."));
+        return RegionSource.of(List.of());
+    }
+
+    /**
+     * Whether a {@code .json} file's first 4 KiB declare a TopoJSON topology ({@code "type": "Topology"}); false
+     * when it cannot be read, for the GeoJSON reader to report.
+     */
+    private static boolean looksLikeTopology(Path path) {
+        try (InputStream in = Files.newInputStream(path)) {
+            String start = new String(in.readNBytes(4096), StandardCharsets.UTF_8);
+            return TOPOLOGY_TYPE.matcher(start).find();
+        } catch (IOException e) {
+            return false;
+        }
     }
 }
