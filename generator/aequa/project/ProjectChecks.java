@@ -56,7 +56,7 @@ final class ProjectChecks {
     }
 
     private void checkFigureSource(String at, FigureSourceSpec source) {
-        checkFile(at, source.file(), List.of(".csv", ".tsv", ".txt", ".sqlite", ".db", ".gpkg"));
+        checkFile(at, source.file(), List.of(".csv", ".tsv", ".txt", ".xlsx", ".xlsm", ".sqlite", ".db", ".gpkg"));
         oneOf(at + "/layout", source.layout(), List.of("wide", "long"));
         oneOf(at + "/decimal", source.decimal(), List.of(".", ","));
         oneOf(at + "/delimiter", source.delimiter(), List.of("", ",", ";", "\t", "|"));
