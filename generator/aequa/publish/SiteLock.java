@@ -6,6 +6,7 @@ import java.nio.channels.FileChannel;
 import java.nio.channels.FileLock;
 import java.nio.channels.OverlappingFileLockException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.security.SecureRandom;
@@ -81,6 +82,7 @@ public final class SiteLock implements AutoCloseable {
     public static SiteLock acquire(Path outDir, Duration wait) throws IOException {
         Path out = OutputFolder.realPath(outDir);
         Path lockFile = lockFileFor(out);
+        Files.createDirectories(out.getParent());
         long deadline = System.nanoTime() + wait.toNanos();
         while (true) {
             if (HELD_HERE.add(lockFile)) {
