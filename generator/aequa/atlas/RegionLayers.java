@@ -16,6 +16,7 @@ import aequa.inputs.regions.RegionReaders;
 import aequa.project.LoadedProject;
 import aequa.project.RegionSourceSpec;
 import aequa.projection.SourceCrs;
+import aequa.statistics.TextLengths;
 
 /** Reads, checks and measures each geometry source once, however many maps use it. */
 final class RegionLayers {
@@ -35,7 +36,8 @@ final class RegionLayers {
 
     private RegionLayer load(String sourceId) {
         RegionSourceSpec spec = project.file().regions().get(sourceId);
-        List<Region> read = RegionReaders.read(project.dir(), spec, SourceCrs::toLonLat, findings);
+        List<Region> read = TextLengths.withinLimits(
+                RegionReaders.read(project.dir(), spec, SourceCrs::toLonLat, findings), spec.file(), findings);
         List<Region> valid = RegionValidator.validate(read, spec.file(), findings);
         CoverageChecks.report(valid, spec.file(), findings);
         List<Region> densified = new ArrayList<>(valid.size());
