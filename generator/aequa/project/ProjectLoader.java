@@ -48,7 +48,10 @@ public final class ProjectLoader {
             return Optional.empty();
         }
         String yaml;
+        Path dir;
         try {
+            // the real path, so that '.' and links compare with the paths of data files (ProjectChecks)
+            dir = projectDir.toRealPath();
             yaml = Files.readString(file, StandardCharsets.UTF_8);
         } catch (IOException e) {
             findings.add(Finding.error("project-file-unreadable", ProjectFile.FILE_NAME, "",
@@ -73,10 +76,10 @@ public final class ProjectLoader {
             return Optional.empty();
         }
         int before = findings.list().size();
-        new ProjectChecks(projectDir, project, locations, findings).run();
+        new ProjectChecks(dir, project, locations, findings).run();
         boolean broken = findings.list().subList(before, findings.list().size()).stream()
                 .anyMatch(f -> f.severity() == aequa.findings.Severity.ERROR);
-        return broken ? Optional.empty() : Optional.of(new LoadedProject(projectDir, project, locations));
+        return broken ? Optional.empty() : Optional.of(new LoadedProject(dir, project, locations));
     }
 
     private static Finding describe(JsonProcessingException e, YamlLocations locations) {

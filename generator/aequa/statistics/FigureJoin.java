@@ -35,6 +35,8 @@ import aequa.inputs.figures.KeyMatching;
  *       first is kept);</li>
  *   <li>{@code join-not-a-number} (error): a used cell that is neither a number nor a declared marker;</li>
  *   <li>{@code join-out-of-range} (error): a reported value outside the map's declared range;</li>
+ *   <li>{@code join-key-too-long} (error): a row whose key is longer than {@link TextLengths#MAX_KEY_CHARS}
+ *       characters, left out;</li>
  *   <li>{@code join-missing-figure} (warning or error, as {@code checks: missing-figures} says): a region
  *       with no row for the mapped indicator in a period; it is drawn as no data.</li>
  * </ul>
@@ -65,6 +67,7 @@ final class FigureJoin {
         Map<FigureCell, String> relaxedMatches = new LinkedHashMap<>();
         Set<String> relaxedKeysSeen = new HashSet<>();
         Set<Integer> duplicateRowsReported = new HashSet<>();
+        Set<Integer> longKeyRowsReported = new HashSet<>();
         for (FigureRole role : FigureRole.values()) {
             String indicator = role.indicatorIn(settings);
             if (indicator.isEmpty()) {
@@ -79,6 +82,13 @@ final class FigureJoin {
             }
             for (String period : periods) {
                 for (FigureCell cell : table.cells(indicator, period)) {
+                    if (TextLengths.keyTooLong(cell.key())) {
+                        if (longKeyRowsReported.add(cell.row())) {
+                            findings.add(TextLengths.keyTooLongFinding("join-key-too-long", table.file(),
+                                    "row " + cell.row(), cell.key(), "The row is left out."));
+                        }
+                        continue;
+                    }
                     Optional<KeyMatcher.Match> match = matcher.match(cell.key(), table.keyMatching());
                     if (match.isEmpty()) {
                         if (role == FigureRole.VALUE) {
