@@ -1,5 +1,6 @@
 package aequa.project;
 
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashSet;
@@ -26,6 +27,7 @@ final class ProjectChecks {
     private final YamlLocations locations;
     private final Findings findings;
 
+    /** @param projectDir the project folder's real path ({@link Path#toRealPath}) */
     ProjectChecks(Path projectDir, ProjectFile project, YamlLocations locations, Findings findings) {
         this.projectDir = projectDir;
         this.project = project;
@@ -79,6 +81,11 @@ final class ProjectChecks {
                     "The default, 1e-4, allows 0.01 % between a region's drawn and true area.");
         }
         oneOf("/checks/missing-figures", checks.missingFigures(), List.of("warning", "error"));
+        if (!(checks.minMatchedPercent() >= 0 && checks.minMatchedPercent() <= 100)) {
+            error("project-bad-value", "/checks/min-matched-percent",
+                    "'min-matched-percent' must be a number from 0 to 100.",
+                    "The default, 95, stops a build when more than 5 % of a map's regions find no figure; 0 turns the check off.");
+        }
     }
 
     private void checkMap(String at, MapSpec map, Set<String> ids) {
@@ -142,9 +149,12 @@ final class ProjectChecks {
             return;
         }
         Path path = projectDir.resolve(file).normalize();
-        if (!path.startsWith(projectDir.normalize())) {
+        if (!path.startsWith(projectDir)) {
             error("project-file-outside", at + "/file", "'" + file + "' lies outside the project folder.",
                     "Keep data files inside the project folder, so the project can be moved and rebuilt.");
+        } else if (Files.isRegularFile(path) && !realPathInside(path)) {
+            error("project-file-outside", at + "/file", "'" + file + "' is a link that leads outside the project folder.",
+                    "Copy the file into the project folder instead of linking to it; aequa reads no file outside it.");
         } else if (!Files.isRegularFile(path)) {
             error("project-file-not-found", at + "/file", "The file '" + file + "' does not exist.",
                     "Paths are relative to the folder that holds " + ProjectFile.FILE_NAME + ".");
@@ -164,6 +174,15 @@ final class ProjectChecks {
         if (!value.isEmpty() && extensions.stream().noneMatch(lower::endsWith)) {
             error("project-setting-not-applicable", at, "'" + setting + "' names " + what + ", but '" + file + "' is not one.",
                     "Remove '" + setting + "', or use it with a " + String.join(", ", extensions) + " file.");
+        }
+    }
+
+    /** Whether {@code path}, with every link resolved, is still inside the (real) project folder. */
+    private boolean realPathInside(Path path) {
+        try {
+            return path.toRealPath().startsWith(projectDir);
+        } catch (IOException unreadable) {
+            return false;
         }
     }
 

@@ -45,8 +45,8 @@ class SourceVocabularyTest {
                 + "figures:\n  f:\n    file: d.csv\n    key: code\n    sheet: Data\n");
         assertEquals(List.of("project-setting-not-applicable", "project-setting-not-applicable"),
                 findings.stream().map(Finding::code).toList());
-        assertEquals("line 2, column 42", findings.get(0).place());
-        assertEquals("line 7, column 12", findings.get(1).place());
+        assertEquals("line 2, column 34", findings.get(0).place()); // the key itself, where the user wrote it
+        assertEquals("line 7, column 5", findings.get(1).place());
         assertTrue(findings.get(1).hint().contains(".xlsx"), findings.get(1).hint());
     }
 }
