@@ -162,7 +162,7 @@ final class WorkbookFigureReader {
         }
         if (skippedAfterEnd > 0) {
             findings.add(Finding.note("figures-notes-skipped", settings.file(), where + ", row " + endFilled,
-                    "The table ends at row " + endRow + "; " + skippedAfterEnd + " row(s) from there on were read as notes and skipped.",
+                    "The table ends before row " + endRow + "; the " + skippedAfterEnd + " filled row(s) from there on were read as notes and skipped.",
                     "If they are data, remove the blank row above them and fill at least two of their cells"
                             + " (write a missing-value marker, such as .., where a figure is missing)."));
         }

@@ -102,7 +102,7 @@ final class ShapeRings {
         return sum / 2;
     }
 
-    private static DoubleList reversed(DoubleList ring) {
+    static DoubleList reversed(DoubleList ring) {
         int n = ring.size() / 2;
         DoubleList out = new DoubleList(ring.size());
         for (int i = n - 1; i >= 0; i--) {

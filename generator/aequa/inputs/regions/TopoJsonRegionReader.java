@@ -20,8 +20,9 @@ import aequa.project.RegionSourceSpec;
  * Polygon and MultiPolygon geometries (sections 2.2.4 and 2.2.5) or one such geometry. Arcs may be quantised
  * and delta-encoded ({@link TopologyArcs}). The key is a property, or the geometry's {@code id} for
  * {@value RegionSourceSpec#FEATURE_ID}; numbers are keys as written. Coordinates are taken as WGS 84 lon/lat, as
- * the specification's default (section 2.1.1 refers to GeoJSON's). Rings are returned as stored; the validator
- * orients them.
+ * the specification's default (section 2.1.1 refers to GeoJSON's). The specification prescribes no winding
+ * (topologies made from Shapefiles run outer rings clockwise), so rings are wound as RFC 7946 wants here
+ * ({@link RingWinding}) rather than reported one by one by the validator.
  *
  * <p>The whole topology is parsed into a tree (a TopoJSON file is several times smaller than the GeoJSON of the
  * same regions, and arcs are referenced from anywhere, so it cannot be streamed feature by feature).
@@ -127,7 +128,7 @@ final class TopoJsonRegionReader {
                             "Write the topology again with a TopoJSON writer."));
                     return Optional.empty();
                 }
-                polygonRings.add(ring.get());
+                polygonRings.add(polygonRings.isEmpty() ? RingWinding.wound(ring.get(), true) : RingWinding.wound(ring.get(), false));
             }
             rings.add(polygonRings);
         }

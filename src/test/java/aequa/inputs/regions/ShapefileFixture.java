@@ -33,21 +33,21 @@ import com.linuxense.javadbf.DBFWriter;
  * clockwise and holes counter-clockwise, as the description requires. The {@code .dbf} is written by javadbf's
  * {@code DBFWriter}, a general-purpose library, with character fields.
  */
-final class ShapefileFixture {
+public final class ShapefileFixture {
 
     /** The WGS 84 geographic CRS as ESRI writes it in a .prj (ESRI's WKT 1 flavour: D_ datum prefix, no AXIS). */
-    static final String WGS84_PRJ = "GEOGCS[\"GCS_WGS_1984\",DATUM[\"D_WGS_1984\",SPHEROID[\"WGS_1984\",6378137.0,298.257223563]],"
+    public static final String WGS84_PRJ = "GEOGCS[\"GCS_WGS_1984\",DATUM[\"D_WGS_1984\",SPHEROID[\"WGS_1984\",6378137.0,298.257223563]],"
             + "PRIMEM[\"Greenwich\",0.0],UNIT[\"Degree\",0.0174532925199433]]";
 
     /** One record: its attribute values (text, one per field) and its geometry (null for a null shape). */
-    record Feature(List<String> values, Geometry lonLat) {
+    public record Feature(List<String> values, Geometry lonLat) {
     }
 
     private ShapefileFixture() {
     }
 
     /** Writes {@code base}.shp/.shx/.dbf (and .prj, .cpg when not null) in {@code dir}. */
-    static void write(Path dir, String base, List<String> fields, List<Feature> features, String prj, String cpg,
+    public static void write(Path dir, String base, List<String> fields, List<Feature> features, String prj, String cpg,
                       Charset dbfCharset) throws IOException {
         Files.write(dir.resolve(base + ".shp"), shp(features, false));
         Files.write(dir.resolve(base + ".shx"), shp(features, true));
@@ -61,7 +61,7 @@ final class ShapefileFixture {
     }
 
     /** Zips every file of {@code dir} whose name starts with {@code base + "."} into {@code zip}, sorted. */
-    static void zip(Path dir, String base, Path zip) throws IOException {
+    public static void zip(Path dir, String base, Path zip) throws IOException {
         try (ZipOutputStream out = new ZipOutputStream(Files.newOutputStream(zip));
              var files = Files.list(dir)) {
             for (Path file : files.filter(f -> f.getFileName().toString().startsWith(base + ".")).sorted().toList()) {
