@@ -39,4 +39,13 @@ class QuotedContentTest {
         assertFalse(cli.errText().contains("y".repeat(40)), "the header was printed whole");
         assertTrue(cli.errText().contains("\"root:x:0:0:root:/root:/b... ("), cli.errText());
     }
+
+    @Test
+    void aValueThatIsNotANumberIsQuotedShort() throws IOException {
+        Path project = cli.scaffold(tmp.resolve("project"));
+        Path csv = project.resolve("figures/districts.csv");
+        Files.writeString(csv, Files.readString(csv).replace("NW,Ashgrove,12.5", "NW,Ashgrove,\"" + "z".repeat(5000) + "\""));
+        assertEquals(1, cli.run("audit", project.toString()));
+        assertTrue(cli.errText().contains("The value \"" + "z".repeat(24) + "... (5,000 characters)\""), cli.errText());
+    }
 }
