@@ -50,7 +50,11 @@ final class ProjectChecks {
     }
 
     private void checkRegionSource(String at, RegionSourceSpec source) {
-        checkFile(at, source.file(), List.of(".geojson", ".json", ".gpkg"));
+        checkFile(at, source.file(), List.of(".geojson", ".json", ".topojson", ".gpkg", ".shp", ".zip"));
+        onlyFor(at + "/layer", source.layer(), source.file(), List.of(".gpkg", ".zip"), "layer",
+                "a GeoPackage layer, or a Shapefile inside a zip");
+        onlyFor(at + "/object", source.object(), source.file(), List.of(".topojson", ".json"), "object",
+                "the object of a TopoJSON topology");
         if (source.key().isBlank()) {
             error("project-missing-key", at + "/key", "The region source has an empty 'key'.",
                     "Name the property that holds each region's code, or '" + RegionSourceSpec.FEATURE_ID + "' for the feature id.");
@@ -58,7 +62,12 @@ final class ProjectChecks {
     }
 
     private void checkFigureSource(String at, FigureSourceSpec source) {
-        checkFile(at, source.file(), List.of(".csv", ".tsv", ".txt", ".sqlite", ".db", ".gpkg"));
+        checkFile(at, source.file(), List.of(".csv", ".tsv", ".txt", ".xlsx", ".xlsm", ".sqlite", ".db", ".gpkg"));
+        onlyFor(at + "/table", source.table(), source.file(), List.of(".sqlite", ".db", ".gpkg"), "table",
+                "a table or view of a database");
+        onlyFor(at + "/sheet", source.sheet(), source.file(), List.of(".xlsx", ".xlsm"), "sheet", "a sheet of a workbook");
+        onlyFor(at + "/header-row", source.headerRow() == null ? "" : source.headerRow().toString(), source.file(),
+                List.of(".xlsx", ".xlsm"), "header-row", "the header row of a workbook sheet");
         oneOf(at + "/layout", source.layout(), List.of("wide", "long"));
         oneOf(at + "/decimal", source.decimal(), List.of(".", ","));
         oneOf(at + "/delimiter", source.delimiter(), List.of("", ",", ";", "\t", "|"));
@@ -72,6 +81,11 @@ final class ProjectChecks {
                     "The default, 1e-4, allows 0.01 % between a region's drawn and true area.");
         }
         oneOf("/checks/missing-figures", checks.missingFigures(), List.of("warning", "error"));
+        if (!(checks.minMatchedPercent() >= 0 && checks.minMatchedPercent() <= 100)) {
+            error("project-bad-value", "/checks/min-matched-percent",
+                    "'min-matched-percent' must be a number from 0 to 100.",
+                    "The default, 95, stops a build when more than 5 % of a map's regions find no figure; 0 turns the check off.");
+        }
     }
 
     private void checkMap(String at, MapSpec map, Set<String> ids) {
@@ -147,6 +161,19 @@ final class ProjectChecks {
         } else if (extensions.stream().noneMatch(e -> file.toLowerCase(java.util.Locale.ROOT).endsWith(e))) {
             error("project-file-type", at + "/file", "'" + file + "' has an unsupported file type.",
                     "Supported here: " + String.join(", ", extensions) + ".");
+        }
+    }
+
+    /**
+     * One vocabulary for all readers: {@code file}, {@code key}, {@code name}, and the word that picks a part of
+     * the file ({@code layer}, {@code object}, {@code table}, {@code sheet}), each meaningful for some file types
+     * only; set for another type it is a mistake to point out, not a setting to ignore.
+     */
+    private void onlyFor(String at, String value, String file, List<String> extensions, String setting, String what) {
+        String lower = file == null ? "" : file.toLowerCase(java.util.Locale.ROOT);
+        if (!value.isEmpty() && extensions.stream().noneMatch(lower::endsWith)) {
+            error("project-setting-not-applicable", at, "'" + setting + "' names " + what + ", but '" + file + "' is not one.",
+                    "Remove '" + setting + "', or use it with a " + String.join(", ", extensions) + " file.");
         }
     }
 

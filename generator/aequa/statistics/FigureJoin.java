@@ -5,6 +5,7 @@ import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
@@ -23,6 +24,9 @@ import aequa.inputs.figures.KeyMatching;
  * Joins the cells a map uses (its indicator, and the denominator, events and margin indicators when set)
  * to the regions of the geometry, and writes the join report as findings:
  * <ul>
+ *   <li>{@code join-match-low} (error, before the per-key findings): fewer regions than
+ *       {@code checks: min-matched-percent} found a figure; the message counts them and the hint says how many
+ *       unmatched keys would match with leading zeros, case and spaces ignored;</li>
  *   <li>{@code join-indicator-missing} (error): an indicator the map uses is not in the source;</li>
  *   <li>{@code join-key-unmatched} (warning): a key in the statistics matches no region, each listed,
  *       with a hint when it would match under relaxed key matching;</li>
@@ -108,6 +112,9 @@ final class FigureJoin {
                 }
             }
         }
+        if (table.hasIndicator(settings.indicator())) {
+            reportLowMatch(table, settings, matcher, regionKeys, joined, unmatched.keySet(), findings);
+        }
         reportRelaxedMatches(table, relaxedMatches, findings);
         reportUnmatched(table, matcher, unmatched, findings);
         if (table.hasIndicator(settings.indicator())) {
@@ -142,6 +149,31 @@ final class FigureJoin {
                 "Remove or merge the duplicate rows" + (table.keyMatching() == KeyMatching.RELAXED
                         ? "; with relaxed key matching, keys differing only in case, spaces or leading zeros"
                         + " are the same region." : ".")));
+    }
+
+    /** The one-line summary of a join that half failed; see {@code checks: min-matched-percent}. */
+    private static void reportLowMatch(FigureTable table, MapFigureSettings settings, KeyMatcher matcher,
+                                       List<String> regionKeys, Map<Slot, FigureCell> joined,
+                                       Set<String> unmatchedKeys, Findings findings) {
+        Set<String> regions = new TreeSet<>(regionKeys);
+        Set<String> matched = new HashSet<>();
+        joined.keySet().stream().filter(slot -> slot.role() == FigureRole.VALUE).forEach(slot -> matched.add(slot.regionKey()));
+        double percent = regions.isEmpty() ? 100 : 100.0 * matched.size() / regions.size();
+        if (percent >= settings.minMatchedPercent()) {
+            return;
+        }
+        long relaxable = table.keyMatching() == KeyMatching.EXACT
+                ? unmatchedKeys.stream().filter(key -> matcher.relaxedCandidate(key).isPresent()).count() : 0;
+        String hint = relaxable > 0
+                ? String.format(Locale.ROOT, "%,d statistics keys match a region if leading zeros, case and spaces"
+                        + " are ignored: set key-matching: relaxed for this source, or correct the keys.", relaxable)
+                : "Check that 'key' names the column that holds the geometry's keys, and compare a few keys by hand;"
+                        + " lower checks: min-matched-percent only if the gaps are real.";
+        findings.add(Finding.error("join-match-low", table.file(), "",
+                String.format(Locale.ROOT, "%,d of %,d regions of map \"%s\" matched a figure (%.1f %%); at least"
+                        + " %s %% must.", matched.size(), regions.size(), settings.mapId(), percent,
+                        MapStatistics.plain(settings.minMatchedPercent())),
+                hint));
     }
 
     private static void reportRelaxedMatches(FigureTable table, Map<FigureCell, String> relaxedMatches,

@@ -143,7 +143,7 @@ final class TableShaper {
     }
 
     private String rowPlace(int row) {
-        return tableName.isEmpty() ? "row " + row : "table \"" + tableName + "\", row " + row;
+        return tableName.isEmpty() ? "row " + row : tableName + ", row " + row;
     }
 
     private static int find(FigureSourceSettings settings, List<String> columns, String wanted, String specKey,
