@@ -44,8 +44,8 @@ public record PublishResult(Path outDir, boolean replaced, List<String> mapsDraw
                 maps, maps == 1 ? "map" : "maps", outDir, mapsDrawn.size(), mapsReused.size(), filesWritten,
                 filesKept, filesRemoved, took));
         if (userFilesKept > 0) {
-            text.append(String.format(Locale.ROOT, "%n%d %s that aequa did not write carried over unchanged.",
-                    userFilesKept, userFilesKept == 1 ? "file" : "files"));
+            text.append(String.format(Locale.ROOT, "%nKept %d %s that aequa did not write, unchanged (files, links"
+                    + " and empty folders).", userFilesKept, userFilesKept == 1 ? "item" : "items"));
         }
         if (changedMaps > 0) {
             text.append(String.format(Locale.ROOT, "%n%d %s changed since the previous edition: see changes.html.",

@@ -11,6 +11,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
 
+import aequa.findings.Excerpt;
 import aequa.findings.Finding;
 import aequa.findings.Findings;
 import aequa.findings.Severity;
@@ -126,12 +127,12 @@ final class FigureJoin {
                                   Findings findings) {
         if (cell.malformed()) {
             findings.add(Finding.error("join-not-a-number", table.file(), table.place(cell),
-                    "The value \"" + cell.text() + "\" for region \"" + cell.key() + "\" is not a number.",
+                    "The value \"" + Excerpt.of(cell.text()) + "\" for region \"" + cell.key() + "\" is not a number.",
                     cell.problem()));
         } else if (role == FigureRole.VALUE && cell.status() == CellStatus.REPORTED
                 && (cell.value() < settings.rangeMin() || cell.value() > settings.rangeMax())) {
             findings.add(Finding.error("join-out-of-range", table.file(), table.place(cell),
-                    "The value " + cell.text().strip() + " for region \"" + cell.key()
+                    "The value " + Excerpt.of(cell.text().strip()) + " for region \"" + cell.key()
                             + "\" is outside the range declared for map \"" + settings.mapId() + "\" ["
                             + MapStatistics.plain(settings.rangeMin()) + ", "
                             + MapStatistics.plain(settings.rangeMax()) + "].",

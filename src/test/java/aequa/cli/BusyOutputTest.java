@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
@@ -21,20 +19,14 @@ import aequa.publish.SiteLock;
  */
 class BusyOutputTest {
 
-    private final StringWriter out = new StringWriter();
-    private final StringWriter err = new StringWriter();
+    private final CliSession cli = new CliSession();
 
     @TempDir
     Path tmp;
 
-    private int run(String... args) {
-        return Main.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
-    }
-
     /** A scaffolded project whose figures lack a region the project treats as an error: its load step fails. */
     private Path projectWithDataErrors() throws IOException {
-        Path project = tmp.resolve("project");
-        assertEquals(0, run("scaffold", project.toString()));
+        Path project = cli.scaffold(tmp.resolve("project"));
         Path yaml = project.resolve("aequa.yaml");
         Files.writeString(yaml, Files.readString(yaml) + "checks:\n  missing-figures: error\n");
         Path csv = project.resolve("figures/districts.csv");
@@ -48,10 +40,10 @@ class BusyOutputTest {
         Path site = tmp.resolve("site");
         try (SiteLock held = SiteLock.acquire(site, Duration.ZERO)) {
             // the load step would end with exit 1 (data errors); the busy output must be reported first
-            assertEquals(4, run("publish", project.toString(), "--out", site.toString()), err.toString());
+            assertEquals(4, cli.run("publish", project.toString(), "--out", site.toString()), cli.errText());
         }
-        assertTrue(err.toString().contains("--wait SECONDS"), err.toString());
-        assertEquals(1, err.toString().strip().lines().count(), "the load step ran and reported findings: " + err);
+        assertTrue(cli.errText().contains("--wait SECONDS"), cli.errText());
+        assertEquals(1, cli.errText().strip().lines().count(), "the load step ran and reported findings: " + cli.errText());
     }
 
     @Test
@@ -60,15 +52,15 @@ class BusyOutputTest {
         Path site = tmp.resolve("site");
         long start = System.nanoTime();
         try (SiteLock held = SiteLock.acquire(site, Duration.ZERO)) {
-            assertEquals(4, run("publish", project.toString(), "--out", site.toString(), "--wait", "1"));
+            assertEquals(4, cli.run("publish", project.toString(), "--out", site.toString(), "--wait", "1"));
         }
         assertTrue(System.nanoTime() - start >= 1_000_000_000L, "did not wait");
-        assertTrue(err.toString().contains("within 1 s"), err.toString());
+        assertTrue(cli.errText().contains("within 1 s"), cli.errText());
     }
 
     @Test
     void theHelpListsTheExitCodeForABusyOutput() {
-        assertEquals(0, run("--help"));
-        assertTrue(out.toString().contains("4") && out.toString().contains("another publish is writing"), out.toString());
+        assertEquals(0, cli.run("--help"));
+        assertTrue(cli.out.toString().contains("4") && cli.out.toString().contains("another publish is writing"), cli.out.toString());
     }
 }

@@ -69,7 +69,7 @@ class UserFilesKeptTest {
         // 7 files and links and 1 empty folder; nothing of aequa's was dropped
         assertEquals(8, result.userFilesKept());
         assertEquals(0, result.filesRemoved());
-        assertTrue(result.summary().contains("8 files that aequa did not write carried over"), result.summary());
+        assertTrue(result.summary().contains("Kept 8 items that aequa did not write"), result.summary());
     }
 
     @Test
