@@ -9,6 +9,7 @@ import java.util.Map;
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
 
+import aequa.ellipsoid.EdgeSteps;
 import aequa.ellipsoid.LonLatDensifier;
 import aequa.inputs.regions.Region;
 import aequa.planar.AreaAudit;
@@ -35,15 +36,21 @@ record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAre
     static final double WEB_WIDTH_PX = 1200;
     static final double PRINT_WIDTH_MM = 260;
 
+    /** Share of the area tolerance that the chords of a thin region may use (our choice: a tenth). */
+    static final double FINER_STEP_MARGIN = 0.1;
+
     static PlanarLayer of(RegionLayer layer, EqualAreaProjection projection, Footprint footprint, double tolerance) {
         double stepDeg = LonLatDensifier.stepDeg(roughWidthM(footprint), WEB_WIDTH_PX);
         PolygonProjector projector = new PolygonProjector(projection, stepDeg);
+        // thin and tiny regions get finer steps, so the drawn chords keep the true area (EdgeSteps)
+        EdgeSteps steps = EdgeSteps.forLayer(layer.regions().stream().map(Region::lonLat).toList(), stepDeg,
+                tolerance * FINER_STEP_MARGIN);
         List<String> keys = new ArrayList<>();
         List<Geometry> planar = new ArrayList<>();
         List<RegionAreaCheck> checks = new ArrayList<>();
         Envelope extent = new Envelope();
         for (Region region : layer.regions()) {
-            Geometry projected = projector.project(LonLatDensifier.densify(region.lonLat(), stepDeg));
+            Geometry projected = projector.project(LonLatDensifier.densify(region.lonLat(), steps));
             keys.add(region.key());
             planar.add(projected);
             checks.add(AreaAuditor.check(region.key(), layer.areaKm2ByKey().get(region.key()), projected));

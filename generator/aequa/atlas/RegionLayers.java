@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Map;
 
 import aequa.ellipsoid.CoverageChecks;
-import aequa.ellipsoid.GeodesicArea;
+import aequa.ellipsoid.LonLatArea;
 import aequa.ellipsoid.LonLatDensifier;
 import aequa.ellipsoid.RegionValidator;
 import aequa.findings.Findings;
@@ -16,6 +16,7 @@ import aequa.inputs.regions.RegionReaders;
 import aequa.project.LoadedProject;
 import aequa.project.RegionSourceSpec;
 import aequa.projection.SourceCrs;
+import aequa.statistics.TextLengths;
 
 /** Reads, checks and measures each geometry source once, however many maps use it. */
 final class RegionLayers {
@@ -35,18 +36,21 @@ final class RegionLayers {
 
     private RegionLayer load(String sourceId) {
         RegionSourceSpec spec = project.file().regions().get(sourceId);
-        List<Region> read = RegionReaders.read(project.dir(), spec, SourceCrs::toLonLat, findings);
-        List<Region> valid = RegionValidator.validate(read, spec.file(), findings);
-        CoverageChecks.report(valid, spec.file(), findings);
+        RegionReaders.RegionSource read = RegionReaders.readSource(project.dir(), spec, SourceCrs::toLonLat, findings);
+        List<Region> valid = RegionValidator.validate(
+                TextLengths.withinLimits(read.regions(), spec.file(), findings), spec.file(), findings);
+        if (!read.bordersShared()) { // a clean topology cannot overlap or leave gaps along its shared arcs
+            CoverageChecks.report(valid, spec.file(), findings);
+        }
         List<Region> densified = new ArrayList<>(valid.size());
         Map<String, Double> areas = new LinkedHashMap<>();
         for (Region region : valid) {
-            // GeoJSON edges are straight in lon/lat (RFC 7946, section 3.1.1); densified, the geodesic edges
-            // between vertices follow them, so the geodesic area is the area of the region as drawn
+            // GeoJSON edges are straight in lon/lat (RFC 7946, section 3.1.1), and so are the drawn ones: the
+            // area is measured exactly along them (LonLatArea), not along geodesics between the vertices
             Region fine = new Region(region.key(), region.name(),
                     LonLatDensifier.densify(region.lonLat(), LonLatDensifier.MAX_STEP_DEG));
             densified.add(fine);
-            areas.put(region.key(), GeodesicArea.areaKm2(fine.lonLat()));
+            areas.put(region.key(), LonLatArea.areaKm2(fine.lonLat()));
         }
         return new RegionLayer(sourceId, spec.file(), densified, areas);
     }

@@ -142,7 +142,7 @@ public final class MapDrawings {
         g.scale(ptPerMm, ptPerMm);
         Canvas canvas = new Canvas(g, type);
         painter.paint(canvas, layout, medium.coordinates(), false);
-        return drawn(DrawnMap.Format.PDF, PdfDates.fixed(document.getPDFBytes()), layout, "mm", canvas);
+        return drawn(DrawnMap.Format.PDF, PdfInformation.rewritten(document.getPDFBytes(), model.spec().title()), layout, "mm", canvas);
     }
 
     private static DrawnMap drawn(DrawnMap.Format format, byte[] bytes, Layout layout, String unit, Canvas canvas) {

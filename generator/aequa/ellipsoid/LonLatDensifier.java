@@ -56,7 +56,12 @@ public final class LonLatDensifier {
         if (!(maxStepDeg > 0)) {
             throw new IllegalArgumentException("maxStepDeg must be positive: " + maxStepDeg);
         }
-        if (!needsVertices(lonLat, maxStepDeg)) {
+        return densify(lonLat, EdgeSteps.uniform(maxStepDeg));
+    }
+
+    /** As {@link #densify(Geometry, double)}, with each edge's step from {@code steps} (finer on thin regions). */
+    public static Geometry densify(Geometry lonLat, EdgeSteps steps) {
+        if (!needsVertices(lonLat, steps)) {
             return lonLat;
         }
         GeometryFactory factory = lonLat.getFactory();
@@ -67,10 +72,10 @@ public final class LonLatDensifier {
                 parts[i] = polygon;
                 continue;
             }
-            LinearRing shell = factory.createLinearRing(densify(polygon.getExteriorRing().getCoordinateSequence(), maxStepDeg));
+            LinearRing shell = factory.createLinearRing(densify(polygon.getExteriorRing().getCoordinateSequence(), steps));
             LinearRing[] holes = new LinearRing[polygon.getNumInteriorRing()];
             for (int h = 0; h < holes.length; h++) {
-                holes[h] = factory.createLinearRing(densify(polygon.getInteriorRingN(h).getCoordinateSequence(), maxStepDeg));
+                holes[h] = factory.createLinearRing(densify(polygon.getInteriorRingN(h).getCoordinateSequence(), steps));
             }
             parts[i] = factory.createPolygon(shell, holes);
         }
@@ -82,10 +87,14 @@ public final class LonLatDensifier {
 
     /** Densifies one closed ring; returns a packed 2-D sequence. */
     public static CoordinateSequence densify(CoordinateSequence ring, double maxStepDeg) {
+        return densify(ring, EdgeSteps.uniform(maxStepDeg));
+    }
+
+    private static CoordinateSequence densify(CoordinateSequence ring, EdgeSteps edgeSteps) {
         int n = ring.size();
         int total = n;
         for (int i = 0; i + 1 < n; i++) {
-            total += steps(ring.getX(i), ring.getY(i), ring.getX(i + 1), ring.getY(i + 1), maxStepDeg) - 1;
+            total += steps(ring.getX(i), ring.getY(i), ring.getX(i + 1), ring.getY(i + 1), edgeSteps) - 1;
         }
         double[] out = new double[2 * total];
         int k = 0;
@@ -96,7 +105,7 @@ public final class LonLatDensifier {
             double y1 = ring.getY(i + 1);
             out[k++] = x0;
             out[k++] = y0;
-            int steps = steps(x0, y0, x1, y1, maxStepDeg);
+            int steps = steps(x0, y0, x1, y1, edgeSteps);
             boolean forward = x0 < x1 || (x0 == x1 && y0 <= y1);
             double ax = forward ? x0 : x1;
             double ay = forward ? y0 : y1;
@@ -114,17 +123,17 @@ public final class LonLatDensifier {
         return new PackedCoordinateSequence.Double(out, 2, 0);
     }
 
-    private static boolean needsVertices(Geometry lonLat, double maxStepDeg) {
+    private static boolean needsVertices(Geometry lonLat, EdgeSteps edgeSteps) {
         for (int i = 0; i < lonLat.getNumGeometries(); i++) {
             Polygon polygon = (Polygon) lonLat.getGeometryN(i);
             if (polygon.isEmpty()) {
                 continue;
             }
-            if (needsVertices(polygon.getExteriorRing().getCoordinateSequence(), maxStepDeg)) {
+            if (needsVertices(polygon.getExteriorRing().getCoordinateSequence(), edgeSteps)) {
                 return true;
             }
             for (int h = 0; h < polygon.getNumInteriorRing(); h++) {
-                if (needsVertices(polygon.getInteriorRingN(h).getCoordinateSequence(), maxStepDeg)) {
+                if (needsVertices(polygon.getInteriorRingN(h).getCoordinateSequence(), edgeSteps)) {
                     return true;
                 }
             }
@@ -132,17 +141,17 @@ public final class LonLatDensifier {
         return false;
     }
 
-    private static boolean needsVertices(CoordinateSequence ring, double maxStepDeg) {
+    private static boolean needsVertices(CoordinateSequence ring, EdgeSteps edgeSteps) {
         for (int i = 0; i + 1 < ring.size(); i++) {
-            if (steps(ring.getX(i), ring.getY(i), ring.getX(i + 1), ring.getY(i + 1), maxStepDeg) > 1) {
+            if (steps(ring.getX(i), ring.getY(i), ring.getX(i + 1), ring.getY(i + 1), edgeSteps) > 1) {
                 return true;
             }
         }
         return false;
     }
 
-    private static int steps(double x0, double y0, double x1, double y1, double maxStepDeg) {
+    private static int steps(double x0, double y0, double x1, double y1, EdgeSteps steps) {
         double span = Math.max(Math.abs(x1 - x0), Math.abs(y1 - y0));
-        return Math.max(1, (int) Math.ceil(span / maxStepDeg));
+        return Math.max(1, (int) Math.ceil(span / steps.stepDeg(x0, y0, x1, y1)));
     }
 }

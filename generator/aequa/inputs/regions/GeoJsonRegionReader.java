@@ -16,6 +16,7 @@ import com.fasterxml.jackson.core.StreamReadFeature;
 import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.core.exc.StreamReadException;
 
+import aequa.findings.Excerpt;
 import aequa.findings.Finding;
 import aequa.findings.Findings;
 import aequa.project.RegionSourceSpec;
@@ -72,7 +73,7 @@ final class GeoJsonRegionReader {
             findings.add(e.limit().finding(file, "feature " + (featureCount + 1), "reading stopped there"));
         } catch (StreamReadException e) {
             findings.add(Finding.error("geojson-malformed", file, location(e),
-                    "The file is not valid JSON: " + e.getOriginalMessage().split("\n", 2)[0] + ".",
+                    "The file is not valid JSON: " + Excerpt.quotedParts(e.getOriginalMessage().split("\n", 2)[0]) + ".",
                     "Check the file where shown; it may be truncated or hand-edited."));
         } catch (IOException e) {
             findings.add(Finding.error("file-unreadable", file, "", "The file could not be read: " + e.getMessage() + ".",

@@ -12,10 +12,11 @@ import java.util.Locale;
 import org.junit.jupiter.api.Test;
 
 /**
- * The information dates of a PDF are replaced whatever zone and calendar wrote them, and the file's
- * cross-reference table still points at every object (ISO 32000-1, sections 7.5.4 and 7.5.5).
+ * The information dates of a PDF are replaced whatever zone and calendar wrote them, the title becomes a
+ * Unicode text string, and the file's cross-reference table still points at every object (ISO 32000-1,
+ * sections 7.5.4 and 7.5.5).
  */
-class PdfDatesTest {
+class PdfInformationTest {
 
     /**
      * A three-object PDF laid out as JFreePDF lays it out (information dictionary first, then a stream
@@ -42,25 +43,33 @@ class PdfDatesTest {
     @Test
     void datesFromAnyZoneOrCalendarBecomeTheSameBytes() {
         // what JFreePDF 2.0 writes: UTC, Kiritimati (+14), St John's (-03:30, minutes cut), a Buddhist-calendar year
-        byte[] utc = PdfDates.fixed(pdfDated("D:20261204152200+00'0'"));
-        assertArrayEquals(utc, PdfDates.fixed(pdfDated("D:20261205052200+14'0'")));
-        assertArrayEquals(utc, PdfDates.fixed(pdfDated("D:20261204115200-03'3'")));
-        assertArrayEquals(utc, PdfDates.fixed(pdfDated("D:25691204152200+00'0'")));
-        assertArrayEquals(utc, PdfDates.fixed(pdfDated("D:2026")), "a shorter date moves every later object");
+        byte[] utc = PdfInformation.rewritten(pdfDated("D:20261204152200+00'0'"), "t");
+        assertArrayEquals(utc, PdfInformation.rewritten(pdfDated("D:20261205052200+14'0'"), "t"));
+        assertArrayEquals(utc, PdfInformation.rewritten(pdfDated("D:20261204115200-03'3'"), "t"));
+        assertArrayEquals(utc, PdfInformation.rewritten(pdfDated("D:25691204152200+00'0'"), "t"));
+        assertArrayEquals(utc, PdfInformation.rewritten(pdfDated("D:2026"), "t"), "a shorter date moves every later object");
         String text = new String(utc, StandardCharsets.ISO_8859_1);
-        assertTrue(text.contains("/ModDate (" + PdfDates.FIXED + ")") && text.contains("/CreationDate (" + PdfDates.FIXED + ")"));
+        assertTrue(text.contains("/ModDate (" + PdfInformation.FIXED + ")") && text.contains("/CreationDate (" + PdfInformation.FIXED + ")"));
         assertTrue(text.contains("\u0000\u00ff\n)\n"), "binary stream bytes are copied unchanged");
     }
 
     @Test
     void everyCrossReferenceStillPointsAtItsObject() {
-        String text = new String(PdfDates.fixed(pdfDated("D:2026")), StandardCharsets.ISO_8859_1);
+        String text = new String(PdfInformation.rewritten(pdfDated("D:2026"), "t"), StandardCharsets.ISO_8859_1);
         assertEquals(3, PdfXref.assertPointsAtEveryObject(text));
     }
 
     @Test
     void aPdfWithoutDatesIsLeftAsItIs() {
         byte[] undated = "%PDF-1.4\n1 0 obj\n<< >>\nendobj\n".getBytes(StandardCharsets.ISO_8859_1);
-        assertArrayEquals(undated, PdfDates.fixed(undated));
+        assertArrayEquals(undated, PdfInformation.rewritten(undated, "t"));
+    }
+
+    @Test
+    void titleBecomesAUnicodeTextString() {
+        String text = new String(PdfInformation.rewritten(pdfDated("D:2026"), "km\u00b2"), StandardCharsets.ISO_8859_1);
+        // ISO 32000-1, 7.9.2.2: UTF-16BE after the byte order mark FE FF; k = 006B, m = 006D, superscript two = 00B2
+        assertTrue(text.contains("/Title <FEFF006B006D00B2>"), text);
+        assertTrue(!text.contains("/Title (t)"));
     }
 }

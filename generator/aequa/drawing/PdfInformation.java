@@ -8,17 +8,19 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * Replaces the clock dates JFreePDF writes into a PDF's document information dictionary with one fixed
- * instant in UTC, so a PDF depends on neither the clock, the time zone nor the locale of the machine.
+ * Rewrites the document information dictionary JFreePDF writes: the clock dates become one fixed instant in
+ * UTC, so a PDF depends on neither the clock, the time zone nor the locale of the machine; and the title
+ * becomes a Unicode text string, so "km²" or any script survives (JFreePDF writes it as a literal string
+ * in a single-byte encoding and turns other characters into "?").
  *
  * <p>JFreePDF 2.0 stamps {@code /CreationDate} and {@code /ModDate} with the current time in the JVM's default
  * zone and calendar, offset included ({@code D:20261204152200+14'0'} on Kiritimati), and offers no way to set
- * them; so this rewrites its finished bytes. Our own code rather than a PDF library: only the two dates
- * change, and the cross-reference table (ISO 32000-1, section 7.5.4: ten-digit byte offsets of each object)
+ * them; so this rewrites its finished bytes. Our own code rather than a PDF library: only the dates and the
+ * title change, and the cross-reference table (ISO 32000-1, section 7.5.4: ten-digit byte offsets of each object)
  * and the {@code startxref} offset (section 7.5.5) are shifted by the change in length, whatever length the
  * machine's calendar gave the original dates. Everything else is copied byte for byte.
  */
-final class PdfDates {
+final class PdfInformation {
 
     /**
      * 1 January 2000, 00:00:00 UTC, in the date format of ISO 32000-1, section 7.9.4 ({@code D:YYYYMMDDHHmmSSOHH'mm'},
@@ -26,26 +28,30 @@ final class PdfDates {
      */
     static final String FIXED = "D:20000101000000Z00'00'";
 
-    private static final Pattern DATE = Pattern.compile("/(CreationDate|ModDate) \\(D:[^)]*\\)");
+    private static final Pattern ENTRY = Pattern.compile("/(CreationDate|ModDate) \\(D:[^)]*\\)|/Title \\((?:[^)\\\\]|\\\\.)*\\)");
     private static final Pattern XREF_ENTRY = Pattern.compile("(\\d{10}) (\\d{5}) n");
     private static final Pattern START_XREF = Pattern.compile("startxref(\\s+)(\\d+)");
 
-    private PdfDates() {
+    private PdfInformation() {
     }
 
-    /** {@code pdf} with its information dates set to {@link #FIXED}; a PDF without such dates is returned as it is. */
-    static byte[] fixed(byte[] pdf) {
+    /**
+     * {@code pdf} with its information dates set to {@link #FIXED} and its title set to {@code title}; a PDF
+     * without such entries is returned as it is.
+     */
+    static byte[] rewritten(byte[] pdf, String title) {
         // ISO-8859-1 maps every byte to one char and back, so binary streams survive and offsets stay byte offsets
         String text = new String(pdf, StandardCharsets.ISO_8859_1);
-        Matcher date = DATE.matcher(text);
+        Matcher entry = ENTRY.matcher(text);
         StringBuilder out = new StringBuilder(text.length());
         List<int[]> shifts = new ArrayList<>(); // {position in the original, change in length there}
         int copied = 0;
-        while (date.find()) {
-            String replacement = "/" + date.group(1) + " (" + FIXED + ")";
-            out.append(text, copied, date.start()).append(replacement);
-            shifts.add(new int[] {date.start(), replacement.length() - (date.end() - date.start())});
-            copied = date.end();
+        while (entry.find()) {
+            String replacement = entry.group(1) == null ? "/Title " + unicodeText(title)
+                    : "/" + entry.group(1) + " (" + FIXED + ")";
+            out.append(text, copied, entry.start()).append(replacement);
+            shifts.add(new int[] {entry.start(), replacement.length() - (entry.end() - entry.start())});
+            copied = entry.end();
         }
         if (shifts.isEmpty()) {
             return pdf;
@@ -57,6 +63,18 @@ final class PdfDates {
         out.append(text, copied, xref);
         out.append(shiftedXref(text.substring(xref), shifts));
         return out.toString().getBytes(StandardCharsets.ISO_8859_1);
+    }
+
+    /**
+     * A PDF text string in UTF-16BE with its byte order mark, written as a hexadecimal string (ISO 32000-1,
+     * sections 7.9.2.2 and 7.3.4.3), so it needs no escaping and stays 7-bit.
+     */
+    static String unicodeText(String value) {
+        StringBuilder hex = new StringBuilder("<FEFF");
+        for (byte b : value.getBytes(StandardCharsets.UTF_16BE)) {
+            hex.append(String.format(Locale.ROOT, "%02X", b & 0xff));
+        }
+        return hex.append('>').toString();
     }
 
     /** The cross-reference section and trailer with every offset moved by the changes made before it. */
