@@ -112,7 +112,8 @@ public final class ProjectionChooser {
         String reason = ChoiceReason.sentence(chosen.projection, chosen.score, footprint, basis,
                 runnersUp.isEmpty() ? null : runnersUp.get(0));
         return new ProjectionChoice(chosen.projection, chosen.score.omegaMaxDeg(), chosen.score.omegaMeanDeg(),
-                chosen.score.worstLonDeg(), chosen.score.worstLatDeg(), runnersUp, reason);
+                chosen.score.worstLonDeg(), chosen.score.worstLatDeg(), runnersUp, reason,
+                DistortionSpread.of(chosen.projection, footprint, chosen.score.worstLonDeg(), chosen.score.worstLatDeg()));
     }
 
     /** The family with these values, scored on all of the footprint's samples; null when the values are not allowed. */
