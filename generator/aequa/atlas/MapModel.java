@@ -18,7 +18,8 @@ import aequa.projection.ProjectionChoice;
  * @param classification classes shared by all periods (computed from the pooled values)
  * @param ramp           the class fills
  * @param areaAudit      the area proof
- * @param notices        the findings about this map a reader should see (missing figures, dropped islands)
+ * @param notices        what the checks found about this map (figures matching no region, dropped islands):
+ *                       for the author and the method page, never printed in the graphic
  */
 public record MapModel(MapSpec spec, List<String> periods, ProjectionChoice projection, List<MapRegion> regions,
                        Classification classification, ColourRamp ramp, AreaAudit areaAudit, List<String> notices) {

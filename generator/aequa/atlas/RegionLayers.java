@@ -16,6 +16,7 @@ import aequa.inputs.regions.RegionReaders;
 import aequa.project.LoadedProject;
 import aequa.project.RegionSourceSpec;
 import aequa.projection.SourceCrs;
+import aequa.statistics.TextLengths;
 
 /** Reads, checks and measures each geometry source once, however many maps use it. */
 final class RegionLayers {
@@ -35,9 +36,12 @@ final class RegionLayers {
 
     private RegionLayer load(String sourceId) {
         RegionSourceSpec spec = project.file().regions().get(sourceId);
-        List<Region> read = RegionReaders.read(project.dir(), spec, SourceCrs::toLonLat, findings);
-        List<Region> valid = RegionValidator.validate(read, spec.file(), findings);
-        CoverageChecks.report(valid, spec.file(), findings);
+        RegionReaders.RegionSource read = RegionReaders.readSource(project.dir(), spec, SourceCrs::toLonLat, findings);
+        List<Region> valid = RegionValidator.validate(
+                TextLengths.withinLimits(read.regions(), spec.file(), findings), spec.file(), findings);
+        if (!read.bordersShared()) { // a clean topology cannot overlap or leave gaps along its shared arcs
+            CoverageChecks.report(valid, spec.file(), findings);
+        }
         List<Region> densified = new ArrayList<>(valid.size());
         Map<String, Double> areas = new LinkedHashMap<>();
         for (Region region : valid) {

@@ -26,8 +26,9 @@ import aequa.project.ClassesSpec;
  *       {@code classes-midpoint-missing}.</li>
  *   <li>When fewer classes than asked for are made (all values equal, fewer distinct values than classes,
  *       ties that make quantile breaks coincide) a NOTE {@code classes-fewer-than-requested} says why.</li>
- *   <li>Inner breaks of quantile, equal-interval, natural-breaks and std-dev classes are rounded by the
- *       rule of {@link ReadableBreaks}: no value changes class. Manual breaks are used as given; diverging
+ *   <li>The limits of quantile, equal-interval and natural-breaks classes are rounded by the rules of
+ *       {@link ReadableBreaks}: one step for the whole map, a thirtieth of the range or finer, and values
+ *       classed by the rounded limits. Manual breaks are used as given; diverging
  *       limits are exact multiples of a rounded step from the midpoint (see {@link CentredBreaks}).</li>
  *   <li>Deterministic: the result depends only on the multiset of values, not their order.</li>
  * </ul>
@@ -174,6 +175,10 @@ public final class Classifier {
 
     /** Limits spanning the data: rounded inner breaks between outward-rounded extremes. */
     private static Drafted dataRange(double[] sorted, double[] rawInner, String reduction) {
+        java.util.Optional<double[]> onStep = ReadableBreaks.onStep(sorted, rawInner);
+        if (onStep.isPresent()) {
+            return new Drafted(onStep.get(), reduction);
+        }
         double[] inner = ReadableBreaks.roundInner(sorted, rawInner);
         double[] limits = new double[inner.length + 2];
         limits[0] = ReadableBreaks.floorOuter(sorted[0]);

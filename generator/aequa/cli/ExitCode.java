@@ -7,8 +7,10 @@ enum ExitCode {
     DATA_PROBLEMS(1),
     /** The command line or the project file is wrong. */
     USAGE(2),
-    /** aequa itself failed; a bug or an unrecoverable I/O error. */
-    INTERNAL(3);
+    /** aequa itself failed: a bug, an unrecoverable I/O error, or too little memory. */
+    INTERNAL(3),
+    /** Another publish holds the output folder's lock (after {@code --wait}, if given). */
+    LOCKED(4);
 
     final int code;
 

@@ -16,7 +16,8 @@ import picocli.CommandLine.ScopeType;
         exitCodeList = {"0:success",
                 "1:the data has problems that the project file treats as errors",
                 "2:usage or project-file error",
-                "3:internal failure (please report it, with --debug output)"})
+                "3:internal failure (please report it, with --debug output), or out of memory",
+                "4:another publish is writing the same output folder (see --wait)"})
 public final class Main implements Runnable {
 
     @Option(names = "--debug", scope = ScopeType.INHERIT, description = "Show stack traces of internal failures.")
@@ -60,6 +61,11 @@ public final class Main implements Runnable {
             }
             return ExitCode.INTERNAL.code;
         });
-        return cli.execute(args);
+        try {
+            return cli.execute(args);
+        } catch (OutOfMemoryError e) {
+            err.println(MemoryAdvice.outOfMemory(Runtime.getRuntime().maxMemory()));
+            return ExitCode.INTERNAL.code;
+        }
     }
 }

@@ -32,13 +32,13 @@ final class PreviewCommand implements Callable<Integer> {
         var out = spec.commandLine().getOut();
         var err = spec.commandLine().getErr();
         SiteBuilder builder = new SiteBuilder(out, err);
-        ExitCode first = builder.build(folders.projectDir, folders.outDir, true);
+        ExitCode first = builder.build(folders.projectDir, folders.outDir, Duration.ofSeconds(folders.waitSeconds), true);
         if (first != ExitCode.OK) {
             err.println("aequa: fix the problems above, then run preview again.");
             return first.code;
         }
         PreviewServer.Rebuild rebuild = () -> {
-            ExitCode code = builder.build(folders.projectDir, folders.outDir, false);
+            ExitCode code = builder.build(folders.projectDir, folders.outDir, Duration.ofSeconds(folders.waitSeconds), false);
             if (code != ExitCode.OK) {
                 throw new IllegalStateException("the project has problems (listed above)");
             }

@@ -13,4 +13,8 @@ final class ProjectAndOutput {
 
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "site-out", description = "The output folder (default: ${DEFAULT-VALUE}).")
     Path outDir;
+
+    @Option(names = "--wait", paramLabel = "SECONDS", defaultValue = "0",
+            description = "When another publish is writing the same output, wait up to this long for it (default: ${DEFAULT-VALUE}, fail at once with exit code 4).")
+    long waitSeconds;
 }

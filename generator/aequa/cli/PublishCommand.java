@@ -1,6 +1,7 @@
 package aequa.cli;
 
 import java.io.IOException;
+import java.time.Duration;
 import java.util.concurrent.Callable;
 
 import picocli.CommandLine.Command;
@@ -23,6 +24,6 @@ final class PublishCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         return new SiteBuilder(spec.commandLine().getOut(), spec.commandLine().getErr())
-                .build(folders.projectDir, folders.outDir, true).code;
+                .build(folders.projectDir, folders.outDir, Duration.ofSeconds(folders.waitSeconds), true).code;
     }
 }

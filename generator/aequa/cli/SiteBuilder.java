@@ -3,6 +3,7 @@ package aequa.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.Optional;
 
 import aequa.atlas.Atlas;
@@ -22,6 +23,7 @@ import aequa.publish.PublishOptions;
 import aequa.publish.PublishProgress;
 import aequa.publish.PublishRefusedException;
 import aequa.publish.PublishResult;
+import aequa.publish.SiteLock;
 import aequa.publish.SiteLockedException;
 import aequa.publish.SitePublisher;
 
@@ -40,7 +42,11 @@ final class SiteBuilder {
         this.err = err;
     }
 
-    ExitCode build(Path projectDir, Path outDir, boolean showProgress) throws IOException {
+    /**
+     * Loads and publishes. The output's lock is taken after the project file's own checks and before the
+     * load step, so a second publish of a busy output learns it at once (waiting up to {@code lockWait}).
+     */
+    ExitCode build(Path projectDir, Path outDir, Duration lockWait, boolean showProgress) throws IOException {
         Findings findings = new Findings();
         Optional<LoadedProject> loaded = ProjectLoader.load(projectDir, findings);
         if (loaded.isEmpty()) {
@@ -60,6 +66,20 @@ final class SiteBuilder {
             FindingsPrinter.print(setup.list(), err, false);
             return ExitCode.USAGE;
         }
+        try (SiteLock lock = SiteLock.acquire(outDir, lockWait)) {
+            return loadAndPublish(project, theme, printTheme, printSize.get(), lock, findings, showProgress);
+        } catch (SiteLockedException e) {
+            err.println("aequa: " + e.getMessage());
+            return ExitCode.LOCKED;
+        } catch (PublishRefusedException e) {
+            err.println("aequa: " + e.getMessage());
+            return ExitCode.USAGE;
+        }
+    }
+
+    private ExitCode loadAndPublish(LoadedProject project, Theme theme, Theme printTheme, PrintSize printSize,
+                                    SiteLock lock, Findings findings, boolean showProgress) throws IOException {
+        Path outDir = lock.outDir();
         LoadOptions options = new LoadOptions(theme.colours().background(), PreviousProjections.read(outDir));
         Atlas atlas = AtlasLoader.load(project, options, findings);
         FindingsPrinter.print(findings.list(), err, false, FindingsPrinter.SHOWN_PER_KIND, "; `aequa audit` lists every one");
@@ -68,19 +88,10 @@ final class SiteBuilder {
                     + ". The site in " + outDir + " is unchanged.");
             return ExitCode.DATA_PROBLEMS;
         }
-        DrawingArtwork artwork = new DrawingArtwork(theme, printTheme, printSize.get(), new Version().getVersion()[0]);
+        DrawingArtwork artwork = new DrawingArtwork(theme, printTheme, printSize, new Version().getVersion()[0]);
         PublishOptions publishOptions = PublishOptions.defaults()
                 .withProgress(showProgress ? PublishProgress.forTerminal(System.err) : PublishProgress.silent());
-        PublishResult result;
-        try {
-            result = SitePublisher.publish(atlas, findings.list(), artwork, outDir, publishOptions);
-        } catch (SiteLockedException e) {
-            err.println("aequa: " + e.getMessage());
-            return ExitCode.USAGE;
-        } catch (PublishRefusedException e) {
-            err.println("aequa: " + e.getMessage());
-            return ExitCode.USAGE;
-        }
+        PublishResult result = SitePublisher.publish(atlas, findings.list(), artwork, lock, publishOptions);
         FindingsPrinter.print(artwork.preflightFindings(), err, false);
         for (var map : atlas.maps()) {
             out.println(MapSummary.line(map));

@@ -12,34 +12,31 @@ import aequa.project.ColoursSpec;
 /**
  * The front door of colour: generates, checks and if need be adjusts the fills of a map's classes.
  *
- * <p>Order of attempts for sequential and diverging ramps, each checked with {@link RampChecks}; the first
- * that passes every check is returned, and every adjustment is a NOTE finding
- * ({@code colours-ramp-adjusted}):
- * <ol>
- *   <li>the standard lightness range (OKLab L {@value #QUIET_ON_LIGHT} to {@value #LOUD_ON_LIGHT} on a light
- *       page, {@value #QUIET_ON_DARK} to {@value #LOUD_ON_DARK} on a dark one);</li>
- *   <li>the widest range: quiet end {@value #WIDEST_QUIET_ON_LIGHT} (or {@value #WIDEST_QUIET_ON_DARK}),
- *       loud end as far as the border and hatch still keep 3:1 against the fill;</li>
- *   <li>the widest range with one class fewer, repeated down to 2 classes (3 for diverging). The outcome
- *       then holds fewer fills than asked for, with the WARNING {@code colours-fewer-classes}: the caller
- *       classifies again with {@code ramp.fills().size()} classes.</li>
- * </ol>
- * Qualitative sets try equal lightness, then alternating lightness, then a search over lightness, chroma
- * and hue ({@link QualitativeSearch}); their count is never reduced (each
- * fill is a category). A ramp that still fails is returned with its failed checks and the WARNING
- * {@code colours-ramp-fails-checks}. An unknown scheme is the ERROR {@code colours-unknown-scheme}.
+ * <p>Sequential and diverging ramps run in OKLab lightness from {@value #QUIET_ON_LIGHT} (the class closest
+ * to the page) to {@value #LOUD_ON_LIGHT} on a light page, and from {@value #QUIET_ON_DARK} to
+ * {@value #LOUD_ON_DARK} on a dark one: nearly the whole usable range, so that the loudest class is dark
+ * (light) and neighbouring classes are far apart in lightness as well as in hue and chroma. The ends are
+ * common practice for sequential choropleth ramps (a near-white first class; a last class dark enough that
+ * white labels read on it); the step between neighbouring classes is then {@code (0.97 - 0.30) / (n - 1)},
+ * 0.168 for five classes, and at least {@value RampChecks#MINIMUM_LIGHTNESS_STEP} is checked
+ * ({@code lightness-step}), so classes stay apart in greyscale print too. Lines drawn over fills do not bound
+ * the range: the hatching of unreliable values takes each fill's label colour (checked at 4.5:1 by
+ * {@code label-contrast}); no-data hatching lies on the page colour, never on a fill.
  *
- * <p>The loud end is bounded by the non-text colours: on a light page, borders and hatching are dark, so
- * fills must stay light enough to keep 3:1 against them (on a dark page, the reverse).
+ * <p>A ramp that fails a check is built again with one class fewer, down to 2 classes (3 for diverging),
+ * each attempt a NOTE ({@code colours-ramp-adjusted}); fewer fills than asked for give the WARNING
+ * {@code colours-fewer-classes}, and the caller classifies again with {@code ramp.fills().size()} classes.
+ * Qualitative sets try equal lightness, then alternating lightness, then a search over lightness, chroma
+ * and hue ({@link QualitativeSearch}); their count is never reduced (each fill is a category), and their
+ * fills also keep 3:1 against dark lines. A ramp that still fails is returned with its failed checks and
+ * the WARNING {@code colours-ramp-fails-checks}. An unknown scheme is the ERROR {@code colours-unknown-scheme}.
  */
 public final class ColourRamps {
 
-    static final double QUIET_ON_LIGHT = 0.94;
-    static final double LOUD_ON_LIGHT = 0.62;
-    static final double WIDEST_QUIET_ON_LIGHT = 0.975;
-    static final double QUIET_ON_DARK = 0.30;
-    static final double LOUD_ON_DARK = 0.50;
-    static final double WIDEST_QUIET_ON_DARK = 0.22;
+    static final double QUIET_ON_LIGHT = 0.97;
+    static final double LOUD_ON_LIGHT = 0.30;
+    static final double QUIET_ON_DARK = 0.27;
+    static final double LOUD_ON_DARK = 0.92;
     /** OKLCh chroma aimed at for the loud end; gamut mapping lowers it where sRGB cannot reach it. */
     static final double MAX_CHROMA = 0.16;
     static final double QUALITATIVE_CHROMA = 0.13;
@@ -48,9 +45,6 @@ public final class ColourRamps {
     static final double QUALITATIVE_HIGHEST_ON_LIGHT = 0.90;
     static final double QUALITATIVE_LOWEST_ON_DARK = 0.30;
     static final double QUALITATIVE_HIGHEST_ON_DARK = 0.70;
-    /** Contrast margin above 3:1 when bounding the loud end, absorbing 8-bit rounding of the fills. */
-    private static final double BOUND_MARGIN = 1.03;
-    private static final double BOUND_STEP = 0.005;
 
     private ColourRamps() {
     }
@@ -98,28 +92,14 @@ public final class ColourRamps {
 
     private static ColourRamp ordered(String scheme, double hue, double hueLow, int classCount, boolean lightPage,
                                       NonTextColours nonText, String file, String place, List<Finding> findings) {
-        double quiet = lightPage ? QUIET_ON_LIGHT : QUIET_ON_DARK;
-        double widestQuiet = lightPage ? WIDEST_QUIET_ON_LIGHT : WIDEST_QUIET_ON_DARK;
-        double loudBound = loudBound(hue, nonText, lightPage);
-        if ("diverging".equals(scheme)) {
-            double other = loudBound(hueLow, nonText, lightPage);
-            loudBound = lightPage ? Math.max(loudBound, other) : Math.min(loudBound, other);
-        }
-        double standardLoud = lightPage ? Math.max(LOUD_ON_LIGHT, loudBound) : Math.min(LOUD_ON_DARK, loudBound);
-        ColourRamp ramp = build(scheme, hue, hueLow, classCount, new RampShapes.Shape(quiet, standardLoud, MAX_CHROMA), nonText);
-        if (ramp.passes()) {
-            return ramp;
-        }
-        RampShapes.Shape widest = new RampShapes.Shape(widestQuiet, loudBound, MAX_CHROMA);
-        findings.add(adjusted(file, place, String.format(Locale.ROOT,
-                "Widened the lightness range from %.3f-%.3f to %.3f-%.3f (OKLab L) so neighbouring classes differ more.",
-                quiet, standardLoud, widestQuiet, loudBound)));
-        ramp = build(scheme, hue, hueLow, classCount, widest, nonText);
+        RampShapes.Shape shape = lightPage
+                ? new RampShapes.Shape(QUIET_ON_LIGHT, LOUD_ON_LIGHT, MAX_CHROMA)
+                : new RampShapes.Shape(QUIET_ON_DARK, LOUD_ON_DARK, MAX_CHROMA);
+        ColourRamp ramp = build(scheme, hue, hueLow, classCount, shape, nonText);
         int minimum = "diverging".equals(scheme) ? 3 : 2;
         for (int count = classCount - 1; !ramp.passes() && count >= minimum; count--) {
-            ColourRamp fewer = build(scheme, hue, hueLow, count, widest, nonText);
             findings.add(adjusted(file, place, "Tried " + count + " classes instead of " + classCount + "."));
-            ramp = fewer;
+            ramp = build(scheme, hue, hueLow, count, shape, nonText);
         }
         return ramp;
     }
@@ -169,26 +149,6 @@ public final class ColourRamps {
     private static ColourRamp withChecks(String scheme, List<Rgb> fills, NonTextColours nonText) {
         List<Rgb> labels = fills.stream().map(WcagContrast::labelColour).collect(Collectors.toList());
         return new ColourRamp(scheme, fills, labels, RampChecks.run(scheme, fills, labels, nonText));
-    }
-
-    /**
-     * The loudest OKLab lightness at which a fill of this hue (at {@link #MAX_CHROMA}, gamut-mapped) keeps
-     * 3:1 against both the border and the hatch, searched from the quiet end outwards.
-     */
-    static double loudBound(double hue, NonTextColours nonText, boolean lightPage) {
-        double step = lightPage ? -BOUND_STEP : BOUND_STEP;
-        double l = lightPage ? WIDEST_QUIET_ON_LIGHT : WIDEST_QUIET_ON_DARK;
-        double lastGood = l;
-        while (l > 0 && l < 1) {
-            Rgb fill = GamutMapping.toRgb(new OkLch(l, MAX_CHROMA, hue));
-            double worst = Math.min(WcagContrast.ratio(fill, nonText.border()), WcagContrast.ratio(fill, nonText.noDataHatch()));
-            if (worst < WcagContrast.NON_TEXT_MINIMUM * BOUND_MARGIN) {
-                break;
-            }
-            lastGood = l;
-            l += step;
-        }
-        return lastGood;
     }
 
     private static Finding adjusted(String file, String place, String message) {

@@ -13,11 +13,17 @@ import aequa.colour.ColourRamp.RampCheck;
  *       the smallest OKLab difference between neighbouring classes (every pair, for qualitative sets), for
  *       normal vision and as simulated for protanopia, deuteranopia and tritanopia ({@link ColourVision}),
  *       at least {@value #DISTINGUISHABLE_DELTA_E}.</li>
- *   <li>{@code lightness-monotonic} (ordered schemes): the smallest step of OKLab L away from the quiet end
- *       (the centre, for diverging ramps) is positive.</li>
+ *   <li>{@code lightness-step} (ordered schemes): the smallest step of OKLab L away from the quiet end
+ *       (the centre, for diverging ramps), at least {@value #MINIMUM_LIGHTNESS_STEP}: neighbouring classes
+ *       then differ by three JNDs in lightness alone, so they stay apart in greyscale and for every
+ *       colour vision, and the order of the classes reads from light to dark.</li>
  *   <li>{@code label-contrast}: the smallest WCAG 2.2 contrast of each fill's label colour, at least 4.5.</li>
- *   <li>{@code border-contrast-background}, {@code hatch-contrast-background}, {@code border-contrast-fills},
- *       {@code hatch-contrast-fills}: WCAG 2.2 non-text contrast (SC 1.4.11), at least 3.</li>
+ *   <li>{@code border-contrast-background}, {@code hatch-contrast-background}: WCAG 2.2 non-text contrast
+ *       (SC 1.4.11) of dark (light) lines against the page, at least 3.</li>
+ *   <li>{@code border-contrast-fills}, {@code hatch-contrast-fills} (qualitative sets, whose fills are all of
+ *       middle lightness): the same lines against every fill, at least 3. Ordered ramps reach from near the
+ *       page to far from it, so no one line colour can keep 3:1 against all their fills; lines drawn over
+ *       their fills take each fill's label colour instead ({@code label-contrast}).</li>
  * </ul>
  *
  * <p>Threshold {@value #DISTINGUISHABLE_DELTA_E}: three just-noticeable differences in OKLab (the JND is
@@ -30,6 +36,8 @@ import aequa.colour.ColourRamp.RampCheck;
 final class RampChecks {
 
     static final double DISTINGUISHABLE_DELTA_E = 0.06;
+    /** Three JNDs of OKLab lightness (the JND is 0.02, CSS Color Module Level 4, section 13.2). */
+    static final double MINIMUM_LIGHTNESS_STEP = 0.06;
 
     private RampChecks() {
     }
@@ -44,7 +52,7 @@ final class RampChecks {
         }
         if (!qualitative) {
             double step = smallestLightnessStep(fills, "diverging".equals(scheme), NonTextColours.isLight(nonText.background()));
-            checks.add(new RampCheck("lightness-monotonic", step > 0, step, 0));
+            checks.add(atLeast("lightness-step", step, MINIMUM_LIGHTNESS_STEP));
         }
         double label = Double.POSITIVE_INFINITY;
         for (int i = 0; i < fills.size(); i++) {
@@ -55,10 +63,12 @@ final class RampChecks {
                 WcagContrast.ratio(nonText.border(), nonText.background()), WcagContrast.NON_TEXT_MINIMUM));
         checks.add(atLeast("hatch-contrast-background",
                 WcagContrast.ratio(nonText.noDataHatch(), nonText.noDataGround()), WcagContrast.NON_TEXT_MINIMUM));
-        checks.add(atLeast("border-contrast-fills", smallestContrast(nonText.border(), fills),
-                WcagContrast.NON_TEXT_MINIMUM));
-        checks.add(atLeast("hatch-contrast-fills", smallestContrast(nonText.noDataHatch(), fills),
-                WcagContrast.NON_TEXT_MINIMUM));
+        if (qualitative) {
+            checks.add(atLeast("border-contrast-fills", smallestContrast(nonText.border(), fills),
+                    WcagContrast.NON_TEXT_MINIMUM));
+            checks.add(atLeast("hatch-contrast-fills", smallestContrast(nonText.noDataHatch(), fills),
+                    WcagContrast.NON_TEXT_MINIMUM));
+        }
         return checks;
     }
 

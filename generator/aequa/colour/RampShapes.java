@@ -11,12 +11,30 @@ import java.util.stream.Collectors;
  *
  * <p>Lightness runs linearly in OKLab L, whose steps Ottosson 2020 fits to perceived lightness, from the
  * "quiet" end (close to the page: light on a light page) to the "loud" end. Chroma grows with distance from
- * the quiet end, so the quietest class is a faint tint and the loudest the most saturated.
+ * the quiet end up to {@value #CHROMA_PEAK_AT} of the way, then eases to {@value #LOUD_CHROMA_SHARE} of the
+ * peak at the loud end ({@link #chromaShare}): the quietest class is a faint tint, the middle classes the most
+ * saturated, and the darkest class a deep, less saturated shade. Full chroma at OKLab L 0.3 would need
+ * more than 240 % total ink in print (newsprint's usual limit) and looks nearly black-and-garish on screen;
+ * the eased end keeps every generated sequential ramp within that limit (tested with the naive separation
+ * in ColourMeasuresTest). The shape follows the common practice of sequential ramps whose chroma arcs over
+ * the lightness range.
  */
 final class RampShapes {
 
     /** Share of the maximum chroma kept at the quiet end of a sequential ramp, so it is a tint, not grey. */
     private static final double QUIET_CHROMA_SHARE = 0.15;
+    /** Where along the ramp (0 quiet, 1 loud) chroma peaks. */
+    static final double CHROMA_PEAK_AT = 0.7;
+    /** Share of the peak chroma kept at the loud end. */
+    static final double LOUD_CHROMA_SHARE = 0.5;
+
+    /** The share of the maximum chroma at {@code t} along a ramp, {@code quietShare} at 0 (see class comment). */
+    static double chromaShare(double t, double quietShare) {
+        if (t <= CHROMA_PEAK_AT) {
+            return quietShare + (1 - quietShare) * t / CHROMA_PEAK_AT;
+        }
+        return 1 - (1 - LOUD_CHROMA_SHARE) * (t - CHROMA_PEAK_AT) / (1 - CHROMA_PEAK_AT);
+    }
 
     private RampShapes() {
     }
@@ -40,7 +58,7 @@ final class RampShapes {
         List<Rgb> fills = new ArrayList<>(count);
         for (int i = 0; i < count; i++) {
             double t = count == 1 ? 1 : (double) i / (count - 1);
-            double chroma = shape.maxChroma() * (QUIET_CHROMA_SHARE + (1 - QUIET_CHROMA_SHARE) * t);
+            double chroma = shape.maxChroma() * chromaShare(t, QUIET_CHROMA_SHARE);
             fills.add(GamutMapping.toRgb(new OkLch(shape.lightnessAt(t), chroma, hueDeg)));
         }
         return fills;
@@ -61,7 +79,7 @@ final class RampShapes {
         for (int j = 1; j <= half; j++) {
             double t = odd ? (double) j / half : (2.0 * j - 1) / (2.0 * half - 1);
             double lightness = shape.lightnessAt(t);
-            double chroma = shape.maxChroma() * t;
+            double chroma = shape.maxChroma() * chromaShare(t, 0);
             low.add(GamutMapping.toRgb(new OkLch(lightness, chroma, lowHueDeg)));
             high.add(GamutMapping.toRgb(new OkLch(lightness, chroma, highHueDeg)));
         }

@@ -11,7 +11,9 @@ import aequa.projection.ProjectionParameter;
 /**
  * The words under the map. The caption states the projection and its parameters, the datum, the angular
  * distortion (Tissot's omega, the largest angular deformation at a point) over the data, the area check and
- * the area scale; the credits state the source and the date of the figures, then any notices.
+ * the area scale; the credits state the source and the date of the figures, then the author's notes. Findings
+ * of the checks (join warnings, dropped islands) are for the author, never printed in the graphic: they go to
+ * the terminal, report.json and the method page.
  */
 final class Caption {
 
@@ -68,7 +70,7 @@ final class Caption {
         text.append(", mean ").append(Numbers.trim(choice.omegaMeanDeg(), 1)).append("\u00b0.");
     }
 
-    /** Source, date of the figures, then the notices, as one paragraph. */
+    /** Source, date of the figures, then the map's notes, as one paragraph. */
     static String credits(MapModel model) {
         List<String> parts = new ArrayList<>();
         if (!model.spec().source().isBlank()) {
@@ -77,8 +79,8 @@ final class Caption {
         if (!model.spec().asOf().isBlank()) {
             parts.add("Figures: " + model.spec().asOf().strip() + ".");
         }
-        for (String notice : model.notices()) {
-            parts.add(notice.strip());
+        if (!model.spec().notes().isBlank()) {
+            parts.add(model.spec().notes().strip());
         }
         return String.join(" ", parts);
     }

@@ -15,6 +15,7 @@ import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
 import aequa.classes.ClassMethod;
 import aequa.classes.Classification;
+import aequa.classes.FigureText;
 import aequa.colour.Rgb;
 import aequa.statistics.FigureStatus;
 
@@ -52,8 +53,9 @@ final class Legend {
         this.em = theme.typePt().legend() * type.unitsPerPt();
         Classification classes = model.classification();
         List<Double> limits = classes.limits();
+        int decimals = FigureText.limitDecimals(limits);
         for (int i = 0; i < classes.classCount() && i < model.ramp().fills().size(); i++) {
-            String range = Numbers.compact(limits.get(i)) + " \u2013 " + Numbers.compact(limits.get(i + 1));
+            String range = Numbers.format(limits.get(i), decimals) + " \u2013 " + Numbers.format(limits.get(i + 1), decimals);
             classEntries.add(new Entry(model.ramp().fills().get(i), RegionFills.Hatch.NONE, false, range,
                     "(" + classes.counts().get(i) + ")"));
         }

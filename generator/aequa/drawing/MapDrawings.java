@@ -7,8 +7,6 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 import javax.imageio.ImageIO;
 
@@ -27,10 +25,6 @@ import aequa.atlas.MapModel;
  * Nothing is written to disk here.
  */
 public final class MapDrawings {
-
-    /** PDF dates are replaced by this fixed instant so PDFs are reproducible (JFreePDF stamps the clock). */
-    private static final String FIXED_PDF_DATE = "D:20000101000000";
-    private static final Pattern PDF_DATE = Pattern.compile("/(ModDate|CreationDate) \\(D:\\d{14}");
 
     private MapDrawings() {
     }
@@ -148,15 +142,7 @@ public final class MapDrawings {
         g.scale(ptPerMm, ptPerMm);
         Canvas canvas = new Canvas(g, type);
         painter.paint(canvas, layout, medium.coordinates(), false);
-        return drawn(DrawnMap.Format.PDF, fixDates(document.getPDFBytes()), layout, "mm", canvas);
-    }
-
-    /** Overwrites JFreePDF's clock dates with a fixed one of the same length, so xref offsets stay valid. */
-    private static byte[] fixDates(byte[] pdf) {
-        String text = new String(pdf, StandardCharsets.ISO_8859_1);
-        Matcher m = PDF_DATE.matcher(text);
-        String fixed = m.replaceAll(r -> "/" + r.group(1) + " (" + FIXED_PDF_DATE);
-        return fixed.getBytes(StandardCharsets.ISO_8859_1);
+        return drawn(DrawnMap.Format.PDF, PdfInformation.rewritten(document.getPDFBytes(), model.spec().title()), layout, "mm", canvas);
     }
 
     private static DrawnMap drawn(DrawnMap.Format format, byte[] bytes, Layout layout, String unit, Canvas canvas) {

@@ -2,10 +2,9 @@ package aequa.drawing;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;
-import java.text.DecimalFormat;
-import java.text.DecimalFormatSymbols;
 import java.util.List;
-import java.util.Locale;
+
+import aequa.classes.FigureText;
 
 /**
  * Numbers as readers see them in legends and captions: thousands grouped with a comma, a point for decimals,
@@ -13,22 +12,12 @@ import java.util.Locale;
  */
 final class Numbers {
 
-    private static final DecimalFormatSymbols SYMBOLS = DecimalFormatSymbols.getInstance(Locale.ROOT);
-
     private Numbers() {
     }
 
-    /** {@code value} with exactly {@code decimals} decimals, e.g. {@code 12,345.6}. */
+    /** {@code value} with exactly {@code decimals} decimals, e.g. {@code 12,345.6} (see {@link FigureText}). */
     static String format(double value, int decimals) {
-        if (!Double.isFinite(value)) {
-            return "–";
-        }
-        DecimalFormat format = new DecimalFormat("#,##0", SYMBOLS);
-        format.setMinimumFractionDigits(decimals);
-        format.setMaximumFractionDigits(decimals);
-        format.setRoundingMode(RoundingMode.HALF_EVEN);
-        String text = format.format(value);
-        return text.startsWith("-") ? "\u2212" + text.substring(1) : text;
+        return FigureText.format(value, decimals);
     }
 
     /**

@@ -10,6 +10,7 @@ import org.locationtech.jts.geom.Geometry;
 import aequa.atlas.MapModel;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
+import aequa.classes.FigureText;
 import aequa.colour.Rgb;
 import aequa.statistics.FigureStatus;
 
@@ -100,7 +101,7 @@ final class RegionLayer {
             return statusName(value).replace('-', ' ');
         }
         String unit = model.spec().unit();
-        String figure = Numbers.trim(value.normalisedValue(), 4);
+        String figure = FigureText.figure(value.normalisedValue(), model.classification().limits());
         String text = unit.isBlank() ? figure : figure + " " + unit;
         return value.unreliable() ? text + " (unreliable)" : text;
     }

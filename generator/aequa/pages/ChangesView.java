@@ -23,15 +23,18 @@ public record ChangesView(String basis, List<MapChange> maps, int unchangedCount
      * @param projectionChange "from -> to" when the projection changed, else empty
      * @param breaksChange   "from -> to" when the class limits moved, else empty
      * @param classChanges   regions whose class changed
+     * @param valueChanges   regions whose figure changed within the same class (from and to are figures)
      * @param regionsAdded   keys of regions new in this edition
      * @param regionsRemoved keys of regions gone since the previous edition
      * @param pageHref       link to the map's page, or empty when the map was removed
      */
     public record MapChange(String id, String title, String state, String asOfChange, String projectionChange,
-                            String breaksChange, List<ClassChange> classChanges, List<String> regionsAdded,
+                            String breaksChange, List<ClassChange> classChanges, List<ClassChange> valueChanges,
+                            List<String> regionsAdded,
                             List<String> regionsRemoved, String pageHref) {
         public MapChange {
             classChanges = List.copyOf(classChanges);
+            valueChanges = List.copyOf(valueChanges);
             regionsAdded = List.copyOf(regionsAdded);
             regionsRemoved = List.copyOf(regionsRemoved);
         }

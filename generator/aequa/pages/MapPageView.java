@@ -15,17 +15,16 @@ import java.util.List;
  *                    that the drawing stage did not escape
  * @param notes       the map's notes, or empty
  * @param source      the credit for the figures, or empty
- * @param notices     what a reader should know about this map's data (missing figures, dropped islands)
- * @param legend      the classes, for the HTML legend that repeats the one drawn in the SVG
+ * @param legend      the classes, for the HTML legend that repeats the one drawn in the SVG (empty for circles)
+ * @param circleKey   for a map of proportional circles, the sentence that says what their areas show; else empty
  * @param downloads   the files readers can take away
  * @param figuresHref link to the map's data table, relative to this page
  */
 public record MapPageView(String id, String title, String unit, String asOf, String caption, String summary,
-                          String svg, String notes, String source, List<String> notices, List<LegendRow> legend,
+                          String svg, String notes, String source, List<LegendRow> legend, String circleKey,
                           List<Download> downloads, String figuresHref) {
 
     public MapPageView {
-        notices = List.copyOf(notices);
         legend = List.copyOf(legend);
         downloads = List.copyOf(downloads);
     }

@@ -32,18 +32,21 @@ public record MethodView(List<MapMethod> maps) {
      * @param normalisation    a sentence saying what the value was divided by
      * @param source           the credit for the figures
      * @param asOf             the date the figures refer to
+     * @param checkNotes       what the checks of the data found for this map (figures that matched no region,
+     *                         islands too small to draw), for the author and careful readers
      * @param mapHref          link to the map's page, relative to the site root
      */
     public record MapMethod(String id, String title, String projectionName, String reason, List<String> parameters,
                             String omegaMaxDeg, String omegaMeanDeg, List<String> runnersUp, String areaErrorPercent,
                             String areaWorstKey, String areaTolerancePercent, boolean areaPassed, String classMethod,
                             List<String> limits, List<Integer> counts, String normalisation, String source,
-                            String asOf, String mapHref) {
+                            String asOf, List<String> checkNotes, String mapHref) {
         public MapMethod {
             parameters = List.copyOf(parameters);
             runnersUp = List.copyOf(runnersUp);
             limits = List.copyOf(limits);
             counts = List.copyOf(counts);
+            checkNotes = List.copyOf(checkNotes);
         }
     }
 }

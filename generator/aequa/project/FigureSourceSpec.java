@@ -3,9 +3,9 @@ package aequa.project;
 import java.util.List;
 
 /**
- * A statistics source: a CSV file, or a table or view in a SQLite/GeoPackage file.
+ * A statistics source: a CSV file, a table or view in a SQLite/GeoPackage file, or a sheet of a workbook.
  *
- * @param file            path relative to the project folder ({@code .csv}, {@code .tsv}, {@code .sqlite}, {@code .gpkg})
+ * @param file            path relative to the project folder ({@code .csv}, {@code .tsv}, {@code .sqlite}, {@code .gpkg}, {@code .xlsx})
  * @param table           table or view name, for database files
  * @param key             column holding the region key
  * @param layout          {@code wide} (a column per indicator) or {@code long} (key, indicator, period, value rows)
@@ -19,11 +19,14 @@ import java.util.List;
  * @param suppressed      cell texts that mean "withheld", for example for confidentiality
  * @param notApplicable   cell texts that mean "not applicable"
  * @param keyMatching     {@code exact} or {@code relaxed} (opt-in: case, whitespace and leading zeros ignored)
+ * @param sheet           workbooks ({@code .xlsx}): the sheet's name, or its position counted from 1; empty for the first
+ * @param headerRow       workbooks: the row (counted from 1, as the spreadsheet shows it) holding the column names;
+ *                        null to find it (the first row naming the key column, and the columns the layout needs)
  */
 public record FigureSourceSpec(String file, String table, String key, String layout, String indicatorColumn,
                                String periodColumn, String valueColumn, String delimiter, String decimal,
                                String thousands, List<String> missing, List<String> suppressed,
-                               List<String> notApplicable, String keyMatching) {
+                               List<String> notApplicable, String keyMatching, String sheet, Integer headerRow) {
 
     public FigureSourceSpec {
         table = table == null ? "" : table;
@@ -39,5 +42,15 @@ public record FigureSourceSpec(String file, String table, String key, String lay
         suppressed = suppressed == null ? List.of() : List.copyOf(suppressed);
         notApplicable = notApplicable == null ? List.of() : List.copyOf(notApplicable);
         keyMatching = keyMatching == null ? "exact" : keyMatching;
+        sheet = sheet == null ? "" : sheet;
+    }
+
+    /** A source that is not a workbook. */
+    public FigureSourceSpec(String file, String table, String key, String layout, String indicatorColumn,
+                            String periodColumn, String valueColumn, String delimiter, String decimal,
+                            String thousands, List<String> missing, List<String> suppressed,
+                            List<String> notApplicable, String keyMatching) {
+        this(file, table, key, layout, indicatorColumn, periodColumn, valueColumn, delimiter, decimal, thousands,
+                missing, suppressed, notApplicable, keyMatching, "", null);
     }
 }

@@ -1,5 +1,6 @@
 package aequa.project;
 
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashSet;
@@ -26,6 +27,7 @@ final class ProjectChecks {
     private final YamlLocations locations;
     private final Findings findings;
 
+    /** @param projectDir the project folder's real path ({@link Path#toRealPath}) */
     ProjectChecks(Path projectDir, ProjectFile project, YamlLocations locations, Findings findings) {
         this.projectDir = projectDir;
         this.project = project;
@@ -48,7 +50,11 @@ final class ProjectChecks {
     }
 
     private void checkRegionSource(String at, RegionSourceSpec source) {
-        checkFile(at, source.file(), List.of(".geojson", ".json", ".gpkg"));
+        checkFile(at, source.file(), List.of(".geojson", ".json", ".topojson", ".gpkg", ".shp", ".zip"));
+        onlyFor(at + "/layer", source.layer(), source.file(), List.of(".gpkg", ".zip"), "layer",
+                "a GeoPackage layer, or a Shapefile inside a zip");
+        onlyFor(at + "/object", source.object(), source.file(), List.of(".topojson", ".json"), "object",
+                "the object of a TopoJSON topology");
         if (source.key().isBlank()) {
             error("project-missing-key", at + "/key", "The region source has an empty 'key'.",
                     "Name the property that holds each region's code, or '" + RegionSourceSpec.FEATURE_ID + "' for the feature id.");
@@ -56,7 +62,12 @@ final class ProjectChecks {
     }
 
     private void checkFigureSource(String at, FigureSourceSpec source) {
-        checkFile(at, source.file(), List.of(".csv", ".tsv", ".txt", ".sqlite", ".db", ".gpkg"));
+        checkFile(at, source.file(), List.of(".csv", ".tsv", ".txt", ".xlsx", ".xlsm", ".sqlite", ".db", ".gpkg"));
+        onlyFor(at + "/table", source.table(), source.file(), List.of(".sqlite", ".db", ".gpkg"), "table",
+                "a table or view of a database");
+        onlyFor(at + "/sheet", source.sheet(), source.file(), List.of(".xlsx", ".xlsm"), "sheet", "a sheet of a workbook");
+        onlyFor(at + "/header-row", source.headerRow() == null ? "" : source.headerRow().toString(), source.file(),
+                List.of(".xlsx", ".xlsm"), "header-row", "the header row of a workbook sheet");
         oneOf(at + "/layout", source.layout(), List.of("wide", "long"));
         oneOf(at + "/decimal", source.decimal(), List.of(".", ","));
         oneOf(at + "/delimiter", source.delimiter(), List.of("", ",", ";", "\t", "|"));
@@ -70,6 +81,11 @@ final class ProjectChecks {
                     "The default, 1e-4, allows 0.01 % between a region's drawn and true area.");
         }
         oneOf("/checks/missing-figures", checks.missingFigures(), List.of("warning", "error"));
+        if (!(checks.minMatchedPercent() >= 0 && checks.minMatchedPercent() <= 100)) {
+            error("project-bad-value", "/checks/min-matched-percent",
+                    "'min-matched-percent' must be a number from 0 to 100.",
+                    "The default, 95, stops a build when more than 5 % of a map's regions find no figure; 0 turns the check off.");
+        }
     }
 
     private void checkMap(String at, MapSpec map, Set<String> ids) {
@@ -133,15 +149,40 @@ final class ProjectChecks {
             return;
         }
         Path path = projectDir.resolve(file).normalize();
-        if (!path.startsWith(projectDir.normalize())) {
+        if (!path.startsWith(projectDir)) {
             error("project-file-outside", at + "/file", "'" + file + "' lies outside the project folder.",
                     "Keep data files inside the project folder, so the project can be moved and rebuilt.");
+        } else if (Files.isRegularFile(path) && !realPathInside(path)) {
+            error("project-file-outside", at + "/file", "'" + file + "' is a link that leads outside the project folder.",
+                    "Copy the file into the project folder instead of linking to it; aequa reads no file outside it.");
         } else if (!Files.isRegularFile(path)) {
             error("project-file-not-found", at + "/file", "The file '" + file + "' does not exist.",
                     "Paths are relative to the folder that holds " + ProjectFile.FILE_NAME + ".");
         } else if (extensions.stream().noneMatch(e -> file.toLowerCase(java.util.Locale.ROOT).endsWith(e))) {
             error("project-file-type", at + "/file", "'" + file + "' has an unsupported file type.",
                     "Supported here: " + String.join(", ", extensions) + ".");
+        }
+    }
+
+    /**
+     * One vocabulary for all readers: {@code file}, {@code key}, {@code name}, and the word that picks a part of
+     * the file ({@code layer}, {@code object}, {@code table}, {@code sheet}), each meaningful for some file types
+     * only; set for another type it is a mistake to point out, not a setting to ignore.
+     */
+    private void onlyFor(String at, String value, String file, List<String> extensions, String setting, String what) {
+        String lower = file == null ? "" : file.toLowerCase(java.util.Locale.ROOT);
+        if (!value.isEmpty() && extensions.stream().noneMatch(lower::endsWith)) {
+            error("project-setting-not-applicable", at, "'" + setting + "' names " + what + ", but '" + file + "' is not one.",
+                    "Remove '" + setting + "', or use it with a " + String.join(", ", extensions) + " file.");
+        }
+    }
+
+    /** Whether {@code path}, with every link resolved, is still inside the (real) project folder. */
+    private boolean realPathInside(Path path) {
+        try {
+            return path.toRealPath().startsWith(projectDir);
+        } catch (IOException unreadable) {
+            return false;
         }
     }
 

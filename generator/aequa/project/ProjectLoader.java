@@ -48,7 +48,10 @@ public final class ProjectLoader {
             return Optional.empty();
         }
         String yaml;
+        Path dir;
         try {
+            // the real path, so that '.' and links compare with the paths of data files (ProjectChecks)
+            dir = projectDir.toRealPath();
             yaml = Files.readString(file, StandardCharsets.UTF_8);
         } catch (IOException e) {
             findings.add(Finding.error("project-file-unreadable", ProjectFile.FILE_NAME, "",
@@ -56,12 +59,12 @@ public final class ProjectLoader {
             return Optional.empty();
         }
         ProjectFile project;
-        YamlLocations locations;
+        YamlLocations locations = null;
         try {
             locations = YamlLocations.scan(yaml);
             project = YAML.readValue(yaml, ProjectFile.class);
         } catch (JsonProcessingException e) {
-            findings.add(describe(e));
+            findings.add(describe(e, locations));
             return Optional.empty();
         } catch (IOException e) {
             findings.add(Finding.error("project-file-unreadable", ProjectFile.FILE_NAME, "", e.getMessage(), ""));
@@ -73,19 +76,23 @@ public final class ProjectLoader {
             return Optional.empty();
         }
         int before = findings.list().size();
-        new ProjectChecks(projectDir, project, locations, findings).run();
+        new ProjectChecks(dir, project, locations, findings).run();
         boolean broken = findings.list().subList(before, findings.list().size()).stream()
                 .anyMatch(f -> f.severity() == aequa.findings.Severity.ERROR);
-        return broken ? Optional.empty() : Optional.of(new LoadedProject(projectDir, project, locations));
+        return broken ? Optional.empty() : Optional.of(new LoadedProject(dir, project, locations));
     }
 
-    private static Finding describe(JsonProcessingException e) {
+    private static Finding describe(JsonProcessingException e, YamlLocations locations) {
         String place = e.getLocation() == null ? "" : YamlLocations.describe(e.getLocation());
         if (e instanceof UnrecognizedPropertyException unknown) {
+            if (locations != null) {
+                String keyPlace = locations.place(pointerOf(unknown));
+                place = keyPlace.isEmpty() ? place : keyPlace;
+            }
+            java.util.List<String> known = unknown.getKnownPropertyIds().stream().map(Object::toString).sorted().toList();
             return Finding.error("project-unknown-key", ProjectFile.FILE_NAME, place,
                     "Unknown key '" + unknown.getPropertyName() + "'" + where(unknown) + ".",
-                    "Known keys here: " + String.join(", ", unknown.getKnownPropertyIds().stream()
-                            .map(Object::toString).sorted().toList()) + ".");
+                    KeySuggestion.hint(unknown.getPropertyName(), known));
         }
         if (e instanceof InvalidFormatException invalid) {
             return Finding.error("project-wrong-type", ProjectFile.FILE_NAME, place,
@@ -105,6 +112,19 @@ public final class ProjectLoader {
     private static String where(JsonMappingException e) {
         String path = pathOf(e);
         return path.isEmpty() ? "" : " at " + path;
+    }
+
+    /** The JSON Pointer of the failing key or value: {@code /maps/2/classes/count}. */
+    private static String pointerOf(JsonMappingException e) {
+        StringBuilder pointer = new StringBuilder();
+        for (JsonMappingException.Reference ref : e.getPath()) {
+            if (ref.getFieldName() != null) {
+                pointer.append('/').append(ref.getFieldName().replace("~", "~0").replace("/", "~1"));
+            } else if (ref.getIndex() >= 0) {
+                pointer.append('/').append(ref.getIndex());
+            }
+        }
+        return pointer.toString();
     }
 
     /** The path of the failing value, as the user would write it: {@code maps[2].classes.count}. */

@@ -3,12 +3,17 @@ package aequa.project;
 /**
  * A geometry source: polygons of regions.
  *
- * @param file  path relative to the project folder; GeoJSON ({@code .geojson}, {@code .json}) or GeoPackage ({@code .gpkg})
- * @param key   the property that holds each region's key, or {@value #FEATURE_ID} for the GeoJSON feature id
- * @param name  the property that holds the region's display name, or empty to show the key
- * @param layer the GeoPackage layer (table) name; empty for GeoJSON or a one-layer GeoPackage
+ * @param file   path relative to the project folder: GeoJSON ({@code .geojson}, {@code .json}), TopoJSON
+ *               ({@code .topojson}, or {@code .json} with {@code object} set), GeoPackage ({@code .gpkg}) or
+ *               Shapefile ({@code .shp}, or a {@code .zip} holding one)
+ * @param key    the property (GeoJSON, TopoJSON), column (GeoPackage) or field (Shapefile) that holds each
+ *               region's key, or {@value #FEATURE_ID} for the feature id (the record number of a Shapefile)
+ * @param name   the property that holds the region's display name, or empty to show the key
+ * @param layer  the GeoPackage layer (table) name, or the Shapefile's name (without {@code .shp}) inside a zip
+ *               holding several; empty when the file holds one
+ * @param object the TopoJSON object (a key of the topology's {@code objects}); empty when it holds one
  */
-public record RegionSourceSpec(String file, String key, String name, String layer) {
+public record RegionSourceSpec(String file, String key, String name, String layer, String object) {
 
     public static final String FEATURE_ID = "@id";
 
@@ -16,5 +21,11 @@ public record RegionSourceSpec(String file, String key, String name, String laye
         key = key == null ? FEATURE_ID : key;
         name = name == null ? "" : name;
         layer = layer == null ? "" : layer;
+        object = object == null ? "" : object;
+    }
+
+    /** A source that is not a TopoJSON file. */
+    public RegionSourceSpec(String file, String key, String name, String layer) {
+        this(file, key, name, layer, "");
     }
 }

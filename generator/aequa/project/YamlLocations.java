@@ -28,9 +28,8 @@ final class YamlLocations implements ProjectPlaces {
         try (JsonParser parser = new YAMLFactory().createParser(yaml)) {
             JsonToken token;
             while ((token = parser.nextToken()) != null) {
-                if (token == JsonToken.FIELD_NAME) {
-                    continue;
-                }
+                // a key's own place comes first (its value may start on a later line); the value's is kept
+                // only where there is no key (list items, the root)
                 JsonPointer pointer = parser.getParsingContext().pathAsPointer();
                 if (token == JsonToken.END_OBJECT || token == JsonToken.END_ARRAY) {
                     continue;

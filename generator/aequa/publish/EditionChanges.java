@@ -15,7 +15,9 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
  * different, compared map by map (matched on id) from the two reports' {@code maps} sections.
  *
  * <p>Per map it lists: the date of the figures, a projection change (family or parameters), class limits
- * that moved, regions whose class (in the latest period) changed, and regions added or removed. Maps
+ * that moved, regions whose class (in the latest period) changed, regions whose figure changed within the
+ * same class ({@code valueChanged}: an edited figure must show even when its colour did not), and regions
+ * added or removed. Maps
  * without change are counted, not listed. When the figures are identical to the previous edition
  * ({@code editionDigest} equal), the previous comparison is carried over unchanged, so republishing the same
  * inputs gives the same bytes and the page keeps showing what the last real update changed.
@@ -100,6 +102,7 @@ final class EditionChanges {
         Map<String, JsonNode> regionsWas = byKey(was.path("regions"));
         Map<String, JsonNode> regionsNow = byKey(now.path("regions"));
         ArrayNode classChanged = diff.putArray("classChanged");
+        ArrayNode valueChanged = diff.putArray("valueChanged");
         ArrayNode added = diff.putArray("regionsAdded");
         ArrayNode removed = diff.putArray("regionsRemoved");
         for (Map.Entry<String, JsonNode> r : regionsNow.entrySet()) {
@@ -110,10 +113,14 @@ final class EditionChanges {
                 ObjectNode c = classChanged.addObject().put("key", r.getKey()).put("name", r.getValue().path("name").asText());
                 c.set("from", before.path("class").deepCopy());
                 c.set("to", r.getValue().path("class").deepCopy());
+            } else if (!before.path("normalisedValue").equals(r.getValue().path("normalisedValue"))) {
+                ObjectNode c = valueChanged.addObject().put("key", r.getKey()).put("name", r.getValue().path("name").asText());
+                c.set("from", before.path("normalisedValue").deepCopy());
+                c.set("to", r.getValue().path("normalisedValue").deepCopy());
             }
         }
         regionsWas.keySet().stream().filter(k -> !regionsNow.containsKey(k)).forEach(removed::add);
-        any |= classChanged.size() + added.size() + removed.size() > 0;
+        any |= classChanged.size() + valueChanged.size() + added.size() + removed.size() > 0;
         return any ? diff : null;
     }
 

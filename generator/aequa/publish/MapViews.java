@@ -11,6 +11,7 @@ import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
 import aequa.classes.ClassMethod;
 import aequa.classes.Classification;
+import aequa.classes.FigureText;
 import aequa.pages.FiguresView;
 import aequa.pages.IndexView;
 import aequa.pages.MapPageView;
@@ -37,7 +38,7 @@ final class MapViews {
                 new MapPageView.Download("Map as picture, double resolution (PNG)", fileName(files.pngDouble()), "image/png"),
                 new MapPageView.Download("Figures shown (CSV)", fileName(files.csv()), "text/csv"));
         return new MapPageView(files.fileId(), map.spec().title(), map.spec().unit(), map.spec().asOf(), caption(map),
-                summary(map), webSvg, map.spec().notes(), map.spec().source(), map.notices(), legend(map), downloads,
+                summary(map), webSvg, map.spec().notes(), map.spec().source(), circles(map) ? List.of() : legend(map), circleKey(map), downloads,
                 fileName(files.figures()));
     }
 
@@ -49,11 +50,11 @@ final class MapViews {
                 RegionValue v = p < region.values().size() ? region.values().get(p) : RegionValue.noData();
                 boolean reported = v.status() == FigureStatus.REPORTED;
                 cells.add(new FiguresView.Cell(FiguresCsv.statusText(v), reported ? NumberText.of(v.value()) : "",
-                        reported ? NumberText.of(v.normalisedValue()) : "",
+                        reported ? figure(map, v.normalisedValue()) : "",
                         v.classIndex() < 0 ? "" : Integer.toString(v.classIndex() + 1), v.unreliable(),
                         reported && Double.isFinite(v.marginOfError()) ? "\u00b1" + NumberText.of(v.marginOfError()) : ""));
             }
-            rows.add(new FiguresView.Row(region.key(), region.name(), NumberText.of(region.geodesicAreaKm2()), cells));
+            rows.add(new FiguresView.Row(region.key(), region.name(), areaText(region.geodesicAreaKm2()), cells));
         }
         return new FiguresView(files.fileId(), map.spec().title(), map.spec().unit(), map.periods(), rows,
                 fileName(files.page()), fileName(files.csv()), rows.stream().flatMap(r -> r.cells().stream()).anyMatch(c -> !c.margin().isEmpty()));
@@ -103,9 +104,9 @@ final class MapViews {
                         .thenComparing(MapRegion::key))
                 .collect(Collectors.toList());
         StringBuilder text = new StringBuilder(String.format(Locale.ROOT, "Map of %d regions", map.regions().size()));
-        if (!map.spec().unit().isEmpty()) {
-            text.append(" coloured by ").append(map.spec().unit());
-        }
+        boolean circles = circles(map);
+        String measure = map.spec().unit().isEmpty() ? "the figure" : "the figure (" + map.spec().unit() + ")";
+        text.append(circles ? "; the area of each circle shows " : "; the colour of each region shows ").append(measure);
         if (map.classification().method() != ClassMethod.UNCLASSED) {
             text.append(" in ").append(map.classification().classCount()).append(" classes");
         }
@@ -118,8 +119,8 @@ final class MapViews {
             MapRegion low = reported.get(0);
             MapRegion high = reported.get(reported.size() - 1);
             text.append(" Highest: ").append(high.name()).append(" (")
-                    .append(NumberText.of(high.values().get(latest).normalisedValue())).append("); lowest: ")
-                    .append(low.name()).append(" (").append(NumberText.of(low.values().get(latest).normalisedValue()))
+                    .append(figure(map, high.values().get(latest).normalisedValue())).append("); lowest: ")
+                    .append(low.name()).append(" (").append(figure(map, low.values().get(latest).normalisedValue()))
                     .append(").");
         }
         int without = map.regions().size() - reported.size();
@@ -130,13 +131,63 @@ final class MapViews {
         return text.toString();
     }
 
+    /**
+     * A region's area for the figures table: whole km² from 100 km² up, else two significant figures
+     * (boundary files are rarely accurate to better than a few hundredths of a region's area; report.json
+     * keeps the full figure).
+     */
+    static String areaText(double areaKm2) {
+        if (areaKm2 >= 100 || !(areaKm2 > 0)) {
+            return FigureText.format(areaKm2, 0);
+        }
+        int decimals = Math.max(0, 1 - (int) Math.floor(Math.log10(areaKm2)));
+        return FigureText.format(areaKm2, decimals);
+    }
+
+    /** A mapped figure as readers see it everywhere (see {@link FigureText}). */
+    private static String figure(MapModel map, double value) {
+        return FigureText.figure(value, map.classification().limits());
+    }
+
+    private static boolean circles(MapModel map) {
+        return "circles".equals(map.spec().display());
+    }
+
+    /** What the circles of a proportional-symbol map show, and what the largest stands for; empty otherwise. */
+    static String circleKey(MapModel map) {
+        if (!circles(map)) {
+            return "";
+        }
+        MapRegion largest = null;
+        double largestValue = Double.NEGATIVE_INFINITY;
+        int latest = map.periods().size() - 1;
+        for (MapRegion region : map.regions()) {
+            for (RegionValue v : region.values()) {
+                if (v.status() == FigureStatus.REPORTED && v.normalisedValue() > largestValue) {
+                    largest = region;
+                    largestValue = v.normalisedValue();
+                }
+            }
+        }
+        String unit = map.spec().unit().isEmpty() ? "" : " " + map.spec().unit();
+        String sentence = "The area of each circle is proportional to the figure"
+                + (unit.isEmpty() ? "" : " (" + unit.strip() + ")") + ".";
+        if (largest != null) {
+            sentence += " The largest circle" + (latest > 0 ? " of all periods" : "") + " stands for "
+                    + figure(map, largestValue) + unit
+                    + ", in " + largest.name() + ".";
+        }
+        return sentence;
+    }
+
     static List<MapPageView.LegendRow> legend(MapModel map) {
         Classification classes = map.classification();
         List<MapPageView.LegendRow> rows = new ArrayList<>();
         int fills = map.ramp().fills().size();
+        int decimals = FigureText.limitDecimals(classes.limits());
         for (int i = 0; i < classes.classCount() && fills > 0; i++) {
-            String from = NumberText.of(classes.limits().get(i));
-            String to = NumberText.of(classes.limits().get(i + 1));
+            String from = FigureText.format(classes.limits().get(i), decimals);
+            String to = FigureText.format(classes.limits().get(i + 1), decimals);
             boolean last = i == classes.classCount() - 1;
             String range = from + (last ? " to " : " to under ") + to;
             int fillIndex = Math.min(i, fills - 1);

@@ -7,10 +7,13 @@ import java.net.InetSocketAddress;
 import java.net.URI;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.nio.file.attribute.BasicFileAttributes;
 import java.time.Duration;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.Executors;
 import java.util.concurrent.ScheduledExecutorService;
 import java.util.concurrent.TimeUnit;
@@ -27,7 +30,18 @@ import com.sun.net.httpserver.HttpServer;
  * <p>Reloading: HTML responses (and only those of this server, never the files on disk) get a small script
  * that polls {@value #VERSION_PATH} and reloads the page when the number there changes. The number counts
  * successful rebuilds. A failed rebuild leaves the previous site in place (the publisher is atomic) and
- * reports through the log sink. Requests are resolved inside the output folder; anything else is a 404.
+ * reports through the log sink.
+ *
+ * <p>Containment: a request is answered only with a regular file inside the output folder, after symbolic
+ * links are resolved; a path with {@code ..} (also percent-encoded), an absolute path, a backslash or a link
+ * that leads outside gets a 404, as does anything missing.
+ *
+ * <p>Editions: the publisher builds each edition beside the output and swaps it in by renaming
+ * ({@code StagingFolder}), so the folder served never holds a half-built edition. A file is answered whole
+ * from the one edition it was opened in (an open file survives its edition's retirement); a request that
+ * falls between the two renames of a swap, or whose edition was swapped out during its lookup, looks again
+ * in the new edition instead of answering 404 (the folder's identity, its file key, tells the two apart on
+ * systems that have one).
  *
  * <p>A thin outer layer: what to rebuild is the callback's business (the CLI passes "load the atlas, then
  * publish"); this class only notices changes, serves files and counts editions.
@@ -53,7 +67,14 @@ public final class PreviewServer implements AutoCloseable {
     private static final Map<String, String> TYPES = Map.of(
             "html", "text/html; charset=utf-8", "css", "text/css; charset=utf-8",
             "js", "text/javascript; charset=utf-8", "json", "application/json",
-            "svg", "image/svg+xml", "png", "image/png", "csv", "text/csv; charset=utf-8");
+            "svg", "image/svg+xml", "png", "image/png", "csv", "text/csv; charset=utf-8", "pdf", "application/pdf");
+
+    /**
+     * The longest a request waits for an edition to be swapped in: the swap is two renames, so the output is
+     * missing for microseconds; this bound only matters if a publish is killed between them.
+     */
+    private static final long SWAP_WAIT_NANOS = Duration.ofSeconds(5).toNanos();
+    private static final long SWAP_POLL_MILLIS = 2;
 
     /** The work to redo when the project changes; its exceptions are reported, not thrown. */
     @FunctionalInterface
@@ -147,13 +168,13 @@ public final class PreviewServer implements AutoCloseable {
                 return;
             }
             Path file = resolve(path);
-            if (file == null || !Files.isRegularFile(file)) {
+            byte[] body = file == null ? null : readThroughSwaps(file);
+            if (body == null) {
                 send(exchange, 404, "text/plain; charset=utf-8", "not found".getBytes(StandardCharsets.UTF_8));
                 return;
             }
             String name = file.getFileName().toString();
             String extension = name.substring(name.lastIndexOf('.') + 1).toLowerCase(Locale.ROOT);
-            byte[] body = Files.readAllBytes(file);
             if (extension.equals("html")) {
                 body = withReloadScript(body);
             }
@@ -171,6 +192,56 @@ public final class PreviewServer implements AutoCloseable {
             return SafePaths.inside(siteDir, relative);
         } catch (IllegalArgumentException outside) { // also InvalidPathException
             return null;
+        }
+    }
+
+    /** The bytes of {@code file} from one whole edition, or null when no edition has it inside the site folder. */
+    private byte[] readThroughSwaps(Path file) throws IOException {
+        long deadline = System.nanoTime() + SWAP_WAIT_NANOS;
+        while (System.nanoTime() < deadline) {
+            Optional<Object> edition = editionKey();
+            if (edition.isEmpty()) {
+                if (!pause()) {
+                    return null;
+                }
+                continue; // between the two renames of a swap
+            }
+            try {
+                if (isContained(file)) {
+                    return Files.readAllBytes(file);
+                }
+            } catch (NoSuchFileException swappedOut) {
+                // its edition was retired between the lookup and the read
+            }
+            if (edition.equals(editionKey())) {
+                return null; // the same edition throughout: the file is not there
+            }
+        }
+        return null;
+    }
+
+    /** Whether {@code file} is a regular file whose real path, links resolved, lies inside the site folder's. */
+    private boolean isContained(Path file) throws IOException {
+        return Files.isRegularFile(file) && file.toRealPath().startsWith(siteDir.toRealPath());
+    }
+
+    /** The identity of the edition now in place (its folder's file key), empty while none is. */
+    private Optional<Object> editionKey() {
+        try {
+            Object key = Files.readAttributes(siteDir, BasicFileAttributes.class).fileKey();
+            return Optional.of(key == null ? siteDir : key);
+        } catch (IOException missing) {
+            return Optional.empty();
+        }
+    }
+
+    private static boolean pause() {
+        try {
+            Thread.sleep(SWAP_POLL_MILLIS);
+            return true;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            return false;
         }
     }
 

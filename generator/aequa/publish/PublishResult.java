@@ -19,9 +19,12 @@ import java.util.Locale;
  * @param changedMaps   maps listed on the changes page (added, removed or changed); -1 when the report was
  *                      carried over unchanged from the previous edition
  * @param elapsed       wall time of the publish, for the terminal only
+ * @param userFilesKept files, links and empty folders in the output that aequa did not write, carried over
+ *                      unchanged into the new edition ({@link UserFiles}); 0 when nothing was replaced
  */
 public record PublishResult(Path outDir, boolean replaced, List<String> mapsDrawn, List<String> mapsReused,
-                            int filesWritten, int filesKept, int filesRemoved, int changedMaps, Duration elapsed) {
+                            int filesWritten, int filesKept, int filesRemoved, int changedMaps, Duration elapsed,
+                            int userFilesKept) {
 
     public PublishResult {
         mapsDrawn = List.copyOf(mapsDrawn);
@@ -40,6 +43,10 @@ public record PublishResult(Path outDir, boolean replaced, List<String> mapsDraw
                 "Published %d %s to %s (%d drawn, %d unchanged): %d files written, %d kept, %d removed, in %s.",
                 maps, maps == 1 ? "map" : "maps", outDir, mapsDrawn.size(), mapsReused.size(), filesWritten,
                 filesKept, filesRemoved, took));
+        if (userFilesKept > 0) {
+            text.append(String.format(Locale.ROOT, "%n%d %s that aequa did not write carried over unchanged.",
+                    userFilesKept, userFilesKept == 1 ? "file" : "files"));
+        }
         if (changedMaps > 0) {
             text.append(String.format(Locale.ROOT, "%n%d %s changed since the previous edition: see changes.html.",
                     changedMaps, changedMaps == 1 ? "map" : "maps"));

@@ -28,13 +28,14 @@ import aequa.publish.PublishProgress.Stage;
 /** One run of {@link SitePublisher#publish}: holds the state of a single build; used once, under the lock. */
 final class SiteBuild {
 
-    /** Kept from an existing output folder although aequa did not write it (keeps an empty folder in git). */
+    /** Allowed in a folder aequa has not published into yet (keeps an empty folder in git). */
     private static final String GIT_KEEP = ".gitkeep";
 
     private final Atlas atlas;
     private final List<Finding> findings;
     private final MapArtwork artwork;
     private final Path out;
+    private final SiteLock lock;
     private final PublishOptions options;
     private final ObjectMapper json = SiteReport.jsonMapper();
     private final Map<String, OutputManifest.Entry> next = new TreeMap<>();
@@ -45,18 +46,20 @@ final class SiteBuild {
     private int written;
     private int kept;
 
-    SiteBuild(Atlas atlas, List<Finding> findings, MapArtwork artwork, Path out, PublishOptions options) {
+    SiteBuild(Atlas atlas, List<Finding> findings, MapArtwork artwork, SiteLock lock, PublishOptions options) {
         this.atlas = atlas;
         this.findings = List.copyOf(findings);
         this.artwork = artwork;
-        this.out = out;
+        this.out = lock.outDir();
+        this.lock = lock;
         this.options = options;
     }
 
     PublishResult run(long startNanos) throws IOException {
         PublishProgress progress = options.progress();
         progress.step(Stage.PREPARE, 0, 1);
-        StagingFolder.recover(out);
+        StagingFolder.recover(out, lock.previousRunId());
+        lock.recordRun();
         refuseForeignFolder();
         PageRenderer renderer = new PageRenderer(atlas.projectDir().resolve("templates"));
         List<String> unsafe = renderer.checkTemplates();
@@ -76,7 +79,7 @@ final class SiteBuild {
         SiteView site = SiteViews.site(atlas.project().site());
         progress.step(Stage.PREPARE, 1, 1);
 
-        try (StagingFolder folder = StagingFolder.create(out)) {
+        try (StagingFolder folder = StagingFolder.create(out, lock.runId())) {
             staging = folder;
             int count = atlas.maps().size();
             Sha256 edition = new Sha256();
@@ -118,18 +121,21 @@ final class SiteBuild {
             progress.step(Stage.SWAP, 0, 1);
             OutputManifest manifest = new OutputManifest(next);
             byte[] manifestBytes = manifest.toJson(json);
-            int removed = (int) previous.entries().keySet().stream().filter(p -> !next.containsKey(p)).count();
+            int removed = (int) previous.entries().keySet().stream()
+                    .filter(p -> !next.containsKey(p) && Files.exists(out.resolve(p))).count();
             boolean unchanged = written == 0 && removed == 0 && sameBytes(OutputManifest.FILE_NAME, manifestBytes);
+            int userFilesKept = 0;
             if (!unchanged) {
+                UserFiles userFiles = UserFiles.scan(out, previous.entries().keySet());
+                userFiles.refuseConflicts(out, next.keySet());
+                userFiles.carryInto(staging);
+                userFilesKept = userFiles.count();
                 staging.write(OutputManifest.FILE_NAME, manifestBytes);
-                if (Files.isRegularFile(out.resolve(GIT_KEEP))) {
-                    staging.reuse(GIT_KEEP);
-                }
                 staging.commit();
             }
             progress.step(Stage.SWAP, 1, 1);
             return new PublishResult(out, !unchanged, mapsDrawn, mapsReused, written, kept, removed, changedMaps,
-                    Duration.ofNanos(System.nanoTime() - startNanos));
+                    Duration.ofNanos(System.nanoTime() - startNanos), userFilesKept);
         }
     }
 

@@ -12,7 +12,7 @@ public final class SiteLockedException extends IOException {
 
     SiteLockedException(Path outDir, Path lockFile, String waited) {
         super("Another aequa publish is writing " + outDir + " (lock " + lockFile + ")" + waited
-                + ". Let it finish, or run again with a longer wait for the lock.");
+                + ". Let it finish, or run again with --wait SECONDS to wait for it.");
         this.lockFile = lockFile;
     }
 

@@ -22,9 +22,15 @@ import aequa.findings.Finding;
  *     previous edition complete and untouched and removes the staging folder.</li>
  * <li><b>Exclusive</b>: a lock file beside the output ({@code .NAME.lock}) keeps two publishes of the same
  *     folder apart; the second waits up to {@link PublishOptions#lockWait()}, then fails with
- *     {@link SiteLockedException}.</li>
+ *     {@link SiteLockedException}. The output's real path (links resolved) names the lock and is where the
+ *     site is built, so an output that is a link stays a link.</li>
  * <li><b>Contained</b>: every file is written inside the output folder; file names come from file-safe ids.
  *     A non-empty folder that aequa did not write is refused ({@link PublishRefusedException}).</li>
+ * <li><b>Keeps the user's files</b>: publish replaces or deletes only files listed in the previous
+ *     edition's manifest; every other file, link and folder in the output is carried over unchanged
+ *     ({@link UserFiles}), or, when one stands where the new edition writes, the publish is refused before
+ *     anything is touched. Beside the output, only its lock file and the staging and retired folders
+ *     marked with a run's id are ever written, moved or deleted ({@link StagingFolder}).</li>
  * </ul>
  */
 public final class SitePublisher {
@@ -50,9 +56,18 @@ public final class SitePublisher {
     public static PublishResult publish(Atlas atlas, List<Finding> findings, MapArtwork artwork, Path outDir,
                                         PublishOptions options) throws IOException {
         long startNanos = System.nanoTime();
-        Path out = outDir.toAbsolutePath().normalize();
-        try (SiteLock lock = SiteLock.acquire(out, options.lockWait())) {
-            return new SiteBuild(atlas, findings, artwork, out, options).run(startNanos);
+        try (SiteLock lock = SiteLock.acquire(outDir, options.lockWait())) {
+            return new SiteBuild(atlas, findings, artwork, lock, options).run(startNanos);
         }
+    }
+
+    /**
+     * Publishes {@code atlas} into the output folder of {@code heldLock}, which the caller took (before its
+     * load step, so a busy output is reported at once) and closes afterwards; {@link PublishOptions#lockWait()}
+     * is not used.
+     */
+    public static PublishResult publish(Atlas atlas, List<Finding> findings, MapArtwork artwork, SiteLock heldLock,
+                                        PublishOptions options) throws IOException {
+        return new SiteBuild(atlas, findings, artwork, heldLock, options).run(System.nanoTime());
     }
 }

@@ -3,8 +3,10 @@ package aequa.publish;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -27,7 +29,8 @@ import aequa.projection.ProjectionParameter;
  *
  * <p>Layout (keys in this order, always): {@code format}, {@code site}, {@code editionDigest} (SHA-256 of
  * the {@code maps} section, so scripts and the next publish can tell whether the figures changed),
- * {@code maps}, {@code findings}, {@code changes}. Per map: id, title, unit, asOf, periods, source, files,
+ * {@code maps}, {@code findings} (at most {@value #FINDINGS_PER_KIND} of each code, then one entry per code
+ * with the number {@code omitted}), {@code changes}. Per map: id, title, unit, asOf, periods, source, files,
  * projection (family, name, parameters, wkt2, omegaMaxDeg, omegaMeanDeg, worst point and where it is in words,
  * omegaAreaShares below 1, 5 and 10 deg, omegaP95Deg, reason, runnersUp),
  * areaAudit (maxRelativeError, worstKey, tolerance, passed), classification (method, breaks = the class
@@ -44,6 +47,8 @@ final class SiteReport {
 
     static final String FILE_NAME = "report.json";
     static final int FORMAT = 1;
+    /** Findings of one code written in full; our choice, well past what anyone reads one by one. */
+    static final int FINDINGS_PER_KIND = 100;
 
     private SiteReport() {
     }
@@ -88,16 +93,38 @@ final class SiteReport {
         site.put("notice", atlas.project().site().notice());
         root.put("editionDigest", digest);
         root.set("maps", maps);
-        ArrayNode found = root.putArray("findings");
-        for (Finding f : findings) {
-            found.addObject().put("severity", f.severity().name().toLowerCase(Locale.ROOT)).put("code", f.code())
-                    .put("file", f.file()).put("place", f.place()).put("message", f.message()).put("hint", f.hint());
-        }
+        writeFindings(root.putArray("findings"), findings);
         root.set("changes", changes);
         byte[] body = json.writeValueAsBytes(root);
         byte[] file = java.util.Arrays.copyOf(body, body.length + 1);
         file[body.length] = '\n';
         return file;
+    }
+
+    /**
+     * The findings in order, at most {@value #FINDINGS_PER_KIND} of each code; for each code with more, a
+     * last entry of that code and severity whose {@code omitted} says how many were left out (a million
+     * unmatched keys would otherwise make a report of hundreds of megabytes). {@code aequa audit} lists all.
+     */
+    private static void writeFindings(ArrayNode found, List<Finding> findings) {
+        Map<String, Integer> seen = new LinkedHashMap<>();
+        Map<String, Finding> firstOmitted = new LinkedHashMap<>();
+        for (Finding f : findings) {
+            int count = seen.merge(f.code(), 1, Integer::sum);
+            if (count <= FINDINGS_PER_KIND) {
+                found.addObject().put("severity", f.severity().name().toLowerCase(Locale.ROOT)).put("code", f.code())
+                        .put("file", f.file()).put("place", f.place()).put("message", f.message()).put("hint", f.hint());
+            } else {
+                firstOmitted.putIfAbsent(f.code(), f);
+            }
+        }
+        firstOmitted.forEach((code, f) -> {
+            int omitted = seen.get(code) - FINDINGS_PER_KIND;
+            found.addObject().put("severity", f.severity().name().toLowerCase(Locale.ROOT)).put("code", code)
+                    .put("file", f.file()).put("place", "")
+                    .put("message", String.format(Locale.ROOT, "%,d more findings of this kind are not listed here.", omitted))
+                    .put("hint", "Run aequa audit to list every one.").put("omitted", omitted);
+        });
     }
 
     private static ObjectNode map(MapModel map, MapFiles files, ObjectMapper json) {

@@ -53,7 +53,7 @@ final class SiteViews {
                     MapViews.percent(map.areaAudit().maxRelativeError()), map.areaAudit().worstKey(),
                     MapViews.percent(map.areaAudit().tolerance()), map.areaAudit().passed(),
                     methodName(map.classification().method()), limits, map.classification().counts(),
-                    normalisation(map.spec()), map.spec().source(), map.spec().asOf(), files.get(i).page()));
+                    normalisation(map.spec()), map.spec().source(), map.spec().asOf(), map.notices(), files.get(i).page()));
         }
         return new MethodView(sections);
     }
@@ -103,12 +103,19 @@ final class SiteViews {
             List<ChangesView.ClassChange> moved = new ArrayList<>();
             m.path("classChanged").forEach(c -> moved.add(new ChangesView.ClassChange(c.path("key").asText(),
                     c.path("name").asText(), classText(c.path("from")), classText(c.path("to")))));
+            List<ChangesView.ClassChange> edited = new ArrayList<>();
+            m.path("valueChanged").forEach(c -> edited.add(new ChangesView.ClassChange(c.path("key").asText(),
+                    c.path("name").asText(), figureText(c.path("from")), figureText(c.path("to")))));
             maps.add(new ChangesView.MapChange(index < 0 ? SafePaths.fileSafeId(id) : files.get(index).fileId(),
                     m.path("title").asText(), m.path("state").asText(), fromTo(m.path("asOf")),
-                    projectionText(m.path("projection")), breaksText(m.path("breaks")), moved,
+                    projectionText(m.path("projection")), breaksText(m.path("breaks")), moved, edited,
                     texts(m.path("regionsAdded")), texts(m.path("regionsRemoved")), href));
         }
         return new ChangesView(basis, maps, changes.path("unchangedMaps").asInt());
+    }
+
+    private static String figureText(JsonNode figure) {
+        return figure.isNumber() ? NumberText.of(figure.asDouble()) : "none";
     }
 
     private static String classText(JsonNode cls) {

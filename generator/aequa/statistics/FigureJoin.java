@@ -5,6 +5,7 @@ import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
@@ -22,6 +23,9 @@ import aequa.inputs.figures.KeyMatching;
  * Joins the cells a map uses (its indicator, and the denominator, events and margin indicators when set)
  * to the regions of the geometry, and writes the join report as findings:
  * <ul>
+ *   <li>{@code join-match-low} (error, before the per-key findings): fewer regions than
+ *       {@code checks: min-matched-percent} found a figure; the message counts them and the hint says how many
+ *       unmatched keys would match with leading zeros, case and spaces ignored;</li>
  *   <li>{@code join-indicator-missing} (error): an indicator the map uses is not in the source;</li>
  *   <li>{@code join-key-unmatched} (warning): a key in the statistics matches no region, each listed,
  *       with a hint when it would match under relaxed key matching;</li>
@@ -31,6 +35,8 @@ import aequa.inputs.figures.KeyMatching;
  *       first is kept);</li>
  *   <li>{@code join-not-a-number} (error): a used cell that is neither a number nor a declared marker;</li>
  *   <li>{@code join-out-of-range} (error): a reported value outside the map's declared range;</li>
+ *   <li>{@code join-key-too-long} (error): a row whose key is longer than {@link TextLengths#MAX_KEY_CHARS}
+ *       characters, left out;</li>
  *   <li>{@code join-missing-figure} (warning or error, as {@code checks: missing-figures} says): a region
  *       with no row for the mapped indicator in a period; it is drawn as no data.</li>
  * </ul>
@@ -61,6 +67,7 @@ final class FigureJoin {
         Map<FigureCell, String> relaxedMatches = new LinkedHashMap<>();
         Set<String> relaxedKeysSeen = new HashSet<>();
         Set<Integer> duplicateRowsReported = new HashSet<>();
+        Set<Integer> longKeyRowsReported = new HashSet<>();
         for (FigureRole role : FigureRole.values()) {
             String indicator = role.indicatorIn(settings);
             if (indicator.isEmpty()) {
@@ -75,6 +82,13 @@ final class FigureJoin {
             }
             for (String period : periods) {
                 for (FigureCell cell : table.cells(indicator, period)) {
+                    if (TextLengths.keyTooLong(cell.key())) {
+                        if (longKeyRowsReported.add(cell.row())) {
+                            findings.add(TextLengths.keyTooLongFinding("join-key-too-long", table.file(),
+                                    "row " + cell.row(), cell.key(), "The row is left out."));
+                        }
+                        continue;
+                    }
                     Optional<KeyMatcher.Match> match = matcher.match(cell.key(), table.keyMatching());
                     if (match.isEmpty()) {
                         if (role == FigureRole.VALUE) {
@@ -96,6 +110,9 @@ final class FigureJoin {
                     checkCell(table, settings, role, cell, findings);
                 }
             }
+        }
+        if (table.hasIndicator(settings.indicator())) {
+            reportLowMatch(table, settings, matcher, regionKeys, joined, unmatched.keySet(), findings);
         }
         reportRelaxedMatches(table, relaxedMatches, findings);
         reportUnmatched(table, matcher, unmatched, findings);
@@ -131,6 +148,31 @@ final class FigureJoin {
                 "Remove or merge the duplicate rows" + (table.keyMatching() == KeyMatching.RELAXED
                         ? "; with relaxed key matching, keys differing only in case, spaces or leading zeros"
                         + " are the same region." : ".")));
+    }
+
+    /** The one-line summary of a join that half failed; see {@code checks: min-matched-percent}. */
+    private static void reportLowMatch(FigureTable table, MapFigureSettings settings, KeyMatcher matcher,
+                                       List<String> regionKeys, Map<Slot, FigureCell> joined,
+                                       Set<String> unmatchedKeys, Findings findings) {
+        Set<String> regions = new TreeSet<>(regionKeys);
+        Set<String> matched = new HashSet<>();
+        joined.keySet().stream().filter(slot -> slot.role() == FigureRole.VALUE).forEach(slot -> matched.add(slot.regionKey()));
+        double percent = regions.isEmpty() ? 100 : 100.0 * matched.size() / regions.size();
+        if (percent >= settings.minMatchedPercent()) {
+            return;
+        }
+        long relaxable = table.keyMatching() == KeyMatching.EXACT
+                ? unmatchedKeys.stream().filter(key -> matcher.relaxedCandidate(key).isPresent()).count() : 0;
+        String hint = relaxable > 0
+                ? String.format(Locale.ROOT, "%,d statistics keys match a region if leading zeros, case and spaces"
+                        + " are ignored: set key-matching: relaxed for this source, or correct the keys.", relaxable)
+                : "Check that 'key' names the column that holds the geometry's keys, and compare a few keys by hand;"
+                        + " lower checks: min-matched-percent only if the gaps are real.";
+        findings.add(Finding.error("join-match-low", table.file(), "",
+                String.format(Locale.ROOT, "%,d of %,d regions of map \"%s\" matched a figure (%.1f %%); at least"
+                        + " %s %% must.", matched.size(), regions.size(), settings.mapId(), percent,
+                        MapStatistics.plain(settings.minMatchedPercent())),
+                hint));
     }
 
     private static void reportRelaxedMatches(FigureTable table, Map<FigureCell, String> relaxedMatches,

@@ -28,12 +28,13 @@ import aequa.project.ProjectFile;
  * @param missingFigures       what a region without a figure is
  * @param fewestEvents         a rate built from fewer events is unreliable; 0 turns the check off
  * @param largestRelativeMargin a value whose margin / |value| exceeds this is unreliable; 0 turns it off
+ * @param minMatchedPercent    the smallest share of regions, in percent, that must find a figure; 0 turns it off
  */
 public record MapFigureSettings(String mapId, String indicator, List<String> periods, Measure measure,
                                 Normalisation normalisation, String denominator, double multiplier,
                                 MapDisplay display, String eventsIndicator, String marginIndicator,
                                 double rangeMin, double rangeMax, MissingFigures missingFigures,
-                                double fewestEvents, double largestRelativeMargin) {
+                                double fewestEvents, double largestRelativeMargin, double minMatchedPercent) {
 
     public MapFigureSettings {
         periods = List.copyOf(periods);
@@ -81,6 +82,7 @@ public record MapFigureSettings(String mapId, String indicator, List<String> per
         }
         return new MapFigureSettings(map.id(), map.indicator(), map.periods(), measure, normalisation,
                 normalisation == Normalisation.COLUMN ? map.per() : "", multiplier, display, map.eventsColumn(),
-                map.marginColumn(), rangeMin, rangeMax, missing, checks.unreliableBelow(), checks.marginAbove());
+                map.marginColumn(), rangeMin, rangeMax, missing, checks.unreliableBelow(), checks.marginAbove(),
+                checks.minMatchedPercent());
     }
 }

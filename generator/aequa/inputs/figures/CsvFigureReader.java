@@ -22,6 +22,7 @@ import com.fasterxml.jackson.dataformat.csv.CsvMapper;
 import com.fasterxml.jackson.dataformat.csv.CsvParser;
 import com.fasterxml.jackson.dataformat.csv.CsvSchema;
 
+import aequa.findings.Excerpt;
 import aequa.findings.Finding;
 import aequa.findings.Findings;
 
@@ -80,7 +81,7 @@ final class CsvFigureReader {
             JsonLocation at = malformed.getLocation();
             String place = at == null ? "row " + (row + 1) : "line " + at.getLineNr() + ", character " + at.getColumnNr();
             findings.add(Finding.error("figures-csv-malformed", settings.file(), place,
-                    "The file is not valid CSV here: " + malformed.getOriginalMessage() + ".",
+                    "The file is not valid CSV here: " + Excerpt.quotedParts(malformed.getOriginalMessage()) + ".",
                     "A field containing a quote must be quoted as a whole, with the inner quote doubled (\"\"),"
                             + " as RFC 4180 requires; reading stopped here."));
         }

@@ -13,12 +13,12 @@ import aequa.project.FigureSourceSpec;
 
 /**
  * The front door of the statistics readers: reads one statistics source of a project into a
- * {@link FigureTable}. Delimited text ({@code .csv}, {@code .tsv}, {@code .txt}) and SQLite databases
- * ({@code .sqlite}, {@code .sqlite3}, {@code .db}, {@code .gpkg}) are read; the kind is told by the file
- * extension.
+ * {@link FigureTable}. Delimited text ({@code .csv}, {@code .tsv}, {@code .txt}), workbooks ({@code .xlsx},
+ * {@code .xlsm}) and SQLite databases ({@code .sqlite}, {@code .sqlite3}, {@code .db}, {@code .gpkg}) are read;
+ * the kind is told by the file extension.
  *
  * <p>Rows in findings and cells count records as a spreadsheet shows them (the header is row 1, blank
- * lines count); database rows count result rows from 1.
+ * lines count); workbook rows are the spreadsheet's own row numbers; database rows count result rows from 1.
  *
  * <p>Every problem in the project settings or the data is added to {@code findings} (with file, row and
  * column) and reading goes on where it can; a source that cannot be read gives an empty table. Only an
@@ -28,6 +28,7 @@ public final class FigureReaders {
 
     private static final Set<String> TEXT_EXTENSIONS = Set.of("csv", "tsv", "txt");
     private static final Set<String> DATABASE_EXTENSIONS = Set.of("sqlite", "sqlite3", "db", "gpkg");
+    private static final Set<String> WORKBOOK_EXTENSIONS = Set.of("xlsx", "xlsm");
 
     private FigureReaders() {
     }
@@ -47,10 +48,11 @@ public final class FigureReaders {
         String name = path.getFileName() == null ? "" : path.getFileName().toString();
         String extension = name.substring(name.lastIndexOf('.') + 1).toLowerCase(Locale.ROOT);
         boolean text = TEXT_EXTENSIONS.contains(extension);
-        if (!text && !DATABASE_EXTENSIONS.contains(extension)) {
+        boolean workbook = WORKBOOK_EXTENSIONS.contains(extension);
+        if (!text && !workbook && !DATABASE_EXTENSIONS.contains(extension)) {
             findings.add(Finding.error("figures-file-unknown-type", settings.file(), "",
                     "aequa does not know how to read a \"." + extension + "\" file as statistics.",
-                    "Use delimited text (.csv, .tsv) or a SQLite database (.sqlite, .gpkg)."));
+                    "Use delimited text (.csv, .tsv), a workbook (.xlsx) or a SQLite database (.sqlite, .gpkg)."));
             return FigureTable.empty(settings.file(), settings.keyMatching());
         }
         if (!Files.isRegularFile(path)) {
@@ -60,6 +62,9 @@ public final class FigureReaders {
             return FigureTable.empty(settings.file(), settings.keyMatching());
         }
         try {
+            if (workbook) {
+                return WorkbookFigureReader.read(path, settings, findings);
+            }
             return text ? CsvFigureReader.read(path, settings, findings)
                     : SqliteFigureReader.read(path, settings, findings);
         } catch (IOException e) {

@@ -25,11 +25,14 @@ import aequa.project.ProjectFile;
  * @param thousands       the thousands separator of numbers written as text; empty for none
  * @param markers         cell texts (compared after trimming whitespace) and the status each stands for
  * @param keyMatching     exact, or relaxed (opt-in)
+ * @param sheet           workbooks: the sheet's name or 1-based position; empty for the first sheet
+ * @param headerRow       workbooks: the 1-based row holding the column names, or 0 to find it
  */
 public record FigureSourceSettings(String file, String table, String keyColumn, TableLayout layout,
                                    String indicatorColumn, String periodColumn, String valueColumn,
                                    FieldSeparator separator, DecimalMark decimal, String thousands,
-                                   Map<String, CellStatus> markers, KeyMatching keyMatching) {
+                                   Map<String, CellStatus> markers, KeyMatching keyMatching, String sheet,
+                                   int headerRow) {
 
     /** Thousands separators we accept: comma, point, apostrophe, space, no-break space, narrow no-break space. */
     static final Set<String> THOUSANDS_SEPARATORS = Set.of("", ",", ".", "'", " ", "\u00A0", "\u202F");
@@ -67,7 +70,22 @@ public record FigureSourceSettings(String file, String table, String keyColumn, 
         addMarkers(markers, spec.notApplicable(), CellStatus.NOT_APPLICABLE, where, findings);
         addMarkers(markers, spec.missing(), CellStatus.NO_DATA, where, findings);
         return new FigureSourceSettings(spec.file(), spec.table(), spec.key(), layout, spec.indicatorColumn(),
-                spec.periodColumn(), spec.valueColumn(), separator, decimal, thousands, markers, keyMatching);
+                spec.periodColumn(), spec.valueColumn(), separator, decimal, thousands, markers, keyMatching,
+                spec.sheet(), headerRow(spec, where, findings));
+    }
+
+    private static int headerRow(FigureSourceSpec spec, String where, Findings findings) {
+        Integer row = spec.headerRow();
+        if (row == null) {
+            return 0;
+        }
+        if (row < 1) {
+            findings.add(Finding.error("project-bad-value", ProjectFile.FILE_NAME, where + "header-row",
+                    "The header row " + row + " is not a row number.",
+                    "Count rows from 1, as the spreadsheet shows them, or leave 'header-row' out to find the header."));
+            return 0;
+        }
+        return row;
     }
 
     private static FieldSeparator parseSeparator(String text, String place, Findings findings) {

@@ -23,7 +23,8 @@ public final class FigureTable {
 
     /**
      * @param file        the source path as the user wrote it
-     * @param tableName   the table or view read from a database file; empty for a CSV file
+     * @param tableName   where in the file the table is, as findings name it ({@code table "stats"} in a database,
+     *                    {@code sheet "Data"} in a workbook); empty for a CSV file
      * @param keyMatching how the source's keys are to be matched to the geometry (from its settings)
      * @param cells       the cells in source order
      */
@@ -90,6 +91,6 @@ public final class FigureTable {
     /** Where {@code cell} is, for a finding: {@code row 7, column "rate"}, prefixed by the table name if any. */
     public String place(FigureCell cell) {
         String rowAndColumn = "row " + cell.row() + ", column \"" + cell.column() + "\"";
-        return tableName.isEmpty() ? rowAndColumn : "table \"" + tableName + "\", " + rowAndColumn;
+        return tableName.isEmpty() ? rowAndColumn : tableName + ", " + rowAndColumn;
     }
 }

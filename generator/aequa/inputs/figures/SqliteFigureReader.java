@@ -71,7 +71,7 @@ final class SqliteFigureReader {
             for (int c = 1; c <= meta.getColumnCount(); c++) {
                 columns.add(meta.getColumnLabel(c));
             }
-            Optional<TableShaper> started = TableShaper.start(settings, table, columns, "table \"" + table + "\"",
+            Optional<TableShaper> started = TableShaper.start(settings, "table \"" + table + "\"", columns, "table \"" + table + "\"",
                     findings);
             if (started.isEmpty()) {
                 return Optional.empty();

@@ -7,6 +7,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.stream.IntStream;
 
+import aequa.findings.Excerpt;
 import aequa.findings.Finding;
 import aequa.findings.Findings;
 
@@ -21,6 +22,9 @@ import aequa.findings.Findings;
  * warning; a row with more or fewer fields than the header is read as far as it goes, with a warning.
  */
 final class TableShaper {
+
+    /** How many column names a missing-column hint lists; our choice. */
+    private static final int COLUMNS_SHOWN = 20;
 
     private final FigureSourceSettings settings;
     private final String tableName;
@@ -139,7 +143,7 @@ final class TableShaper {
     }
 
     private String rowPlace(int row) {
-        return tableName.isEmpty() ? "row " + row : "table \"" + tableName + "\", row " + row;
+        return tableName.isEmpty() ? "row " + row : tableName + ", row " + row;
     }
 
     private static int find(FigureSourceSettings settings, List<String> columns, String wanted, String specKey,
@@ -170,9 +174,11 @@ final class TableShaper {
         }
     }
 
+    /** The column names as short excerpts (a header row may be any text), at most {@value #COLUMNS_SHOWN} of them. */
     private static String quoteAll(List<String> columns) {
         List<String> quoted = new ArrayList<>();
-        columns.forEach(c -> quoted.add("\"" + c + "\""));
-        return String.join(", ", quoted);
+        columns.stream().limit(COLUMNS_SHOWN).forEach(c -> quoted.add("\"" + Excerpt.of(c) + "\""));
+        String more = columns.size() > COLUMNS_SHOWN ? " and " + (columns.size() - COLUMNS_SHOWN) + " more" : "";
+        return String.join(", ", quoted) + more;
     }
 }

@@ -32,6 +32,11 @@ final class DoubleList {
         return values;
     }
 
+    /** Drops the last (x, y) pair, if there is one. */
+    void removeLastPosition() {
+        size = Math.max(0, size - 2);
+    }
+
     void clear() {
         size = 0;
     }

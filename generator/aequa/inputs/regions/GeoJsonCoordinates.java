@@ -34,9 +34,13 @@ final class GeoJsonCoordinates {
     /**
      * Reads the array whose START_ARRAY is the parser's current token, up to and including its END_ARRAY.
      * {@code scratch} collects one ring's numbers at a time (its contents are overwritten), so each ring
-     * costs one array of exactly its size rather than a doubling buffer's garbage.
+     * costs one array of exactly its size rather than a doubling buffer's garbage. Every ring is counted
+     * against {@code budget}; nesting is bounded by the parser's constraints ({@link ReadLimit#NESTING_DEPTH}).
+     *
+     * @throws LimitExceeded when a ring or the file goes beyond its limit, with the parser inside the array
      */
-    static Object readArray(JsonParser parser, DoubleList scratch) throws IOException, MalformedCoordinates {
+    static Object readArray(JsonParser parser, DoubleList scratch, VertexBudget budget)
+            throws IOException, MalformedCoordinates, LimitExceeded {
         JsonToken token = parser.nextToken();
         if (token == JsonToken.END_ARRAY) {
             return new ArrayList<>(0);
@@ -47,7 +51,7 @@ final class GeoJsonCoordinates {
         if (token != JsonToken.START_ARRAY) {
             throw new MalformedCoordinates("coordinates must be arrays of numbers, found " + describe(token), parser);
         }
-        Object first = readArray(parser, scratch);
+        Object first = readArray(parser, scratch, budget);
         if (first instanceof double[]) {
             double[] position = (double[]) first;
             DoubleList ring = scratch;
@@ -67,14 +71,18 @@ final class GeoJsonCoordinates {
                 ring.add(x);
                 ring.add(parser.getDoubleValue());
                 skipExtraNumbers(parser);
+                if (!budget.ringFits(ring.size() / 2)) {
+                    throw new LimitExceeded(ReadLimit.RING_POSITIONS);
+                }
             }
             expectEndArray(token, parser);
+            budget.take(ring.size() / 2);
             return ring.exactCopy();
         }
         List<Object> list = new ArrayList<>();
         list.add(first);
         while ((token = parser.nextToken()) == JsonToken.START_ARRAY) {
-            list.add(readArray(parser, scratch));
+            list.add(readArray(parser, scratch, budget));
         }
         expectEndArray(token, parser);
         return list;

@@ -7,12 +7,16 @@ import java.util.List;
 import java.util.Locale;
 
 import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonStreamContext;
 import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.StreamReadFeature;
+import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.core.exc.StreamReadException;
 
+import aequa.findings.Excerpt;
 import aequa.findings.Finding;
 import aequa.findings.Findings;
 import aequa.project.RegionSourceSpec;
@@ -25,13 +29,23 @@ import aequa.project.RegionSourceSpec;
  *
  * <p>Every problem becomes a finding naming the feature (its key, or its position in the file when it has
  * none): a feature without a usable key or with an unsupported geometry type is skipped; malformed JSON
- * stops the read at the reported line and column and keeps the features read so far.
+ * stops the read at the reported line and column and keeps the features read so far. The file is held to
+ * its {@link ReadLimit}s: a feature with too many properties or too long a ring is skipped with a finding;
+ * too deep nesting, too long a text or too many vertices in all stop the read with one.
  */
 final class GeoJsonRegionReader {
 
-    /** Jackson's fast double parser: about 3x faster on coordinate-heavy files (measured in LIBRARIES.md, section 6). */
-    private static final JsonFactory JSON = JsonFactory.builder()
+    /**
+     * Jackson's fast double parser: about 3x faster on coordinate-heavy files (measured in LIBRARIES.md,
+     * section 6); nesting and text length bounded by {@link ReadLimit}, read when the reader is made.
+     */
+    private final JsonFactory json = JsonFactory.builder()
             .enable(StreamReadFeature.USE_FAST_DOUBLE_PARSER)
+            .streamReadConstraints(StreamReadConstraints.builder()
+                    .maxNestingDepth(ReadLimit.NESTING_DEPTH.intValue())
+                    .maxStringLength(ReadLimit.STRING_CHARS.intValue())
+                    .maxNameLength(ReadLimit.STRING_CHARS.intValue())
+                    .build())
             .build();
 
     private final String file;
@@ -40,6 +54,7 @@ final class GeoJsonRegionReader {
     private final RingAssembler rings;
     private final List<Region> regions = new ArrayList<>();
     private final DoubleList ringScratch = new DoubleList(256);
+    private final VertexBudget budget = new VertexBudget();
     private int featureCount;
 
     GeoJsonRegionReader(String file, RegionSourceSpec spec, Findings findings) {
@@ -50,11 +65,15 @@ final class GeoJsonRegionReader {
     }
 
     List<Region> read(InputStream in) {
-        try (JsonParser parser = JSON.createParser(in)) {
+        try (JsonParser parser = json.createParser(in)) {
             readDocument(parser);
+        } catch (StreamConstraintsException e) {
+            findings.add(constraintFinding(e));
+        } catch (LimitExceeded e) {
+            findings.add(e.limit().finding(file, "feature " + (featureCount + 1), "reading stopped there"));
         } catch (StreamReadException e) {
             findings.add(Finding.error("geojson-malformed", file, location(e),
-                    "The file is not valid JSON: " + e.getOriginalMessage().split("\n", 2)[0] + ".",
+                    "The file is not valid JSON: " + Excerpt.quotedParts(e.getOriginalMessage().split("\n", 2)[0]) + ".",
                     "Check the file where shown; it may be truncated or hand-edited."));
         } catch (IOException e) {
             findings.add(Finding.error("file-unreadable", file, "", "The file could not be read: " + e.getMessage() + ".",
@@ -63,7 +82,21 @@ final class GeoJsonRegionReader {
         return regions;
     }
 
-    private void readDocument(JsonParser parser) throws IOException {
+    /** Which of Jackson's constraints the file broke, as a finding naming aequa's limit where it has one. */
+    private Finding constraintFinding(StreamConstraintsException e) {
+        String message = String.valueOf(e.getOriginalMessage());
+        String place = "feature " + (featureCount + 1) + (e.getLocation() == null ? "" : ", " + location(e));
+        if (message.contains("nesting depth")) {
+            return ReadLimit.NESTING_DEPTH.finding(file, place, "reading stopped there");
+        }
+        if (message.contains("String value length") || message.contains("Name length")) {
+            return ReadLimit.STRING_CHARS.finding(file, place, "reading stopped there");
+        }
+        return Finding.error("geojson-malformed", file, place, "The file goes beyond what its JSON parser reads: "
+                + message.split("\n", 2)[0] + ".", "Check the file where shown; numbers of a thousand digits are not geography.");
+    }
+
+    private void readDocument(JsonParser parser) throws IOException, LimitExceeded {
         if (parser.nextToken() != JsonToken.START_OBJECT) {
             findings.add(Finding.error("geojson-not-features", file, "line 1",
                     "The file is not a GeoJSON object.", "Give a FeatureCollection (RFC 7946, section 3.3)."));
@@ -102,7 +135,7 @@ final class GeoJsonRegionReader {
         }
     }
 
-    private void readFeatureMember(JsonParser parser, FeatureState feature, String name) throws IOException {
+    private void readFeatureMember(JsonParser parser, FeatureState feature, String name) throws IOException, LimitExceeded {
         JsonToken value = parser.currentToken();
         switch (name) {
             case "id":
@@ -134,9 +167,15 @@ final class GeoJsonRegionReader {
     }
 
     private void readProperties(JsonParser parser, FeatureState feature) throws IOException {
+        long maxProperties = ReadLimit.PROPERTIES.value();
+        long count = 0;
         while (parser.nextToken() == JsonToken.FIELD_NAME) {
             String name = parser.currentName();
             JsonToken value = parser.nextToken();
+            if (++count > maxProperties && !feature.unusable) {
+                feature.limit = ReadLimit.PROPERTIES;
+                feature.unusable = true;
+            }
             boolean isKey = name.equals(spec.key());
             boolean isName = name.equals(spec.name());
             if ((isKey || isName) && (value == JsonToken.VALUE_STRING || value.isNumeric())) {
@@ -155,7 +194,7 @@ final class GeoJsonRegionReader {
         }
     }
 
-    private void readGeometry(JsonParser parser, FeatureState feature) throws IOException {
+    private void readGeometry(JsonParser parser, FeatureState feature) throws IOException, LimitExceeded {
         JsonStreamContext geometryContext = parser.getParsingContext();
         String type = null;
         Object coordinates = null;
@@ -166,9 +205,16 @@ final class GeoJsonRegionReader {
                 type = parser.getText();
             } else if ("coordinates".equals(name) && value == JsonToken.START_ARRAY) {
                 try {
-                    coordinates = GeoJsonCoordinates.readArray(parser, ringScratch);
-                } catch (GeoJsonCoordinates.MalformedCoordinates e) {
-                    feature.problem("geojson-wrong-type", e.getMessage());
+                    coordinates = GeoJsonCoordinates.readArray(parser, ringScratch, budget);
+                } catch (GeoJsonCoordinates.MalformedCoordinates | LimitExceeded e) {
+                    if (e instanceof LimitExceeded limit) {
+                        if (limit.limit() == ReadLimit.FILE_VERTICES) {
+                            throw limit;
+                        }
+                        feature.limit = limit.limit();
+                    } else {
+                        feature.problem("geojson-wrong-type", e.getMessage());
+                    }
                     feature.unusable = true;
                     while (parser.getParsingContext() != geometryContext) {
                         parser.nextToken();
@@ -204,6 +250,9 @@ final class GeoJsonRegionReader {
         String place = key == null
                 ? String.format(Locale.ROOT, "feature %d (line %d)", featureCount, feature.line)
                 : "feature \"" + key + "\"";
+        if (feature.limit != null) {
+            findings.add(feature.limit.finding(file, place, "the feature was skipped"));
+        }
         for (String[] problem : feature.problems) {
             findings.add(Finding.error(problem[0], file, place, "The feature is unusable: " + problem[1] + ".",
                     "Fix the feature as RFC 7946 describes it (sections 3.1 and 3.2)."));
@@ -250,7 +299,7 @@ final class GeoJsonRegionReader {
         }
     }
 
-    private static String location(StreamReadException e) {
+    private static String location(JsonProcessingException e) {
         if (e.getLocation() == null) {
             return "";
         }
@@ -267,6 +316,7 @@ final class GeoJsonRegionReader {
         String geometryType;
         List<List<DoubleList>> polygons;
         boolean unusable;
+        ReadLimit limit;
         final List<String[]> problems = new ArrayList<>(0);
 
         FeatureState(JsonParser parser) {

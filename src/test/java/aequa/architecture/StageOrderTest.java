@@ -25,13 +25,15 @@ class StageOrderTest {
     private static final List<String> STAGES = List.of("findings", "project", "inputs", "ellipsoid", "projection",
             "planar", "statistics", "classes", "colour", "atlas", "drawing", "pages", "publish", "cli");
 
-    /** Libraries confined to one stage. */
+    /** Libraries confined to one stage, or to one package of a stage (a reader's package: "inputs.regions"). */
     private static final Map<String, String> LIBRARY_OWNERS = Map.of(
             "org.apache.sis", "projection",
             "net.sf.geographiclib", "ellipsoid",
             "org.jfree", "drawing",
             "freemarker", "pages",
-            "picocli", "cli");
+            "picocli", "cli",
+            "com.linuxense.javadbf", "inputs.regions",
+            "org.dhatim.fastexcel", "inputs.figures");
 
     private static final Pattern IMPORT = Pattern.compile("^import (?:static )?([\\w.]+)", Pattern.MULTILINE);
     private static final Pattern QUALIFIED_USE = Pattern.compile("\\baequa\\.(\\w+)\\.[A-Z]");
@@ -42,17 +44,19 @@ class StageOrderTest {
         List<String> violations = new ArrayList<>();
         try (Stream<Path> files = Files.walk(root)) {
             for (Path file : files.filter(f -> f.toString().endsWith(".java")).toList()) {
-                String stage = root.relativize(file).getName(0).toString();
+                Path relative = root.relativize(file);
+                String stage = relative.getName(0).toString();
+                String packageName = relative.getParent().toString().replace(java.io.File.separatorChar, '.');
                 int rank = STAGES.indexOf(stage);
                 assertTrue(rank >= 0, "package not in the stage list: " + stage + " (" + file + ")");
                 String source = withoutComments(Files.readString(file));
                 Matcher imports = IMPORT.matcher(source);
                 while (imports.find()) {
-                    check(file, stage, rank, imports.group(1), violations);
+                    check(file, stage, packageName, rank, imports.group(1), violations);
                 }
                 Matcher uses = QUALIFIED_USE.matcher(source);
                 while (uses.find()) {
-                    check(file, stage, rank, "aequa." + uses.group(1) + ".X", violations);
+                    check(file, stage, packageName, rank, "aequa." + uses.group(1) + ".X", violations);
                 }
             }
         }
@@ -64,7 +68,7 @@ class StageOrderTest {
         return source.replaceAll("(?s)/\\*.*?\\*/", "").replaceAll("//[^\n]*", "");
     }
 
-    private static void check(Path file, String stage, int rank, String name, List<String> violations) {
+    private static void check(Path file, String stage, String packageName, int rank, String name, List<String> violations) {
         if (name.startsWith("aequa.")) {
             String used = name.split("\\.")[1];
             int usedRank = STAGES.indexOf(used);
@@ -73,8 +77,8 @@ class StageOrderTest {
             }
         }
         LIBRARY_OWNERS.forEach((library, owner) -> {
-            if (name.startsWith(library + ".") && !stage.equals(owner)) {
-                violations.add(file + ": " + library + " belongs to stage '" + owner + "', used in '" + stage + "'");
+            if (name.startsWith(library + ".") && !packageName.equals(owner) && !packageName.startsWith(owner + ".")) {
+                violations.add(file + ": " + library + " belongs to '" + owner + "', used in '" + packageName + "'");
             }
         });
     }

@@ -9,8 +9,59 @@ import java.util.Random;
 
 import org.junit.jupiter.api.Test;
 
-/** The rounding rule of {@link ReadableBreaks}: fewest figures (at least 2) that keep every value in its class. */
+/**
+ * The rounding rules of {@link ReadableBreaks}: one step for the whole map (a power of ten, at most a
+ * thirtieth of the range); failing that, the fewest figures (at least 2) that keep every value in its class.
+ */
 class ReadableBreaksTest {
+
+    /**
+     * The step rule's promises on seeded random data of many magnitudes: every limit is a whole multiple of
+     * one power of ten no larger than a thirtieth of the range (so every limit of the map has the same
+     * decimals), each inner break moved by at most half a step, the limits enclose every value, no class empty.
+     */
+    @Test
+    void limitsShareOneStepOfAtMostAHundredthOfTheRange() {
+        Random random = new Random(20261204);
+        for (int trial = 0; trial < 200; trial++) {
+            double scale = Math.pow(10, random.nextInt(9) - 4);
+            double[] sorted = new double[40];
+            for (int i = 0; i < sorted.length; i++) {
+                sorted[i] = scale * (1 + 99 * random.nextDouble());
+            }
+            Arrays.sort(sorted);
+            double[] raw = Quantiles.innerBreaks(sorted, 5);
+            double[] limits = ReadableBreaks.onStep(sorted, raw).orElseThrow(() -> new AssertionError(Arrays.toString(sorted)));
+            double range = sorted[39] - sorted[0];
+            java.math.BigDecimal step = ReadableBreaks.stepFor(range);
+            assertTrue(step.doubleValue() <= range / 30 && step.doubleValue() * 10 > range / 30, "step " + step);
+            java.math.BigDecimal used = null;
+            for (int d = 0; d <= ReadableBreaks.STEP_REFINEMENTS && used == null; d++) {
+                java.math.BigDecimal candidate = step.movePointLeft(d);
+                if (Arrays.stream(limits).allMatch(l -> java.math.BigDecimal.valueOf(l).remainder(candidate).signum() == 0)) {
+                    used = candidate;
+                }
+            }
+            assertTrue(used != null, "limits on one step: " + Arrays.toString(limits));
+            for (int i = 0; i < raw.length; i++) {
+                assertTrue(Math.abs(limits[i + 1] - raw[i]) <= used.doubleValue() / 2 * (1 + 1e-9), "break " + i);
+            }
+            assertTrue(limits[0] <= sorted[0] && limits[limits.length - 1] >= sorted[39]);
+            assertTrue(Classifier.counts(sorted, limits).stream().allMatch(c -> c > 0), Arrays.toString(limits));
+        }
+    }
+
+    @Test
+    void tightlyPackedValuesBelowAnOutlierGetAFinerStepOrThePerBreakRule() {
+        // four values 0.0001 apart and one at 1000: the step starts at 10 (a thirtieth of the range, 33,
+        // rounded down to a power of ten) and three refinements reach 0.01, still too coarse to keep them apart
+        double[] sorted = {10.0001, 10.0002, 10.0003, 10.0004, 1000};
+        double[] raw = {10.00015, 10.00025, 10.00035, 505};
+        assertTrue(ReadableBreaks.onStep(sorted, raw).isEmpty());
+        // the classifier then falls back on the per-break rule, which keeps every value in its class
+        assertArrayEquals(new double[] {10.00015, 10.00025, 10.00035, 510},
+                ReadableBreaks.roundInner(sorted, raw), 1e-12);
+    }
 
     @Test
     void roundsToTwoFiguresWhenTheGapAllows() {

@@ -45,4 +45,27 @@ class ColourMeasuresTest {
         // mid grey: K = 1 - 128/255 = 49.8 %, no colour inks
         assertEquals(49.8039, ColourMeasures.naiveTotalInkPercent(new Rgb(128, 128, 128)), 1e-4);
     }
+
+    /**
+     * Generated ramps print: for every hue, 3 to 9 classes, sequential and diverging, no fill needs more than
+     * 240 % total ink in the naive separation (240 % is newsprint's usual limit, common practice; it is the
+     * limit of aequa's newsprint theme).
+     */
+    @Test
+    void generatedRampsStayWithinNewsprintInk() {
+        for (double hue = 0; hue < 360; hue += 10) {
+            for (int count = 3; count <= 9; count++) {
+                for (String scheme : new String[] {"sequential", "diverging"}) {
+                    java.util.List<Rgb> fills = aequa.colour.ColourRamps.generate(
+                            new aequa.project.ColoursSpec(scheme, hue, (hue + 180) % 360), count, WHITE, "aequa.yaml", "m")
+                            .ramp().orElseThrow().fills();
+                    for (Rgb fill : fills) {
+                        double ink = ColourMeasures.naiveTotalInkPercent(fill);
+                        org.junit.jupiter.api.Assertions.assertTrue(ink <= 240,
+                                scheme + " hue " + hue + " count " + count + ": " + fill.hex() + " needs " + ink + " %");
+                    }
+                }
+            }
+        }
+    }
 }

@@ -48,7 +48,9 @@ class FormatsTest {
         assertTrue(objectNumber > 5, "several objects");
         double widthPt = 104 * 72 / 25.4; // 1 in = 25.4 mm = 72 pt
         assertTrue(text.contains("/MediaBox [0.0 0.0 " + (float) widthPt) || text.contains("/MediaBox [0.0 0.0 " + widthPt), text.substring(0, 600));
-        assertTrue(text.contains("(D:20000101000000"), "fixed dates");
+        // ISO 32000-1, section 7.9.4: a date with O = Z is universal time; no offset of the machine's zone
+        assertTrue(text.contains("/CreationDate (D:20000101000000Z00'00')") && text.contains("/ModDate (D:20000101000000Z00'00')"),
+                "fixed dates in UTC");
         // text is drawn as outlines of the font the layout measured (so any script that font covers
         // survives): the file needs no font resource at all (ISO 32000-1, section 9.2: text-showing
         // operators need a /Font entry in the page resources)

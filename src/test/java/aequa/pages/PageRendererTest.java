@@ -53,7 +53,7 @@ class PageRendererTest {
                 renderer.renderChanges(SITE, new ChangesView("First.", List.of(), 0)),
                 renderer.renderFigures(SITE, new FiguresView("m", "T", "u", List.of("2031"), List.of(), "index.html", "m.csv", false)),
                 renderer.renderMap(SITE, new MapPageView("m", "T", "u", "2031", "c", "s", "<svg xmlns=\"http://www.w3.org/2000/svg\"/>",
-                        "", "", List.of(), List.of(), List.of(), "figures.html")));
+                        "", "", List.of(), "", List.of(), "figures.html")));
         for (String page : pages) {
             assertTrue(page.contains("The data is invented."), page);
             assertTrue(page.startsWith("<!DOCTYPE html>") && page.contains("<html lang=\"en\">"), page);

@@ -109,4 +109,26 @@ class EditionChangesTest {
         assertEquals(10.0, SiteReportTest.parameter(report.at("/changes/maps/0/projection/from/parameters"), "centre-lon"));
         assertEquals(11.0, SiteReportTest.parameter(report.at("/changes/maps/0/projection/to/parameters"), "centre-lon"));
     }
+
+    /** An edited figure shows on the changes page even when its region keeps its class (and colour). */
+    @Test
+    void figuresEditedWithinTheirClassAreListed() throws IOException {
+        Path out = tmp.resolve("site");
+        publish(out, List.of(SiteFixtures.map("a", texts, 12, 0)));
+        JsonNode report = publish(out, List.of(SiteFixtures.map("a", texts, 12, 0.5)));
+        JsonNode edited = report.at("/changes/maps/0/valueChanged");
+        assertTrue(edited.size() > 0, report.at("/changes").toString());
+        JsonNode k005 = null;
+        for (JsonNode e : edited) {
+            if (e.path("key").asText().equals("K005")) {
+                k005 = e;
+            }
+        }
+        assertEquals(50.0, k005.path("from").asDouble()); // the fixture's region 5 reports 10 x 5 + shift
+        assertEquals(50.5, k005.path("to").asDouble());
+        assertEquals(0, report.at("/changes/maps/0/classChanged").size(), "the shift keeps every class");
+        String page = Files.readString(out.resolve("changes.html"));
+        assertTrue(page.contains("Figures that changed within their class"), page);
+        assertTrue(page.contains("<td class=\"num\">50</td><td class=\"num\">50.5</td>"), page);
+    }
 }

@@ -7,6 +7,7 @@ import java.net.URI;
 import java.net.http.HttpClient;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
@@ -61,6 +62,39 @@ class PreviewServerTest {
             assertEquals(1, rebuilds.get());
             assertEquals("1", get(base, "/__aequa/version").body());
             assertEquals(List.of("rebuilt edition 1"), log);
+        }
+    }
+
+    /**
+     * Only files inside the site folder, after links are resolved: traversal written plainly, percent-encoded
+     * (RFC 3986, section 2.1) or as an absolute path, and symbolic links leading out, are all refused alike.
+     */
+    @Test
+    void servesOnlyFilesInsideTheSiteFolder() throws Exception {
+        Path project = Files.createDirectories(tmp.resolve("project"));
+        Path site = Files.createDirectories(tmp.resolve("site"));
+        Path outside = Files.createDirectories(tmp.resolve("outside"));
+        Files.writeString(outside.resolve("secret.txt"), "outside");
+        Files.write(site.resolve("map.pdf"), "%PDF-1.4\n%%EOF".getBytes(StandardCharsets.US_ASCII));
+        Files.createDirectories(site.resolve("maps"));
+        Files.writeString(site.resolve("maps").resolve("page.html"), "<p>inside</p>");
+        Files.createSymbolicLink(site.resolve("leak.txt"), outside.resolve("secret.txt"));
+        Files.createSymbolicLink(site.resolve("leak-dir"), outside);
+        Files.createSymbolicLink(site.resolve("alias.html"), site.resolve("maps").resolve("page.html"));
+        try (PreviewServer preview = PreviewServer.start(site, project, () -> { }, 0, Duration.ofMillis(100), line -> { })) {
+            URI base = preview.address();
+            HttpResponse<String> pdf = get(base, "/map.pdf");
+            assertEquals(200, pdf.statusCode());
+            assertEquals("application/pdf", pdf.headers().firstValue("Content-Type").orElse(""), "RFC 8118: application/pdf");
+            assertEquals(200, RawHttp.status(base, "/maps/page.html"));
+            assertEquals(200, RawHttp.status(base, "/maps/../maps/page.html"), "a '..' that stays inside is harmless");
+            assertEquals(200, get(base, "/alias.html").statusCode(), "a link that stays inside is served");
+            for (String target : List.of("/../outside/secret.txt", "/%2e%2e/outside/secret.txt", "/%2E%2E%2Foutside%2Fsecret.txt",
+                    "/maps/..%2f..%2foutside/secret.txt", "/..\\outside\\secret.txt", "/%00", "/leak.txt", "/leak-dir/secret.txt",
+                    "//" + outside.resolve("secret.txt").toString().substring(1), "/" + outside.resolve("secret.txt"))) {
+                int status = RawHttp.status(base, target);
+                assertTrue(status == 400 || status == 404, target + " refused, not " + status);
+            }
         }
     }
 

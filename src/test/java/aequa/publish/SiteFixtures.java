@@ -75,8 +75,13 @@ final class SiteFixtures {
      * has no data, region 2 is suppressed, region 3 is not applicable, region 4 reports zero and is unreliable.
      */
     static MapModel map(String id, Texts texts, int regionCount, double shift) {
+        return map(id, texts, regionCount, shift, "choropleth");
+    }
+
+    /** As {@link #map(String, Texts, int, double)}, drawn as {@code display} (choropleth or circles). */
+    static MapModel map(String id, Texts texts, int regionCount, double shift, String display) {
         MapSpec spec = new MapSpec(id, texts.mapTitle() + " " + id, "units", "figures", "clinics", List.of("2031"),
-                "rate", "column", "people", 1000.0, "clinics per 1,000 people", "choropleth", null, null, null,
+                "rate", "column", "people", 1000.0, "clinics per 1,000 people", display, null, null, null,
                 null, null, texts.notes(), texts.source(), "March 2031");
         List<MapRegion> regions = new ArrayList<>();
         List<Double> reported = new ArrayList<>();

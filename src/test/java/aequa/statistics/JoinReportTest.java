@@ -60,9 +60,53 @@ class JoinReportTest {
     @Test
     void regionWithoutFigureIsAnErrorWhenTheProjectSaysSo() {
         StatisticsFixture project = threeRegions().csv("key,rate\nA,1\nB,2\n")
-                .checks(new ChecksSpec(null, "error", null, null));
+                .checks(new ChecksSpec(null, "error", null, null, null));
         project.compute(mapOf("rate").build());
         assertEquals(Severity.ERROR, project.only("join-missing-figure").severity());
+    }
+
+    /**
+     * Codes that lost their leading zeros in a spreadsheet (a common failure of real joins: 5-digit county
+     * codes read as numbers) leave most regions empty; the build stops with one summary line and the fix.
+     */
+    @Test
+    void joinThatHalfFailsStopsWithASummaryAndTheFix() {
+        StatisticsFixture project = new StatisticsFixture(dir);
+        StringBuilder csv = new StringBuilder("key,rate\n");
+        for (int i = 1; i <= 20; i++) {
+            // states 01-09 carry a leading zero, 10-20 do not
+            project.region(String.format(java.util.Locale.ROOT, "%02d001", i), 10);
+        }
+        for (MapSpecRow row : rows(project)) {
+            csv.append(row.key().replaceFirst("^0+", "")).append(',').append(row.value()).append('\n');
+        }
+        project.csv(csv.toString());
+        project.compute(mapOf("rate").build());
+        Finding low = project.only("join-match-low");
+        assertEquals(Severity.ERROR, low.severity());
+        assertEquals("11 of 20 regions of map \"m\" matched a figure (55.0 %); at least 95 % must.", low.message());
+        assertTrue(low.hint().startsWith("9 statistics keys match a region if leading zeros"), low.hint());
+        assertEquals("join-match-low", project.codes().stream().filter(c -> !c.equals("join-duplicate-key")).findFirst().orElseThrow());
+    }
+
+    @Test
+    void matchThresholdCanBeLoweredOrTurnedOff() {
+        StatisticsFixture project = threeRegions().csv("key,rate\nA,1\nB,2\n")
+                .checks(new ChecksSpec(null, null, null, null, 60.0));
+        project.compute(mapOf("rate").build());
+        assertEquals(List.of("join-missing-figure"), project.codes()); // 2 of 3 = 66.7 % >= 60 %
+        StatisticsFixture strict = threeRegions().csv("key,rate\nA,1\nB,2\n")
+                .checks(new ChecksSpec(null, null, null, null, 70.0));
+        strict.compute(mapOf("rate").build());
+        assertEquals(List.of("join-match-low", "join-missing-figure"), strict.codes());
+    }
+
+    private record MapSpecRow(String key, int value) {
+    }
+
+    private static List<MapSpecRow> rows(StatisticsFixture project) {
+        return java.util.stream.IntStream.range(0, project.regions.size())
+                .mapToObj(i -> new MapSpecRow(project.regions.get(i).key(), i + 1)).toList();
     }
 
     @Test

@@ -24,7 +24,7 @@ class ReliabilityTest {
 
     private StatisticsFixture project() {
         return new StatisticsFixture(dir).region("A", 1).region("B", 1).region("C", 1).region("D", 1)
-                .checks(new ChecksSpec(null, null, 20.0, 0.3));
+                .checks(new ChecksSpec(null, null, 20.0, 0.3, null));
     }
 
     @Test

@@ -23,7 +23,7 @@ final class StatisticsFixture {
     final List<RegionArea> regions = new ArrayList<>();
     private final Path dir;
     private SourceSpecBuilder source = SourceSpecBuilder.file("figures.csv");
-    private ChecksSpec checks = new ChecksSpec(null, null, null, null);
+    private ChecksSpec checks = new ChecksSpec(null, null, null, null, null);
 
     StatisticsFixture(Path dir) {
         this.dir = dir;

@@ -170,7 +170,7 @@ class CsvEncodingAndLocaleTest {
     void missingFileAndUnknownType() {
         Findings findings = new Findings();
         FigureReaders.read(dir, SourceSpecBuilder.file("nope.csv").build(), findings);
-        FigureReaders.read(dir, SourceSpecBuilder.file("figures.xlsx").build(), findings);
+        FigureReaders.read(dir, SourceSpecBuilder.file("figures.ods").build(), findings); // OpenDocument: not read
         assertEquals(List.of("figures-file-missing", "figures-file-unknown-type"),
                 findings.list().stream().map(f -> f.code()).toList());
     }

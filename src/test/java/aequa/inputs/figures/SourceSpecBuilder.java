@@ -21,6 +21,8 @@ public final class SourceSpecBuilder {
     private List<String> suppressed;
     private List<String> notApplicable;
     private String keyMatching;
+    private String sheet;
+    private Integer headerRow;
 
     private SourceSpecBuilder(String file) {
         this.file = file;
@@ -43,9 +45,11 @@ public final class SourceSpecBuilder {
     public SourceSpecBuilder suppressed(String... values) { suppressed = List.of(values); return this; }
     public SourceSpecBuilder notApplicable(String... values) { notApplicable = List.of(values); return this; }
     public SourceSpecBuilder keyMatching(String value) { keyMatching = value; return this; }
+    public SourceSpecBuilder sheet(String value) { sheet = value; return this; }
+    public SourceSpecBuilder headerRow(int value) { headerRow = value; return this; }
 
     public FigureSourceSpec build() {
         return new FigureSourceSpec(file, table, key, layout, indicatorColumn, periodColumn, valueColumn, delimiter,
-                decimal, thousands, missing, suppressed, notApplicable, keyMatching);
+                decimal, thousands, missing, suppressed, notApplicable, keyMatching, sheet, headerRow);
     }
 }
