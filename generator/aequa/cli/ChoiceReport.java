@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
+import aequa.projection.DistortionSpread;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionParameter;
 
@@ -24,6 +25,10 @@ final class ChoiceReport {
         s.append("  Why: ").append(choice.reason()).append('\n');
         s.append(String.format(Locale.ROOT, "  Angular distortion (omega): largest %.2f deg, at %s; area-weighted mean %.2f deg%n",
                 choice.omegaMaxDeg(), place(choice.worstLonDeg(), choice.worstLatDeg()), choice.omegaMeanDeg()));
+        DistortionSpread spread = choice.spread();
+        s.append(String.format(Locale.ROOT, "  Spread of omega by area: below 1 deg on %.1f %%, below 5 deg on %.1f %%, below 10 deg on %.1f %%;"
+                + " 95 %% of the area at most %.2f deg; the largest %s%n", 100 * spread.shareBelow1Deg(), 100 * spread.shareBelow5Deg(),
+                100 * spread.shareBelow10Deg(), spread.omegaP95Deg(), spread.worstPlace()));
         s.append("  Areas: true everywhere (equal-area on the ellipsoid)\n");
         if (!choice.runnersUp().isEmpty()) {
             s.append("  Also considered:\n");
@@ -48,6 +53,13 @@ final class ChoiceReport {
         root.put("omegaMaxDeg", choice.omegaMaxDeg());
         root.put("omegaMeanDeg", choice.omegaMeanDeg());
         root.put("omegaMaxAt", Map.of("lonDeg", choice.worstLonDeg(), "latDeg", choice.worstLatDeg()));
+        root.put("omegaMaxWhere", choice.spread().worstPlace());
+        Map<String, Object> shares = new LinkedHashMap<>();
+        shares.put("below1Deg", choice.spread().shareBelow1Deg());
+        shares.put("below5Deg", choice.spread().shareBelow5Deg());
+        shares.put("below10Deg", choice.spread().shareBelow10Deg());
+        root.put("omegaAreaShares", shares);
+        root.put("omegaP95Deg", choice.spread().omegaP95Deg());
         root.put("reason", choice.reason());
         root.put("runnersUp", choice.runnersUp().stream().map(c -> {
             Map<String, Object> candidate = new LinkedHashMap<>();

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import aequa.atlas.MapModel;
+import aequa.projection.DistortionSpread;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionParameter;
 
@@ -31,13 +32,8 @@ final class Caption {
         if (!parameters.isEmpty()) {
             text.append(" (").append(String.join(", ", parameters)).append(')');
         }
-        text.append(", datum WGS 84. Angular distortion \u03c9 up to ").append(Numbers.trim(choice.omegaMaxDeg(), 1))
-                .append('\u00b0');
-        if (Math.abs(choice.worstLatDeg()) >= 89.9) {
-            // on a world map the largest omega always sits at a pole, which says little about the data
-            text.append(" (at the ").append(choice.worstLatDeg() > 0 ? "North" : "South").append(" Pole)");
-        }
-        text.append(", mean ").append(Numbers.trim(choice.omegaMeanDeg(), 1)).append("\u00b0.");
+        text.append(", datum WGS 84. ");
+        distortion(choice, text);
         if (model.areaAudit() != null) {
             double percent = model.areaAudit().maxRelativeError() * 100;
             text.append(" Areas are true: largest difference from the ellipsoid ")
@@ -48,6 +44,30 @@ final class Caption {
                     .append(" anywhere on the map; distances are not to scale.");
         }
         return text.toString();
+    }
+
+    /**
+     * The angular distortion (Tissot's omega) in words. A world map leads with the area-weighted figures, since
+     * its largest omega always sits on the pole lines and says little about the rest (issue #16); a regional
+     * map gives the largest, where it sits, and the mean.
+     */
+    private static void distortion(ProjectionChoice choice, StringBuilder text) {
+        DistortionSpread spread = choice.spread();
+        if (choice.projection().family().world() && Double.isFinite(spread.shareBelow10Deg())) {
+            text.append("Angular distortion \u03c9: mean ").append(Numbers.trim(choice.omegaMeanDeg(), 1))
+                    .append("\u00b0; below 10\u00b0 over ").append(Numbers.trim(100 * spread.shareBelow10Deg(), 0))
+                    .append(" % of the mapped area, below 5\u00b0 over ").append(Numbers.trim(100 * spread.shareBelow5Deg(), 0))
+                    .append(" %; largest, ").append(Numbers.trim(choice.omegaMaxDeg(), 1)).append("\u00b0, ")
+                    .append(spread.worstPlace()).append('.');
+            return;
+        }
+        text.append("Angular distortion \u03c9 up to ").append(Numbers.trim(choice.omegaMaxDeg(), 1)).append('\u00b0');
+        if (!spread.worstPlace().isEmpty()) {
+            text.append(" (").append(spread.worstPlace()).append(')');
+        } else if (Math.abs(choice.worstLatDeg()) >= 89.9) {
+            text.append(" (at the ").append(choice.worstLatDeg() > 0 ? "North" : "South").append(" Pole)");
+        }
+        text.append(", mean ").append(Numbers.trim(choice.omegaMeanDeg(), 1)).append("\u00b0.");
     }
 
     /** Source, date of the figures, then the map's notes, as one paragraph. */

@@ -2,7 +2,6 @@ package aequa.ellipsoid;
 
 import org.locationtech.jts.geom.CoordinateSequence;
 import org.locationtech.jts.geom.Geometry;
-import org.locationtech.jts.geom.Polygon;
 
 /**
  * Exact areas on the WGS 84 ellipsoid of polygons whose edges are straight in longitude and latitude, as
@@ -62,18 +61,7 @@ public final class LonLatArea {
 
     /** The area of a Polygon or MultiPolygon in square metres. */
     public static double areaM2(Geometry lonLat) {
-        double total = 0;
-        for (int i = 0; i < lonLat.getNumGeometries(); i++) {
-            Geometry part = lonLat.getGeometryN(i);
-            if (part instanceof Polygon && !part.isEmpty()) {
-                Polygon polygon = (Polygon) part;
-                total += ringAreaM2(polygon.getExteriorRing().getCoordinateSequence());
-                for (int h = 0; h < polygon.getNumInteriorRing(); h++) {
-                    total -= ringAreaM2(polygon.getInteriorRingN(h).getCoordinateSequence());
-                }
-            }
-        }
-        return total;
+        return RingSums.areaM2(lonLat, LonLatArea::ringAreaM2);
     }
 
     /** The area enclosed by one closed ring, whatever its orientation, in square metres. */

@@ -16,10 +16,10 @@ final class ChoiceReason {
         String name = describe(chosen);
         String figures = String.format(Locale.ROOT, "shapes are distorted by at most %s deg (%s deg on average) over the data",
                 degrees(score.omegaMaxDeg()), degrees(score.omegaMeanDeg()));
-        String comparison = runnerUp == null ? "" : runnerUp.omegaMaxDeg() < score.omegaMaxDeg()
-                ? String.format(Locale.ROOT, "; the best %s distorts about as much (%s deg at most), and the more "
-                        + "conventional shape is preferred at near-equal distortion", runnerUp.family().displayName(),
-                        degrees(runnerUp.omegaMaxDeg()))
+        String comparison = runnerUp == null ? "" : basis == Basis.AUTOMATIC && runnerUp.omegaMaxDeg() < score.omegaMaxDeg()
+                ? String.format(Locale.ROOT, "; the best %s reaches %s deg at most, within the %d %% by which the more "
+                        + "conventional shape is preferred", runnerUp.family().displayName(),
+                        degrees(runnerUp.omegaMaxDeg()), Math.round(100 * ProjectionChooser.CONVENTIONAL_MARGIN))
                 : String.format(Locale.ROOT, ", against %s deg for the best %s",
                         degrees(runnerUp.omegaMaxDeg()), runnerUp.family().displayName());
         switch (basis) {
@@ -46,11 +46,11 @@ final class ChoiceReason {
     }
 
     private static String why(EqualAreaProjection chosen, Footprint footprint) {
+        if ((footprint.containsNorthPole() || footprint.containsSouthPole()) && !chosen.family().world()) {
+            return "the data surround the " + (footprint.containsNorthPole() ? "North" : "South") + " Pole";
+        }
         switch (chosen.family()) {
             case LAMBERT_AZIMUTHAL:
-                if (footprint.containsNorthPole() || footprint.containsSouthPole()) {
-                    return "the data surround the " + (footprint.containsNorthPole() ? "North" : "South") + " Pole";
-                }
                 return "the data form a roughly round area";
             case ALBERS_CONIC:
                 return "the data stretch east-west on one side of the equator";

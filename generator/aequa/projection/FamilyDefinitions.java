@@ -30,9 +30,9 @@ final class FamilyDefinitions {
     private static final ParameterDefinition FALSE_ORIGIN_LAT =
             new ParameterDefinition(CENTRE_LAT, "Latitude of false origin", 8821, 0, -90, 90);
     private static final ParameterDefinition ALBERS_PARALLEL_1 =
-            new ParameterDefinition(STANDARD_PARALLEL_1, "Latitude of 1st standard parallel", 8823, 20, -89, 89);
+            new ParameterDefinition(STANDARD_PARALLEL_1, "Latitude of 1st standard parallel", 8823, 20, -90, 90);
     private static final ParameterDefinition ALBERS_PARALLEL_2 =
-            new ParameterDefinition(STANDARD_PARALLEL_2, "Latitude of 2nd standard parallel", 8824, 50, -89, 89);
+            new ParameterDefinition(STANDARD_PARALLEL_2, "Latitude of 2nd standard parallel", 8824, 50, -90, 90);
     private static final ParameterDefinition CYLINDER_PARALLEL =
             new ParameterDefinition(STANDARD_PARALLEL_1, "Latitude of 1st standard parallel", 8823, 0, -MAX_OFFSET_DEG, MAX_OFFSET_DEG);
     private static final ParameterDefinition CENTRE_LINE_LON =

@@ -14,8 +14,9 @@ import static aequa.projection.FamilyDefinitions.STANDARD_PARALLEL_2;
 
 /**
  * Finds good parameters of one family for a footprint: starts from the trade's rules of thumb, improves
- * them with {@link NelderMead} on the {@link OmegaScore}, rounds them to readable values and polishes on
- * that lattice. Forced parameters stay as given.
+ * them with {@link NelderMead} on the {@link OmegaScore}, rounds them to the coarsest readable step
+ * ({@link #READABLE_STEPS_DEG}: 0.5 deg for a continent, finer for a narrow country) that costs at most
+ * {@link #ROUNDING_COST} of the score, polishing on that step's lattice. Forced parameters stay as given.
  *
  * <p>Starting values (common practice in the trade): azimuthal centre at the data's spherical centre (the
  * pole when the data contain it); Albers standard parallels at 1/6 and 5/6 of the latitude range; for the
@@ -32,6 +33,15 @@ final class FamilySearch {
 
     /** Most rounds of the lattice polish (each tries one step either way on every free parameter). */
     private static final int POLISH_ROUNDS = 4;
+
+    /**
+     * Readable steps the searched parameters are rounded to, coarsest first: the first whose rounded (and
+     * polished) parameters cost at most {@link #ROUNDING_COST} of the unrounded optimum's score is kept.
+     */
+    static final double[] READABLE_STEPS_DEG = {0.5, 0.1, 0.05, 0.01, 0.005, 0.001};
+
+    /** Largest share of the score that rounding to a readable step may cost (issue #16: 2 % of omega max). */
+    static final double ROUNDING_COST = 0.02;
 
     /** Stop when the simplex's scores agree within this many degrees. */
     private static final double TOLERANCE_DEG = 1e-4;
@@ -70,20 +80,36 @@ final class FamilySearch {
             start[i] = values.get(free.get(i));
             steps[i] = initialStep(free.get(i));
         }
-        double[] best = NelderMead.minimise(x -> score(values, free, x), start, steps,
+        double[] optimum = NelderMead.minimise(x -> score(values, free, x), start, steps,
                 EVALUATIONS_PER_PARAMETER * free.size(), TOLERANCE_DEG);
+        double affordable = score(values, free, optimum) * (1 + ROUNDING_COST);
+        double[] best = null;
+        for (double readableStepDeg : READABLE_STEPS_DEG) {
+            best = roundedAndPolished(values, free, optimum, readableStepDeg);
+            if (score(values, free, best) <= affordable) {
+                break;
+            }
+        }
         for (int i = 0; i < best.length; i++) {
-            best[i] = round(free.get(i), best[i]);
+            values.put(free.get(i), best[i]);
+        }
+        return values;
+    }
+
+    /** The optimum rounded to {@code stepDeg}, then moved one step at a time on that lattice while that helps. */
+    private double[] roundedAndPolished(Map<String, Double> values, List<String> free, double[] optimum, double stepDeg) {
+        double[] best = new double[optimum.length];
+        for (int i = 0; i < best.length; i++) {
+            best[i] = round(free.get(i), optimum[i], stepDeg);
         }
         double bestScore = score(values, free, best);
-        // polish on the rounding lattice: move one parameter by one step while that helps
         boolean improved = true;
         for (int round = 0; round < POLISH_ROUNDS && improved; round++) {
             improved = false;
             for (int i = 0; i < best.length; i++) {
                 for (double direction : new double[] {-1, 1}) {
                     double[] trial = best.clone();
-                    trial[i] = round(free.get(i), trial[i] + direction * roundingStepDeg);
+                    trial[i] = round(free.get(i), trial[i] + direction * stepDeg, stepDeg);
                     double s = score(values, free, trial);
                     if (s < bestScore - 1e-12) {
                         best = trial;
@@ -93,10 +119,7 @@ final class FamilySearch {
                 }
             }
         }
-        for (int i = 0; i < best.length; i++) {
-            values.put(free.get(i), best[i]);
-        }
-        return values;
+        return best;
     }
 
     /** Builds the projection, or returns null when the values are not allowed for this family. */
@@ -128,7 +151,7 @@ final class FamilySearch {
         double side = footprint.maxLatDeg() + footprint.minLatDeg() >= 0 ? 1.0 : -1.0;
         double p1 = values.get(STANDARD_PARALLEL_1) * side;
         double p2 = values.get(STANDARD_PARALLEL_2) * side;
-        return p1 >= 0 && p2 >= 0 && p1 + p2 > 0.5 && p1 <= 89 && p2 <= 89;
+        return p1 >= 0 && p2 >= 0 && p1 + p2 > 0.5 && p1 <= 90 && p2 <= 90;
     }
 
     private List<String> searchedKeys() {
@@ -243,7 +266,11 @@ final class FamilySearch {
     }
 
     private double round(String key, double value) {
-        double perDegree = Math.rint(1.0 / roundingStepDeg);   // steps are 1/2, 1/10, 1/100, 1/1000 deg
+        return round(key, value, roundingStepDeg);
+    }
+
+    private static double round(String key, double value, double stepDeg) {
+        double perDegree = Math.rint(1.0 / stepDeg);   // steps are whole fractions of a degree: 1/2, 1/10, ... 1/1000
         return normalised(key, Math.round(normalised(key, value) * perDegree) / perDegree);
     }
 }

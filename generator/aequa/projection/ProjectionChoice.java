@@ -13,12 +13,20 @@ import java.util.List;
  * @param worstLatDeg  latitude of that point
  * @param runnersUp    the best other candidates, best first
  * @param reason       one plain-language sentence saying why this projection was chosen
+ * @param spread       how omega is spread over the mapped area, for readers ({@link DistortionSpread})
  */
 public record ProjectionChoice(EqualAreaProjection projection, double omegaMaxDeg, double omegaMeanDeg,
-                               double worstLonDeg, double worstLatDeg, List<Candidate> runnersUp, String reason) {
+                               double worstLonDeg, double worstLatDeg, List<Candidate> runnersUp, String reason,
+                               DistortionSpread spread) {
 
     public ProjectionChoice {
         runnersUp = List.copyOf(runnersUp);
+    }
+
+    /** A choice whose spread was not measured ({@link DistortionSpread#UNKNOWN}). */
+    public ProjectionChoice(EqualAreaProjection projection, double omegaMaxDeg, double omegaMeanDeg,
+                            double worstLonDeg, double worstLatDeg, List<Candidate> runnersUp, String reason) {
+        this(projection, omegaMaxDeg, omegaMeanDeg, worstLonDeg, worstLatDeg, runnersUp, reason, DistortionSpread.UNKNOWN);
     }
 
     /** A candidate that was evaluated and not chosen. */

@@ -13,39 +13,47 @@ import java.util.Objects;
  * <p>Rules (common practice): a world family (Equal Earth, Mollweide) when the data span most of the globe
  * (at least 240 deg of longitude and 120 deg of latitude, or more than 100 deg from their centre); else
  * the regional families: Lambert azimuthal (round and polar extents), Albers (only when the data lie on one
- * side of the equator and contain no pole: never Albers across the equator), normal cylindrical
+ * side of the equator: never Albers across the equator; for data within {@value #NEAR_POLE_DEG} deg of a
+ * pole also the limiting conic with one standard parallel at the pole, the better of the two kept), normal cylindrical
  * (equatorial belts), transverse and oblique cylindrical (north-south and slanting belts: only when the
  * data are at least {@value #ELONGATED} times longer than wide, since a cylinder along a great circle cannot
  * beat the azimuthal projection on a round area), and the world families too when the data reach 60 deg
  * from their centre. The azimuthal domain ends 135 deg from the
  * centre, so it can never show the whole world in one piece.
  *
- * <p>Tie-break: unconventional aspects must earn their place. Among the candidates whose score is within
- * {@value #CONVENTIONAL_MARGIN} (relative) plus {@value #CONVENTIONAL_MARGIN_DEG} deg of the best, the most
- * conventional wins: north-up normal aspects first (azimuthal, conic, normal cylindrical, Equal Earth), then
- * Mollweide and the transverse aspect, then oblique. For whole-world data the largest omega sits at a pole
+ * <p>Tie-break, a stated trade: unconventional aspects must earn their place, but only by a fixed margin.
+ * Among the candidates whose score is within {@value #CONVENTIONAL_MARGIN} (relative, no absolute allowance)
+ * of the best, the most conventional wins: north-up normal aspects first (azimuthal, conic, normal
+ * cylindrical, Equal Earth), then Mollweide and the transverse aspect, then oblique. Beyond the margin the
+ * best wins whatever its aspect, and the reason sentence gives both figures. Measured on Natural Earth
+ * 1:110m (ProjectionTailTest): an absolute allowance of 0.1 deg, as earlier versions had, kept a transverse
+ * cylinder for Chile at 1.5 times the oblique one's omega and an azimuthal map for Malawi and Vanuatu at 1.6
+ * to 3.3 times the transverse one's. For whole-world data the largest omega sits at a pole
  * for every world family and says little, so Equal Earth, whose straight parallels and flattened poles
  * readers find familiar (Savric, Patterson and Jenny 2018, section 1), wins unless Mollweide is clearly
  * better. Stability: a previous choice that is still allowed is kept unless the new
- * best scores at least {@value #STABILITY_MARGIN} (10 %) lower. Parameters are rounded to readable steps
- * ({@link #roundingStepDeg}).
+ * best scores at least {@value #STABILITY_MARGIN} (10 %) lower. Parameters are rounded to the coarsest readable
+ * step that costs at most 2 % of the score ({@link FamilySearch}).
  */
 public final class ProjectionChooser {
 
     /** A new choice replaces the previous one only when its score is this fraction lower. */
     static final double STABILITY_MARGIN = 0.10;
 
-    /** Relative margin within which a more conventional aspect is preferred. */
+    /** Relative margin within which a more conventional aspect is preferred (see the class comment). */
     static final double CONVENTIONAL_MARGIN = 0.10;
-
-    /** Absolute margin, in degrees, added to {@link #CONVENTIONAL_MARGIN}. */
-    static final double CONVENTIONAL_MARGIN_DEG = 0.1;
 
     /** Samples used while searching parameters; the final figures use all of the footprint's samples. */
     static final int SEARCH_SAMPLES = 240;
 
     /** Elongation from which the transverse and oblique cylindrical aspects are tried. */
     static final double ELONGATED = 1.5;
+
+    /**
+     * Data this close to a pole (degrees of latitude) also try the Albers conic with a standard parallel at the
+     * pole: for Antarctica it has half the polar azimuthal's omega (ProjectionTailTest).
+     */
+    static final double NEAR_POLE_DEG = 30.0;
 
     private static final int RUNNERS_UP = 4;
 
@@ -70,11 +78,19 @@ public final class ProjectionChooser {
             // normal conic and cylindrical maps distort alike all along a parallel (Snyder 1987, chapters 10
             // and 14), so their search needs one sample per latitude only
             boolean latitudeOnly = family == ProjectionFamily.ALBERS_CONIC || family == ProjectionFamily.CYLINDRICAL;
-            Map<String, Double> values = new FamilySearch(family, footprint, latitudeOnly ? latitudes : search, forced, step).run();
-            EqualAreaProjection projection = request.family().isPresent()
-                    ? Projections.create(family, values) : FamilySearch.build(family, values);
-            if (projection != null) {
-                evaluated.add(new Evaluated(projection, OmegaScore.of(projection, footprint.samples())));
+            FootprintSamples samples = latitudeOnly ? latitudes : search;
+            Evaluated best = evaluate(family, new FamilySearch(family, footprint, samples, forced, step).run(), request, footprint);
+            if (family == ProjectionFamily.ALBERS_CONIC && nearPole(footprint) && !forced.containsKey(FamilyDefinitions.STANDARD_PARALLEL_1)) {
+                // the limiting conic: one standard parallel at the pole, the other searched (issue #16)
+                Map<String, Double> atPole = new java.util.HashMap<>(forced);
+                atPole.put(FamilyDefinitions.STANDARD_PARALLEL_1, footprint.midLatDeg() >= 0 ? 90.0 : -90.0);
+                Evaluated limiting = evaluate(family, new FamilySearch(family, footprint, samples, atPole, step).run(), request, footprint);
+                if (best == null || limiting != null && limiting.score.score() < best.score.score()) {
+                    best = limiting;
+                }
+            }
+            if (best != null) {
+                evaluated.add(best);
             }
         }
         evaluated.sort(Comparator.comparingDouble((Evaluated e) -> e.score.score()).thenComparing(e -> e.projection.family()));
@@ -96,7 +112,22 @@ public final class ProjectionChooser {
         String reason = ChoiceReason.sentence(chosen.projection, chosen.score, footprint, basis,
                 runnersUp.isEmpty() ? null : runnersUp.get(0));
         return new ProjectionChoice(chosen.projection, chosen.score.omegaMaxDeg(), chosen.score.omegaMeanDeg(),
-                chosen.score.worstLonDeg(), chosen.score.worstLatDeg(), runnersUp, reason);
+                chosen.score.worstLonDeg(), chosen.score.worstLatDeg(), runnersUp, reason,
+                DistortionSpread.of(chosen.projection, footprint, chosen.score.worstLonDeg(), chosen.score.worstLatDeg()));
+    }
+
+    /** The family with these values, scored on all of the footprint's samples; null when the values are not allowed. */
+    private static Evaluated evaluate(ProjectionFamily family, Map<String, Double> values, ProjectionRequest request,
+                                      Footprint footprint) {
+        EqualAreaProjection projection = request.family().isPresent()
+                ? Projections.create(family, values) : FamilySearch.build(family, values);
+        return projection == null ? null : new Evaluated(projection, OmegaScore.of(projection, footprint.samples()));
+    }
+
+    /** Whether the data contain a pole or reach within {@value #NEAR_POLE_DEG} deg of latitude of one. */
+    static boolean nearPole(Footprint footprint) {
+        return footprint.containsNorthPole() || footprint.containsSouthPole()
+                || Math.max(Math.abs(footprint.minLatDeg()), Math.abs(footprint.maxLatDeg())) >= 90 - NEAR_POLE_DEG;
     }
 
     /** The families the trade's rules allow for this footprint (see the class comment). */
@@ -112,7 +143,7 @@ public final class ProjectionChooser {
             families.add(ProjectionFamily.CYLINDRICAL_TRANSVERSE);
             families.add(ProjectionFamily.CYLINDRICAL_OBLIQUE);
         }
-        if (!footprint.crossesEquator() && !footprint.containsNorthPole() && !footprint.containsSouthPole()) {
+        if (!footprint.crossesEquator() && !(footprint.containsNorthPole() && footprint.containsSouthPole())) {
             families.add(ProjectionFamily.ALBERS_CONIC);
         }
         if (footprint.angularRadiusDeg() >= 60) {
@@ -123,10 +154,11 @@ public final class ProjectionChooser {
     }
 
     /**
-     * The step parameters are rounded to, from the data's narrower dimension (half the smaller of the latitude
-     * range and the longitude span shortened by cos(mid latitude)): 0.5 deg from 15 deg up, 0.1 deg from
-     * 3 deg, 0.01 deg from 0.3 deg, else 0.001 deg; fine enough that rounding costs little omega (omega grows
-     * with the square of the narrow dimension), coarse enough to read.
+     * The step for the parameters that are set from the data rather than searched (the central meridian of
+     * conic and normal cylindrical maps) and the scale of the search's first moves, from the data's narrower
+     * dimension (half the smaller of the latitude range and the longitude span shortened by cos(mid latitude)):
+     * 0.5 deg from 15 deg up, 0.1 deg from 3 deg, 0.01 deg from 0.3 deg, else 0.001 deg. The searched
+     * parameters are rounded by cost instead ({@link FamilySearch#READABLE_STEPS_DEG}).
      */
     static double roundingStepDeg(Footprint footprint) {
         double midLat = Math.toRadians(footprint.midLatDeg());
@@ -155,7 +187,7 @@ public final class ProjectionChooser {
 
     private static Evaluated mostConventionalNearBest(List<Evaluated> sorted) {
         Evaluated best = sorted.get(0);
-        double limit = best.score.score() * (1 + CONVENTIONAL_MARGIN) + CONVENTIONAL_MARGIN_DEG;
+        double limit = best.score.score() * (1 + CONVENTIONAL_MARGIN);
         Evaluated chosen = best;
         for (Evaluated e : sorted) {
             if (e.score.score() <= limit && conventionality(e.projection.family()) < conventionality(chosen.projection.family())) {

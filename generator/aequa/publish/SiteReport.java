@@ -20,6 +20,7 @@ import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
 import aequa.findings.Finding;
 import aequa.inputs.figures.SpecWords;
+import aequa.projection.DistortionSpread;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionParameter;
 
@@ -30,7 +31,8 @@ import aequa.projection.ProjectionParameter;
  * the {@code maps} section, so scripts and the next publish can tell whether the figures changed),
  * {@code maps}, {@code findings} (at most {@value #FINDINGS_PER_KIND} of each code, then one entry per code
  * with the number {@code omitted}), {@code changes}. Per map: id, title, unit, asOf, periods, source, files,
- * projection (family, name, parameters, wkt2, omegaMaxDeg, omegaMeanDeg, worst point, reason, runnersUp),
+ * projection (family, name, parameters, wkt2, omegaMaxDeg, omegaMeanDeg, worst point and where it is in words,
+ * omegaAreaShares below 1, 5 and 10 deg, omegaP95Deg, reason, runnersUp),
  * areaAudit (maxRelativeError, worstKey, tolerance, passed), classification (method, breaks = the class
  * limits, counts), colours, notices and regions. Per region: key, name, geodesicAreaKm2, mapAreaRatio, drawn
  * (false when simplification left no shape to draw), the
@@ -174,6 +176,13 @@ final class SiteReport {
         ObjectNode worst = node.putObject("omegaWorstPoint");
         number(worst, "lonDeg", choice.worstLonDeg());
         number(worst, "latDeg", choice.worstLatDeg());
+        DistortionSpread spread = choice.spread();
+        worst.put("where", spread.worstPlace());
+        ObjectNode shares = node.putObject("omegaAreaShares");
+        number(shares, "below1Deg", spread.shareBelow1Deg());
+        number(shares, "below5Deg", spread.shareBelow5Deg());
+        number(shares, "below10Deg", spread.shareBelow10Deg());
+        number(node, "omegaP95Deg", spread.omegaP95Deg());
         node.put("reason", choice.reason());
         ArrayNode runnersUp = node.putArray("runnersUp");
         for (ProjectionChoice.Candidate c : choice.runnersUp()) {

@@ -135,7 +135,17 @@ class DemoPublishTest {
         // whole world, mid-latitude east-west, circumpolar ring, equatorial belt, north-south strip
         assertTrue(families.size() >= 4, "families: " + families);
         assertEquals("equal-earth", family("microgrid-share"));
-        assertEquals("cylindrical", family("vaccination-rate"));
+        // the equatorial belt: the normal cylinder, unless a slanted one beats it by more than the 10 % margin
+        // within which the north-up aspect is preferred (issue #16; the demo's belt is close to that line)
+        JsonNode belt = projection("vaccination-rate");
+        if (!belt.path("family").asText().equals("cylindrical")) {
+            assertEquals("cylindrical-oblique", belt.path("family").asText());
+            for (JsonNode runnerUp : belt.path("runnersUp")) {
+                if (runnerUp.path("family").asText().equals("cylindrical")) {
+                    assertTrue(runnerUp.path("omegaMaxDeg").asDouble() > 1.1 * belt.path("omegaMaxDeg").asDouble(), belt.toString());
+                }
+            }
+        }
         assertEquals("cylindrical-transverse", family("literacy-change"));
     }
 
@@ -190,9 +200,13 @@ class DemoPublishTest {
     }
 
     private String family(String mapId) {
+        return projection(mapId).path("family").asText();
+    }
+
+    private JsonNode projection(String mapId) {
         for (JsonNode map : report.path("maps")) {
             if (map.path("id").asText().equals(mapId)) {
-                return map.path("projection").path("family").asText();
+                return map.path("projection");
             }
         }
         throw new AssertionError("no map " + mapId);

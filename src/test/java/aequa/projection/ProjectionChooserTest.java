@@ -49,19 +49,29 @@ class ProjectionChooserTest {
     }
 
     @Test
-    void polarCapGetsAPolarAzimuthal() {
+    void polarCapGetsTheBetterOfThePolarAzimuthalAndTheLimitingConic() {
+        // issue #16: for a cap the chooser keeps the better of the polar azimuthal and the Albers conic with one
+        // standard parallel at the pole; both are searched here on grids
         Footprint cap = Footprint.of(List.of(Regions.box(-180, 60, 180, 90)));
         ProjectionChoice choice = ProjectionChooser.choose(cap, ProjectionRequest.automatic());
-        assertEquals(ProjectionFamily.LAMBERT_AZIMUTHAL, choice.projection().family(), choice.reason());
-        assertEquals(90.0, value(choice, "centre-lat"), 0.0);
-        double best = Double.POSITIVE_INFINITY;
+        double azimuthal = Double.POSITIVE_INFINITY;
         for (double lat = 80; lat <= 90; lat += 0.5) {
             for (double lon = -180; lon < 180; lon += 30) {
-                best = Math.min(best, omegaMax(ProjectionFamily.LAMBERT_AZIMUTHAL, Map.of("centre-lon", lon, "centre-lat", lat), cap));
+                azimuthal = Math.min(azimuthal, omegaMax(ProjectionFamily.LAMBERT_AZIMUTHAL, Map.of("centre-lon", lon, "centre-lat", lat), cap));
             }
         }
-        assertTrue(choice.omegaMaxDeg() <= best * WITHIN, choice.omegaMaxDeg() + " vs grid " + best);
+        double conic = Double.POSITIVE_INFINITY;
+        for (double p2 = 60; p2 < 90; p2 += 0.1) {
+            conic = Math.min(conic, omegaMax(ProjectionFamily.ALBERS_CONIC, albers(90, p2), cap));
+        }
+        assertTrue(choice.omegaMaxDeg() <= Math.min(azimuthal, conic) * WITHIN, choice.omegaMaxDeg() + " vs grids " + azimuthal + ", " + conic);
+        assertEquals(conic < azimuthal ? ProjectionFamily.ALBERS_CONIC : ProjectionFamily.LAMBERT_AZIMUTHAL, choice.projection().family());
         assertTrue(choice.reason().contains("North Pole"), choice.reason());
+        // the polar azimuthal's own optimum is centred on the pole
+        ProjectionChoice forced = ProjectionChooser.choose(cap, new ProjectionRequest(
+                Optional.of(ProjectionFamily.LAMBERT_AZIMUTHAL), Map.of(), Optional.empty()));
+        assertEquals(90.0, value(forced, "centre-lat"), 0.0);
+        assertTrue(forced.omegaMaxDeg() <= azimuthal * WITHIN, forced.omegaMaxDeg() + " vs grid " + azimuthal);
     }
 
     @Test
