@@ -36,6 +36,9 @@ final class Caption {
             text.append(" (at the ").append(choice.worstLatDeg() > 0 ? "North" : "South").append(" Pole)");
         }
         text.append(", mean ").append(Numbers.trim(choice.omegaMeanDeg(), 1)).append("\u00b0.");
+        if (model.composite()) {
+            text.append(' ').append(PartSentences.parts(model));
+        }
         if (model.areaAudit() != null) {
             double percent = model.areaAudit().maxRelativeError() * 100;
             text.append(" Areas are true: largest difference from the ellipsoid ")
@@ -43,7 +46,8 @@ final class Caption {
         }
         if (scale != null) {
             text.append(" The square shows ").append(scale.label())
-                    .append(" anywhere on the map; distances are not to scale.");
+                    .append(model.mixedAreaScales() ? " anywhere on the main map and in every part drawn at its scale" : " anywhere on the map")
+                    .append("; distances are not to scale.");
         }
         return text.toString();
     }

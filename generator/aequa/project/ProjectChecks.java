@@ -49,6 +49,7 @@ final class ProjectChecks {
 
     private void checkRegionSource(String at, RegionSourceSpec source) {
         checkFile(at, source.file(), List.of(".geojson", ".json", ".gpkg"));
+        InsetsChecks.check(at + "/insets", source.insets(), this::error);
         if (source.key().isBlank()) {
             error("project-missing-key", at + "/key", "The region source has an empty 'key'.",
                     "Name the property that holds each region's code, or '" + RegionSourceSpec.FEATURE_ID + "' for the feature id.");
@@ -94,6 +95,9 @@ final class ProjectChecks {
         }
         oneOf(at + "/display", map.display(), List.of("choropleth", "circles"));
         checkClasses(at + "/classes", map.classes());
+        if (map.insets() != null) {
+            InsetsChecks.check(at + "/insets", map.insets(), this::error);
+        }
         oneOf(at + "/colours/scheme", map.colours().scheme(), List.of("sequential", "diverging", "qualitative"));
         if (map.colours().hue() < 0 || map.colours().hue() > 360) {
             error("project-bad-value", at + "/colours/hue", "'hue' must be between 0 and 360 degrees.", "");
