@@ -116,12 +116,14 @@ public final class CompositePlanner {
             InsetsSpec.InsetPartSpec spec = insets.parts().get(i);
             String at = place.pointer() + "/" + i;
             Set<String> keys = new LinkedHashSet<>();
+            boolean unknownKey = false;
             for (int k = 0; k < spec.regions().size(); k++) {
                 String key = spec.regions().get(k);
                 if (!known.contains(key)) {
                     error(findings, place, "insets-unknown-key", at + "/regions/" + k,
                             "Inset part " + (i + 1) + " lists '" + key + "', which is no region of the map.",
                             "Use the keys of the region source (the property named by its 'key').");
+                    unknownKey = true;
                     broken = true;
                 } else {
                     keys.add(key);
@@ -143,7 +145,7 @@ public final class CompositePlanner {
                     broken = true;
                 }
             }
-            if (keys.isEmpty() && !(spec.regions().isEmpty() && spec.box().isEmpty())) {
+            if (keys.isEmpty() && !unknownKey && !(spec.regions().isEmpty() && spec.box().isEmpty())) {
                 error(findings, place, "insets-empty-part", at, "Inset part " + (i + 1) + " holds no region of the map.",
                         "Check its keys, or widen its box: a region is in a box when a point inside it is.");
                 broken = true;

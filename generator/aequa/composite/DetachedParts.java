@@ -26,7 +26,10 @@ import aequa.projection.ProjectionRequest;
  *     stays with the mainland. A region is never split: its own offshore islands always go with it.</li>
  * <li><b>The main mass</b> is the group with the largest geodesic area. A group is a candidate for a
  *     detached part when its geodesic gap to the main mass exceeds {@value #GAP_RATIO} times the square root
- *     of the main mass's area (the main mass's size): 430 km for the contiguous states.</li>
+ *     of the main mass's area (the main mass's size): 420 km for the contiguous states. The main mass, with
+ *     the groups that are not candidates, must hold at least {@value #MIN_MAIN_SHARE} of the total area (82 %
+ *     for the United States); otherwise nothing is split off, since islands of like size with no main mass (an
+ *     archipelago) are one map.</li>
  * <li><b>Candidates near each other form one part</b> when their gap is under {@value #MERGE_SHARE} of the
  *     smaller of their gaps to the main mass (an archipelago far away is one inset, not one per island).</li>
  * <li><b>A candidate is detached</b> when it lies far away, more than {@value #FAR_RATIO} times the main mass's
@@ -47,6 +50,7 @@ final class DetachedParts {
     static final double MERGE_SHARE = 0.25;
     static final double OMEGA_GROWTH = 0.5;
     static final double OMEGA_MARGIN_DEG = 0.5;
+    static final double MIN_MAIN_SHARE = 0.5;
 
     /**
      * One group found.
@@ -115,6 +119,10 @@ final class DetachedParts {
             } else {
                 mainMass.addAll(group);
             }
+        }
+        double mainMassKm2 = area.apply(mainMass);
+        if (mainMassKm2 < MIN_MAIN_SHARE * totalKm2) {
+            return new Result(new Group(keys(regions), totalKm2, 0, Double.NaN), List.of(), Double.NaN, linkKm, detachGapKm);
         }
         mergeNearCandidates(candidates);
 

@@ -42,7 +42,7 @@ final class PartFrames {
             for (int i = 0; i < regions.size(); i++) {
                 partPages.add(keys.contains(regions.get(i).key()) ? pages.get(i) : empty);
             }
-            canvas.begin(Ids.of("part", part.id()) + suffix);
+            canvas.begin(Ids.of("regions", part.id()) + suffix);
             paintRegions.accept(partPages);
             canvas.end();
         }

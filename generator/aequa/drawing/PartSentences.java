@@ -34,7 +34,7 @@ final class PartSentences {
         StringBuilder text = new StringBuilder("These figures are for the main map; ");
         text.append(list(model.parts().stream().filter(p -> !p.main()).map(MapPart::name).toList()))
                 .append(model.parts().size() == 2 ? " is" : " are").append(" framed, each on its own equal-area projection (\u03c9 up to ")
-                .append(Numbers.trim(worstOmegaDeg, 1)).append("\u00b0)");
+                .append(Numbers.trim(worstOmegaDeg, worstOmegaDeg < 1 ? 2 : 1)).append("\u00b0)");
         if (otherScale.isEmpty()) {
             text.append(", at the main map's area scale, so areas compare across the whole map.");
         } else {

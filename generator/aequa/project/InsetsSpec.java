@@ -2,7 +2,11 @@ package aequa.project;
 
 import java.util.List;
 
-import com.fasterxml.jackson.annotation.JsonCreator;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.databind.DeserializationContext;
+import com.fasterxml.jackson.databind.JsonDeserializer;
+import com.fasterxml.jackson.databind.annotation.JsonDeserialize;
 
 /**
  * How a map's detached parts are drawn (the {@code insets} setting of a map or a region source): {@code auto}
@@ -13,6 +17,7 @@ import com.fasterxml.jackson.annotation.JsonCreator;
  *              project checks); empty when it is a list
  * @param parts the listed parts, empty unless the setting is a list
  */
+@JsonDeserialize(using = InsetsSpec.Reader.class)
 public record InsetsSpec(String word, List<InsetPartSpec> parts) {
 
     public static final InsetsSpec AUTO = new InsetsSpec("auto", List.of());
@@ -20,18 +25,6 @@ public record InsetsSpec(String word, List<InsetPartSpec> parts) {
     public InsetsSpec {
         word = word == null ? "" : word;
         parts = parts == null ? List.of() : List.copyOf(parts);
-    }
-
-    /** The setting written as a word: {@code insets: off}. */
-    @JsonCreator
-    public static InsetsSpec valueOf(String word) {
-        return new InsetsSpec(word, List.of());
-    }
-
-    /** The setting written as a list of parts. */
-    @JsonCreator(mode = JsonCreator.Mode.DELEGATING)
-    public static InsetsSpec listed(List<InsetPartSpec> parts) {
-        return new InsetsSpec("", parts);
     }
 
     public boolean off() {
@@ -60,6 +53,29 @@ public record InsetsSpec(String word, List<InsetPartSpec> parts) {
             box = box == null ? List.of() : List.copyOf(box);
             scale = scale == null ? 1.0 : scale;
             corner = corner == null ? "" : corner;
+        }
+    }
+
+    /**
+     * Reads the setting as a word or as a list of parts; the parts are bound by Jackson as every other section
+     * is, so an unknown key or a wrong type inside them is reported with its line like anywhere else.
+     */
+    static final class Reader extends JsonDeserializer<InsetsSpec> {
+        @Override
+        public InsetsSpec deserialize(JsonParser parser, DeserializationContext context) throws java.io.IOException {
+            if (parser.currentToken() == JsonToken.VALUE_STRING) {
+                return new InsetsSpec(parser.getText(), List.of());
+            }
+            if (parser.currentToken() == JsonToken.VALUE_FALSE || parser.currentToken() == JsonToken.VALUE_TRUE) {
+                // YAML 1.1 reads a bare 'off' (and 'no', 'false') as false, 'on' as true
+                return new InsetsSpec(parser.currentToken() == JsonToken.VALUE_FALSE ? "off" : "auto", List.of());
+            }
+            if (parser.currentToken() == JsonToken.START_ARRAY) {
+                List<InsetPartSpec> parts = context.readValue(parser,
+                        context.getTypeFactory().constructCollectionType(List.class, InsetPartSpec.class));
+                return new InsetsSpec("", parts);
+            }
+            return (InsetsSpec) context.handleUnexpectedToken(List.class, parser);
         }
     }
 }

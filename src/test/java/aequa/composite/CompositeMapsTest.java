@@ -46,6 +46,7 @@ class CompositeMapsTest {
     private static final GeometryFactory GEOMETRY = new GeometryFactory();
 
     private static MapModel counties;
+    private static MapModel countiesOneProjection;
     private static MapModel statesScaled;
 
     @BeforeAll
@@ -66,6 +67,7 @@ class CompositeMapsTest {
                 "  states: { file: figures/states.csv, key: code }",
                 "maps:",
                 "  - { id: counties, regions: counties, figures: counties, indicator: code_number, measure: rate }",
+                "  - { id: counties-one, regions: counties, figures: counties, indicator: code_number, measure: rate, insets: off }",
                 "  - id: states",
                 "    regions: states",
                 "    figures: states",
@@ -80,7 +82,8 @@ class CompositeMapsTest {
         Atlas atlas = AtlasLoader.load(loaded, LoadOptions.defaults(), findings);
         assertTrue(!findings.hasErrors(), findings.list().toString());
         counties = atlas.maps().get(0);
-        statesScaled = atlas.maps().get(1);
+        countiesOneProjection = atlas.maps().get(1);
+        statesScaled = atlas.maps().get(2);
     }
 
     @Test
@@ -169,6 +172,34 @@ class CompositeMapsTest {
         assertEquals(0.25, drawn.planarM().getArea() / 1e6 / drawn.geodesicAreaKm2(), 0.005);
         assertEquals(List.of("15"), statesScaled.parts().get(2).keys());
         assertEquals(3, statesScaled.parts().size(), "the other territories stay in the main part of a listed map");
+    }
+
+    /**
+     * The share of the map's box (regions and frames) that regions fill: the issue measured well under a third
+     * for one projection of the counties; the composite map must fill clearly more.
+     */
+    @Test
+    void theCompositeMapFillsMoreOfItsFrame() {
+        assertEquals(List.of(), countiesOneProjection.parts(), "insets: off draws one projection");
+        double before = fillShare(countiesOneProjection);
+        double after = fillShare(counties);
+        assertTrue(before < 1.0 / 3, "one projection fills " + before);
+        assertTrue(after > 1.4 * before, "composite fills " + after + " against " + before);
+    }
+
+    static double fillShare(MapModel map) {
+        Envelope box = new Envelope();
+        double areaM2 = 0;
+        for (MapRegion r : map.regions()) {
+            if (!r.planarM().isEmpty()) {
+                box.expandToInclude(r.planarM().getEnvelopeInternal());
+                areaM2 += r.planarM().getArea();
+            }
+        }
+        for (MapPart p : map.parts()) {
+            box.expandToInclude(new Envelope(p.frame().minXM(), p.frame().maxXM(), p.frame().minYM(), p.frame().maxYM()));
+        }
+        return areaM2 / box.getArea();
     }
 
     /**
