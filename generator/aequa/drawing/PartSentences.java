@@ -13,6 +13,9 @@ import aequa.atlas.MapPart;
  */
 final class PartSentences {
 
+    /** Most framed parts the caption names one by one. */
+    private static final int MAX_NAMED = 3;
+
     private PartSentences() {
     }
 
@@ -31,9 +34,12 @@ final class PartSentences {
                 otherScale.add(part.name() + " at " + part.areaScaleText() + " \u00d7");
             }
         }
+        List<String> names = model.parts().stream().filter(p -> !p.main()).map(MapPart::name).toList();
+        // a few short names read well in a sentence; descriptive default names ("29 regions, 820 km north-west") do not
+        boolean byName = names.size() <= MAX_NAMED && names.stream().noneMatch(n -> n.contains(","));
         StringBuilder text = new StringBuilder("These figures are for the main map; ");
-        text.append(list(model.parts().stream().filter(p -> !p.main()).map(MapPart::name).toList()))
-                .append(model.parts().size() == 2 ? " is" : " are").append(" framed, each on its own equal-area projection (\u03c9 up to ")
+        text.append(byName ? list(names) : names.size() + " detached parts")
+                .append(names.size() == 1 ? " is" : " are").append(" framed, each on its own equal-area projection (\u03c9 up to ")
                 .append(Numbers.trim(worstOmegaDeg, worstOmegaDeg < 1 ? 2 : 1)).append("\u00b0)");
         if (otherScale.isEmpty()) {
             text.append(", at the main map's area scale, so areas compare across the whole map.");
