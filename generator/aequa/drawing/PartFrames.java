@@ -71,9 +71,12 @@ final class PartFrames {
             if (width > room) {
                 size *= room / width;
             }
+            // never below the theme's smallest type (print preflight): a small print lets the name reach past its band
+            size = Math.max(size, theme.typePt().minimum());
             canvas.begin(Ids.of("frame", part.id()) + suffix);
             canvas.stroke(new Rectangle2D.Double(x, y, w, h), c.textMuted(), theme.lines().border().pt());
-            canvas.text(label, x + bandU * 0.3, y + (bandU + type.capHeight(size)) / 2, size, false, Canvas.Anchor.START,
+            double baseline = y + Math.max((bandU + type.capHeight(size)) / 2, bandU * 0.3 + type.capHeight(size));
+            canvas.text(label, x + bandU * 0.3, baseline, size, false, Canvas.Anchor.START,
                     c.text(), c.background());
             canvas.end();
         }
