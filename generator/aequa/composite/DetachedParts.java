@@ -33,7 +33,7 @@ import aequa.projection.ProjectionRequest;
  * <li><b>Candidates near each other form one part</b> when their gap is under {@value #MERGE_SHARE} of the
  *     smaller of their gaps to the main mass (an archipelago far away is one inset, not one per island).</li>
  * <li><b>A candidate is detached</b> when it lies far away, more than {@value #FAR_RATIO} times the main mass's
- *     size (Hawaii, 3,800 km from California; Puerto Rico, 1,650 km from Florida), or when it would cost the
+ *     size (Hawaii, 3,680 km from California; Puerto Rico, 1,500 km from Florida), or when it would cost the
  *     main map dearly: when the automatic projection for the main mass plus the candidate has a largest omega
  *     more than (1 + {@value #OMEGA_GROWTH}) times the main mass's own plus {@value #OMEGA_MARGIN_DEG} deg
  *     (Alaska, 820 km from Washington, takes the contiguous states' omega from 1.4 to 3.1 deg). Otherwise it

@@ -17,8 +17,9 @@ final class PointCloud {
 
     /**
      * Vertices compared per set when measuring a gap; a larger set is thinned evenly to this many, which moves
-     * the measured gap by at most the thinning stride times the vertex spacing (the largest gap error on the
-     * US counties file is 12 km against gaps from 700 km, measured by comparing with the unthinned sets).
+     * the measured gap by at most the thinning stride times the vertex spacing (on the US counties file, whose
+     * contiguous states have 161,981 vertices, the largest gap error is 4 km, for gaps from 816 km, measured
+     * against the unthinned sets).
      */
     static final int MAX_POINTS = 12_000;
 

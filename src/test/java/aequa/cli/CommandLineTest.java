@@ -118,8 +118,9 @@ class CommandLineTest {
         JsonNode parts = new ObjectMapper().readTree(out.toString()).path("parts");
         assertEquals(6, parts.size(), parts.toString());
         assertTrue(parts.get(0).path("main").asBoolean());
-        assertEquals("Alaska", parts.get(1).path("name").asText());
-        assertEquals("Hawaii", parts.get(2).path("name").asText());
+        // explain keys regions by the feature id, which this file has as the FIPS code
+        assertEquals("[\"02\"]", parts.get(1).path("regions").toString());
+        assertEquals("[\"15\"]", parts.get(2).path("regions").toString());
         assertTrue(parts.get(1).path("omegaMaxDeg").asDouble() < parts.get(0).path("omegaMaxDeg").asDouble() * 2);
         out.getBuffer().setLength(0);
         assertEquals(0, run("explain", states), err.toString());

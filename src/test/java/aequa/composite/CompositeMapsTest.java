@@ -184,7 +184,8 @@ class CompositeMapsTest {
         double before = fillShare(countiesOneProjection);
         double after = fillShare(counties);
         assertTrue(before < 1.0 / 3, "one projection fills " + before);
-        assertTrue(after > 1.4 * before, "composite fills " + after + " against " + before);
+        // measured: 6.6 % for one oblique projection, 30.5 % for the composite map (frames included)
+        assertTrue(after > 3 * before, "composite fills " + after + " against " + before);
     }
 
     static double fillShare(MapModel map) {
