@@ -45,6 +45,19 @@ class InsetsSettingsTest {
         assertEquals(List.of(), atlasFindings(dir, "    insets:\n      - { name: Hawaii, box: [-161, 18, -154, 23] }"));
     }
 
+    @Test
+    void aRegionSourcesSettingAppliesUnlessTheMapHasItsOwn(@TempDir Path dir) throws IOException {
+        project(dir, "    insets: auto");
+        Path file = dir.resolve("aequa.yaml");
+        Files.writeString(file, Files.readString(file).replace("name: name }", "name: name, insets: off }"));
+        Findings findings = new Findings();
+        var atlas = AtlasLoader.load(ProjectLoader.load(dir, findings).orElseThrow(), LoadOptions.defaults(), findings);
+        assertEquals(6, atlas.maps().get(0).parts().size(), "the map's own 'auto' wins over the source's 'off'");
+        Files.writeString(file, Files.readString(file).replace("    insets: auto\n", ""));
+        atlas = AtlasLoader.load(ProjectLoader.load(dir, findings).orElseThrow(), LoadOptions.defaults(), findings);
+        assertEquals(List.of(), atlas.maps().get(0).parts(), "the source's 'off' applies");
+    }
+
     private static List<String> projectFindings(Path dir, String insets) throws IOException {
         Findings findings = new Findings();
         ProjectLoader.load(project(dir, insets), findings);
