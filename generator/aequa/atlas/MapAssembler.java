@@ -18,9 +18,11 @@ import aequa.inputs.regions.Region;
 import aequa.project.LoadedProject;
 import aequa.project.MapSpec;
 import aequa.project.ProjectFile;
+import aequa.composite.CompositePlanner;
+import aequa.composite.PartPlan;
+import aequa.project.InsetsSpec;
 import aequa.projection.Footprint;
 import aequa.projection.ProjectionChoice;
-import aequa.projection.ProjectionChooser;
 import aequa.projection.ProjectionRequest;
 import aequa.statistics.MapFigures;
 import aequa.statistics.MapStatistics;
@@ -37,8 +39,7 @@ final class MapAssembler {
     private final Findings findings;
     private final RegionLayers layers;
     private final Map<String, FigureTable> tables = new HashMap<>();
-    private final Map<String, Footprint> footprints = new HashMap<>();
-    private final Map<String, ProjectionChoice> choices = new HashMap<>();
+    private final Map<String, List<PartPlan>> plans = new HashMap<>();
     private final Map<String, PlanarLayer> planarLayers = new HashMap<>();
 
     MapAssembler(LoadedProject project, LoadOptions options, Findings findings) {
@@ -68,21 +69,22 @@ final class MapAssembler {
         if (request.isEmpty()) {
             return Optional.empty();
         }
-        Footprint footprint = footprints.computeIfAbsent(layer.sourceId(),
-                id -> Footprint.of(layer.regions().stream().map(Region::lonLat).toList()));
-        ProjectionChoice choice;
-        try {
-            choice = choices.computeIfAbsent(layer.sourceId() + "|" + request.get(),
-                    key -> ProjectionChooser.choose(footprint, request.get()));
-        } catch (IllegalArgumentException e) {
-            findings.add(Finding.error("projection-parameters-invalid", ProjectFile.FILE_NAME,
-                    project.places().place("/maps/" + mapIndex + "/projection"),
-                    "The projection settings of map '" + map.id() + "' cannot be used: " + e.getMessage(),
-                    "Remove the forced parameters to let aequa choose, or see 'aequa explain' for valid values."));
+        Optional<List<PartPlan>> plans = partPlans(mapIndex, map, layer, request.get());
+        if (plans.isEmpty()) {
             return Optional.empty();
         }
-        PlanarLayer planar = planarLayers.computeIfAbsent(layer.sourceId() + "|" + choice.projection().wkt2(),
-                key -> PlanarLayer.of(layer, choice.projection(), footprint, project.file().checks().areaTolerance()));
+        ProjectionChoice choice = plans.get().get(0).choice();
+        PlanarLayer planar;
+        List<MapPart> parts = List.of();
+        if (plans.get().size() == 1) {
+            Footprint footprint = plans.get().get(0).footprint();
+            planar = planarLayers.computeIfAbsent(layer.sourceId() + "|" + choice.projection().wkt2(),
+                    key -> PlanarLayer.of(layer, choice.projection(), footprint, project.file().checks().areaTolerance()));
+        } else {
+            CompositeLayers composite = CompositeLayers.of(layer, plans.get(), this::partLayer);
+            planar = new PlanarLayer(composite.simplifiedM(), composite.mapAreaRatio(), composite.audit(), composite.dropped());
+            parts = composite.parts();
+        }
         if (!planar.audit().passed()) {
             findings.add(Finding.error("area-audit-failed", layer.file(), "feature \"" + planar.audit().worstKey() + "\"",
                     String.format(java.util.Locale.ROOT, "On map '%s' the drawn area differs from the true area by %.2e, more than the allowed %.1e.",
@@ -105,7 +107,43 @@ final class MapAssembler {
         List<String> allNotices = new ArrayList<>(notices);
         allNotices.addAll(planar.droppedIslands());
         return Optional.of(new MapModel(map, figures.periods(), choice, regions, classed.get().classification(),
-                classed.get().ramp(), planar.audit(), allNotices));
+                classed.get().ramp(), planar.audit(), allNotices, parts));
+    }
+
+    /**
+     * The map's parts and their projections (one part unless its insets setting or the data ask for more),
+     * shared by maps of the same source and settings; empty after an error finding.
+     */
+    private Optional<List<PartPlan>> partPlans(int mapIndex, MapSpec map, RegionLayer layer, ProjectionRequest request) {
+        boolean ownSetting = map.insets() != null;
+        InsetsSpec insets = ownSetting ? map.insets() : project.file().regions().get(map.regions()).insets();
+        String pointer = ownSetting ? "/maps/" + mapIndex + "/insets" : "/regions/" + map.regions() + "/insets";
+        String key = layer.sourceId() + "|" + request + "|" + insets;
+        if (plans.containsKey(key)) {
+            return Optional.of(plans.get(key));
+        }
+        try {
+            List<PartPlan> planned = CompositePlanner.plan(layer.regions(), layer.areaKm2ByKey(), insets, request,
+                    new CompositePlanner.SettingPlace(project.places(), pointer), findings);
+            if (planned.isEmpty()) {
+                return Optional.empty();
+            }
+            plans.put(key, planned);
+            return Optional.of(planned);
+        } catch (IllegalArgumentException e) {
+            findings.add(Finding.error("projection-parameters-invalid", ProjectFile.FILE_NAME,
+                    project.places().place("/maps/" + mapIndex + "/projection"),
+                    "The projection settings of map '" + map.id() + "' cannot be used: " + e.getMessage(),
+                    "Remove the forced parameters to let aequa choose, or see 'aequa explain' for valid values."));
+            return Optional.empty();
+        }
+    }
+
+    /** One part's planar layer, shared by every map drawing the same regions on the same projection and scale. */
+    private PlanarLayer partLayer(RegionLayer subset, PartPlan plan, Footprint drawnFootprint, double minDrawnWidthM) {
+        return planarLayers.computeIfAbsent(subset.sourceId() + "|" + plan.choice().projection().wkt2() + "|" + plan.areaScale(),
+                key -> PlanarLayer.of(subset, plan.choice().projection(), drawnFootprint,
+                        project.file().checks().areaTolerance(), plan.areaScale(), minDrawnWidthM));
     }
 
     /** Readers see at most this many notices of one kind; report.json keeps every finding. */

@@ -20,14 +20,34 @@ import aequa.projection.ProjectionChoice;
  * @param areaAudit      the area proof
  * @param notices        what the checks found about this map (figures matching no region, dropped islands):
  *                       for the author and the method page, never printed in the graphic
+ * @param parts          the parts of a composite map, main part first; empty for a map on one projection (then
+ *                       {@code projection} is the map's; for a composite map it is the main part's)
  */
 public record MapModel(MapSpec spec, List<String> periods, ProjectionChoice projection, List<MapRegion> regions,
-                       Classification classification, ColourRamp ramp, AreaAudit areaAudit, List<String> notices) {
+                       Classification classification, ColourRamp ramp, AreaAudit areaAudit, List<String> notices,
+                       List<MapPart> parts) {
 
     public MapModel {
         periods = List.copyOf(periods);
         regions = List.copyOf(regions);
         notices = List.copyOf(notices);
+        parts = List.copyOf(parts);
+    }
+
+    /** A map on one projection. */
+    public MapModel(MapSpec spec, List<String> periods, ProjectionChoice projection, List<MapRegion> regions,
+                    Classification classification, ColourRamp ramp, AreaAudit areaAudit, List<String> notices) {
+        this(spec, periods, projection, regions, classification, ramp, areaAudit, notices, List.of());
+    }
+
+    /** Whether the map is drawn in parts, each on its own projection. */
+    public boolean composite() {
+        return !parts.isEmpty();
+    }
+
+    /** Whether some part is drawn at another area scale than the main part (then areas compare only within a part). */
+    public boolean mixedAreaScales() {
+        return parts.stream().anyMatch(p -> p.areaScale() != 1);
     }
 
     public String id() {

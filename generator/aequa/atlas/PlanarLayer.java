@@ -8,6 +8,7 @@ import java.util.Map;
 
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.util.AffineTransformation;
 
 import aequa.ellipsoid.EdgeSteps;
 import aequa.ellipsoid.LonLatDensifier;
@@ -25,12 +26,21 @@ import aequa.projection.Footprint;
  * for area (before simplification) and simplified as one coverage for the finest output aequa draws.
  *
  * @param simplifiedM     the drawable geometry per key, metres
- * @param mapAreaRatio    planar / geodesic area per key
+ * @param mapAreaRatio    planar / geodesic area per key (planar / (area scale x geodesic) for a scaled part)
  * @param audit           the map's area proof
- * @param droppedIslands  a readable note on the parts too small to draw, if any
+ * @param dropped         the islands too small to draw
  */
 record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAreaRatio, AreaAudit audit,
-                   List<String> droppedIslands) {
+                   List<CoverageSimplification.DroppedPart> dropped) {
+
+    PlanarLayer {
+        dropped = List.copyOf(dropped);
+    }
+
+    /** A readable note on the islands too small to draw, if any. */
+    List<String> droppedIslands() {
+        return droppedNotice(dropped);
+    }
 
     /** The web map is drawn this many pixels wide; print maps at most {@value #PRINT_WIDTH_MM} mm. */
     static final double WEB_WIDTH_PX = 1200;
@@ -40,7 +50,18 @@ record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAre
     static final double FINER_STEP_MARGIN = 0.1;
 
     static PlanarLayer of(RegionLayer layer, EqualAreaProjection projection, Footprint footprint, double tolerance) {
-        double stepDeg = LonLatDensifier.stepDeg(roughWidthM(footprint), WEB_WIDTH_PX);
+        return of(layer, projection, footprint, tolerance, 1, 0);
+    }
+
+    /**
+     * A layer drawn as one part of a composite map: its areas multiplied by {@code areaScale} (the audit then
+     * checks drawn area against {@code areaScale} times the geodesic area), densified for a drawing of
+     * {@code drawnFootprint}'s width and simplified for a map at least {@code minDrawnWidthM} wide.
+     */
+    static PlanarLayer of(RegionLayer layer, EqualAreaProjection projection, Footprint drawnFootprint, double tolerance,
+                          double areaScale, double minDrawnWidthM) {
+        double stepDeg = LonLatDensifier.stepDeg(roughWidthM(drawnFootprint), WEB_WIDTH_PX);
+        AffineTransformation scaling = areaScale == 1 ? null : AffineTransformation.scaleInstance(Math.sqrt(areaScale), Math.sqrt(areaScale));
         PolygonProjector projector = new PolygonProjector(projection, stepDeg);
         // thin and tiny regions get finer steps, so the drawn chords keep the true area (EdgeSteps)
         EdgeSteps steps = EdgeSteps.forLayer(layer.regions().stream().map(Region::lonLat).toList(), stepDeg,
@@ -51,13 +72,16 @@ record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAre
         Envelope extent = new Envelope();
         for (Region region : layer.regions()) {
             Geometry projected = projector.project(LonLatDensifier.densify(region.lonLat(), steps));
+            if (scaling != null) {
+                projected = scaling.transform(projected);
+            }
             keys.add(region.key());
             planar.add(projected);
-            checks.add(AreaAuditor.check(region.key(), layer.areaKm2ByKey().get(region.key()), projected));
+            checks.add(AreaAuditor.check(region.key(), areaScale * layer.areaKm2ByKey().get(region.key()), projected));
             extent.expandToInclude(projected.getEnvelopeInternal());
         }
         AreaAudit audit = AreaAuditor.audit(checks, tolerance);
-        double widthM = Math.max(extent.getWidth(), extent.getHeight());
+        double widthM = Math.max(Math.max(extent.getWidth(), extent.getHeight()), minDrawnWidthM);
         double toleranceM = Math.min(CoverageSimplification.screenToleranceM(widthM, WEB_WIDTH_PX),
                 CoverageSimplification.printToleranceM(widthM, PRINT_WIDTH_MM));
         CoverageSimplification.Result simplified = CoverageSimplification.simplify(keys, planar, toleranceM,
@@ -68,15 +92,14 @@ record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAre
             byKey.put(keys.get(i), simplified.planarM().get(i));
             ratios.put(keys.get(i), checks.get(i).mapAreaRatio());
         }
-        List<String> dropped = droppedNotice(simplified.dropped());
-        return new PlanarLayer(byKey, ratios, audit, dropped);
+        return new PlanarLayer(byKey, ratios, audit, simplified.dropped());
     }
 
     /**
      * One sentence for readers, however many islands were left out: a national file can drop hundreds of
      * specks, and a caption must stay readable.
      */
-    private static List<String> droppedNotice(List<CoverageSimplification.DroppedPart> dropped) {
+    static List<String> droppedNotice(List<CoverageSimplification.DroppedPart> dropped) {
         if (dropped.isEmpty()) {
             return List.of();
         }
@@ -91,7 +114,7 @@ record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAre
     }
 
     /** The footprint's width on the ground, roughly, to choose the densification step before projecting. */
-    private static double roughWidthM(Footprint footprint) {
+    static double roughWidthM(Footprint footprint) {
         double metresPerDeg = 111_320;
         double midLat = Math.toRadians(footprint.midLatDeg());
         double eastWest = footprint.lonSpanDeg() * Math.cos(midLat);

@@ -73,7 +73,7 @@ final class ChoiceReport {
         return root;
     }
 
-    private static List<Map<String, Object>> parameterList(List<ProjectionParameter> parameters) {
+    static List<Map<String, Object>> parameterList(List<ProjectionParameter> parameters) {
         return parameters.stream().map(p -> {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("name", p.name());
@@ -84,7 +84,7 @@ final class ChoiceReport {
         }).toList();
     }
 
-    private static String parameters(List<ProjectionParameter> parameters) {
+    static String parameters(List<ProjectionParameter> parameters) {
         return String.join(", ", parameters.stream().map(p -> p.key() + " " + format(p.value(), p.unit())).toList());
     }
 

@@ -3,12 +3,14 @@ package aequa.cli;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.Callable;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 
+import aequa.composite.PartPlan;
 import aequa.ellipsoid.RegionValidator;
 import aequa.findings.Findings;
 import aequa.inputs.regions.Region;
@@ -27,7 +29,8 @@ import picocli.CommandLine.Spec;
 
 /** Says which equal-area projection aequa would choose for the extent of a geometry file, and why. */
 @Command(name = "explain", mixinStandardHelpOptions = true,
-        description = "Say which equal-area projection aequa would choose for the regions in GEOMETRY_FILE, and why.")
+        description = "Say which equal-area projection aequa would choose for the regions in GEOMETRY_FILE, and why; "
+                + "and, when some regions lie far from the rest, the parts a map of them is drawn in (insets: auto).")
 final class ExplainCommand implements Callable<Integer> {
 
     @Parameters(paramLabel = "GEOMETRY_FILE", description = "A GeoJSON (.geojson, .json) or GeoPackage (.gpkg) file of regions.")
@@ -62,12 +65,16 @@ final class ExplainCommand implements Callable<Integer> {
         }
         ProjectionChoice choice = ProjectionChooser.choose(Footprint.of(regions.stream().map(Region::lonLat).toList()),
                 ProjectionRequest.automatic());
+        List<PartPlan> parts = PartsReport.plan(regions, findings);
         var out = spec.commandLine().getOut();
         if (json) {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
-            out.println(mapper.writeValueAsString(ChoiceReport.json(file.toString(), regions.size(), choice)));
+            Map<String, Object> root = ChoiceReport.json(file.toString(), regions.size(), choice);
+            root.put("parts", PartsReport.json(parts));
+            out.println(mapper.writeValueAsString(root));
         } else {
             out.print(ChoiceReport.text(file.toString(), regions.size(), choice));
+            out.print(PartsReport.text(parts));
         }
         return findings.hasErrors() ? ExitCode.DATA_PROBLEMS.code : ExitCode.OK.code;
     }

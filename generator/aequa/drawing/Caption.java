@@ -34,6 +34,9 @@ final class Caption {
         }
         text.append(", datum WGS 84. ");
         distortion(choice, text);
+        if (model.composite()) {
+            text.append(' ').append(PartSentences.parts(model));
+        }
         if (model.areaAudit() != null) {
             double percent = model.areaAudit().maxRelativeError() * 100;
             text.append(" Areas are true: largest difference from the ellipsoid ")
@@ -41,7 +44,8 @@ final class Caption {
         }
         if (scale != null) {
             text.append(" The square shows ").append(scale.label())
-                    .append(" anywhere on the map; distances are not to scale.");
+                    .append(model.mixedAreaScales() ? " anywhere on the main map and in every part drawn at its scale" : " anywhere on the map")
+                    .append("; distances are not to scale.");
         }
         return text.toString();
     }

@@ -33,7 +33,13 @@ final class Descriptions {
                         .append(model.classification().method().configName()).append(')');
             }
         }
-        text.append(". ").append(model.projection().projection().family().displayName()).append(" projection; areas are true to scale.");
+        text.append(". ").append(model.projection().projection().family().displayName()).append(" projection");
+        if (model.composite()) {
+            text.append(" for the main map, ").append(model.parts().size() - 1).append(" detached ")
+                    .append(model.parts().size() == 2 ? "part" : "parts").append(" framed on their own projections");
+        }
+        text.append(model.mixedAreaScales() ? "; areas are true to scale within each part, and parts at another scale say so."
+                : "; areas are true to scale.");
         return text.toString();
     }
 }

@@ -9,6 +9,7 @@ import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.Polygon;
 
 import aequa.atlas.MapModel;
+import aequa.atlas.MapPart;
 import aequa.atlas.MapRegion;
 import aequa.colour.Rgb;
 
@@ -40,13 +41,17 @@ final class MapPainter {
         this.options = options;
         this.circles = "circles".equals(model.spec().display());
         this.wholeGlobe = GlobeLines.wholeGlobe(model.projection().projection());
-        this.graticule = options.graticule() == DrawOptions.Graticule.ALWAYS
-                || (options.graticule() == DrawOptions.Graticule.AUTO && wholeGlobe);
+        // the graticule of a composite map's main projection would be false in its framed parts
+        this.graticule = !model.composite() && (options.graticule() == DrawOptions.Graticule.ALWAYS
+                || (options.graticule() == DrawOptions.Graticule.AUTO && wholeGlobe));
         Envelope extent = new Envelope();
         for (MapRegion region : model.regions()) {
             if (!region.planarM().isEmpty()) {
                 extent.expandToInclude(region.planarM().getEnvelopeInternal());
             }
+        }
+        for (MapPart part : model.parts()) {
+            extent.expandToInclude(new Envelope(part.frame().minXM(), part.frame().maxXM(), part.frame().minYM(), part.frame().maxYM()));
         }
         this.globeM = wholeGlobe && graticule ? GlobeLines.globe(model.projection().projection()) : null;
         if (globeM != null) {
@@ -95,9 +100,17 @@ final class MapPainter {
                 paintGlobe(canvas, panel.fit(), graticuleM, precision, suffix);
             }
             canvas.begin("regions" + suffix);
-            RegionLayer.paint(canvas, model, theme, fills, pages, panel.period(), regionPrefix, web, precision, circles);
+            if (model.composite()) {
+                PartFrames.paintRegionsByPart(canvas, model, pages, suffix,
+                        partPages -> RegionLayer.paint(canvas, model, theme, fills, partPages, panel.period(), regionPrefix, web, precision, circles));
+            } else {
+                RegionLayer.paint(canvas, model, theme, fills, pages, panel.period(), regionPrefix, web, precision, circles);
+            }
             canvas.end();
             RegionLayer.paintBorders(canvas, theme, pages, precision, suffix, !web);
+            if (model.composite()) {
+                PartFrames.paint(canvas, model, theme, panel.fit(), suffix);
+            }
             if (graticule && !wholeGlobe) {
                 canvas.begin("graticule" + suffix);
                 canvas.stroke(PagePaths.lines(panel.fit().toPage(graticuleM), precision), c.graticule(), theme.lines().graticule().pt());

@@ -11,7 +11,7 @@ import net.sf.geographiclib.PolygonResult;
 /**
  * Areas on the WGS 84 ellipsoid, with geodesic edges between consecutive vertices, by GeographicLib's
  * {@code PolygonArea} (Karney 2013, "Algorithms for geodesics", J. Geodesy 87, doi:10.1007/s00190-012-0578-z,
- * section 6). This is the only class that uses GeographicLib.
+ * section 6). GeographicLib is used here and in {@link GeodesicDistance} only.
  *
  * <p>Input is a Polygon or MultiPolygon in lon/lat degrees (x = lon), in RFC 7946 form: rings do not cross
  * +-180 and their orientation in the lon/lat plane says which side is inside. GeographicLib takes

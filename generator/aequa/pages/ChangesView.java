@@ -21,6 +21,7 @@ public record ChangesView(String basis, List<MapChange> maps, int unchangedCount
      * @param state          {@code added}, {@code removed} or {@code changed}
      * @param asOfChange     "from -> to" when the date of the figures changed, else empty
      * @param projectionChange "from -> to" when the projection changed, else empty
+     * @param partChanges    one sentence per framed part added, removed or re-projected (composite maps)
      * @param breaksChange   "from -> to" when the class limits moved, else empty
      * @param classChanges   regions whose class changed
      * @param valueChanges   regions whose figure changed within the same class (from and to are figures)
@@ -30,9 +31,10 @@ public record ChangesView(String basis, List<MapChange> maps, int unchangedCount
      */
     public record MapChange(String id, String title, String state, String asOfChange, String projectionChange,
                             String breaksChange, List<ClassChange> classChanges, List<ClassChange> valueChanges,
-                            List<String> regionsAdded,
-                            List<String> regionsRemoved, String pageHref) {
+                            List<String> regionsAdded, List<String> regionsRemoved, String pageHref,
+                            List<String> partChanges) {
         public MapChange {
+            partChanges = List.copyOf(partChanges);
             classChanges = List.copyOf(classChanges);
             valueChanges = List.copyOf(valueChanges);
             regionsAdded = List.copyOf(regionsAdded);

@@ -35,18 +35,21 @@ public record MethodView(List<MapMethod> maps) {
      * @param checkNotes       what the checks of the data found for this map (figures that matched no region,
      *                         islands too small to draw), for the author and careful readers
      * @param mapHref          link to the map's page, relative to the site root
+     * @param parts            for a composite map, one sentence per part (regions, projection, omega, area
+     *                         scale and check); empty for a map on one projection
      */
     public record MapMethod(String id, String title, String projectionName, String reason, List<String> parameters,
                             String omegaMaxDeg, String omegaMeanDeg, List<String> runnersUp, String areaErrorPercent,
                             String areaWorstKey, String areaTolerancePercent, boolean areaPassed, String classMethod,
                             List<String> limits, List<Integer> counts, String normalisation, String source,
-                            String asOf, List<String> checkNotes, String mapHref) {
+                            String asOf, List<String> checkNotes, String mapHref, List<String> parts) {
         public MapMethod {
             parameters = List.copyOf(parameters);
             runnersUp = List.copyOf(runnersUp);
             limits = List.copyOf(limits);
             counts = List.copyOf(counts);
             checkNotes = List.copyOf(checkNotes);
+            parts = List.copyOf(parts);
         }
     }
 }

@@ -28,11 +28,13 @@ import java.util.List;
  * @param asOf        the date or period the figures refer to, as readers should see it
  * @param range       the declared valid range {@code [min, max]} of the values as given (for example
  *                    {@code [0, 100]} for shares in percent), or empty for no check
+ * @param insets      how detached parts are drawn; null to follow the region source's setting
  */
 public record MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
                       String measure, String normalise, String per, Double multiplier, String unit, String display,
                       ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
-                      String marginColumn, String notes, String source, String asOf, List<Double> range) {
+                      String marginColumn, String notes, String source, String asOf, List<Double> range,
+                      InsetsSpec insets) {
 
     public MapSpec {
         title = title == null ? id : title;
@@ -53,12 +55,21 @@ public record MapSpec(String id, String title, String regions, String figures, S
         range = range == null ? List.of() : List.copyOf(range);
     }
 
+    /** A map that follows its region source's {@code insets} setting (the record's shape before insets). */
+    public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
+                   String measure, String normalise, String per, Double multiplier, String unit, String display,
+                   ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
+                   String marginColumn, String notes, String source, String asOf, List<Double> range) {
+        this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
+                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, range, null);
+    }
+
     /** A map without a declared range (the record's shape before {@code range} was added). */
     public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
                    String measure, String normalise, String per, Double multiplier, String unit, String display,
                    ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
                    String marginColumn, String notes, String source, String asOf) {
         this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
-                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, null);
+                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, null, null);
     }
 }

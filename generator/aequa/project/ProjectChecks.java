@@ -55,6 +55,7 @@ final class ProjectChecks {
                 "a GeoPackage layer, or a Shapefile inside a zip");
         onlyFor(at + "/object", source.object(), source.file(), List.of(".topojson", ".json"), "object",
                 "the object of a TopoJSON topology");
+        InsetsChecks.check(at + "/insets", source.insets(), this::error);
         if (source.key().isBlank()) {
             error("project-missing-key", at + "/key", "The region source has an empty 'key'.",
                     "Name the property that holds each region's code, or '" + RegionSourceSpec.FEATURE_ID + "' for the feature id.");
@@ -110,6 +111,9 @@ final class ProjectChecks {
         }
         oneOf(at + "/display", map.display(), List.of("choropleth", "circles"));
         checkClasses(at + "/classes", map.classes());
+        if (map.insets() != null) {
+            InsetsChecks.check(at + "/insets", map.insets(), this::error);
+        }
         oneOf(at + "/colours/scheme", map.colours().scheme(), List.of("sequential", "diverging", "qualitative"));
         if (map.colours().hue() < 0 || map.colours().hue() > 360) {
             error("project-bad-value", at + "/colours/hue", "'hue' must be between 0 and 360 degrees.", "");

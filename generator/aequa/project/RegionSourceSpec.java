@@ -12,8 +12,9 @@ package aequa.project;
  * @param layer  the GeoPackage layer (table) name, or the Shapefile's name (without {@code .shp}) inside a zip
  *               holding several; empty when the file holds one
  * @param object the TopoJSON object (a key of the topology's {@code objects}); empty when it holds one
+ * @param insets how the detached parts of maps of these regions are drawn, unless a map says otherwise
  */
-public record RegionSourceSpec(String file, String key, String name, String layer, String object) {
+public record RegionSourceSpec(String file, String key, String name, String layer, String object, InsetsSpec insets) {
 
     public static final String FEATURE_ID = "@id";
 
@@ -22,10 +23,21 @@ public record RegionSourceSpec(String file, String key, String name, String laye
         name = name == null ? "" : name;
         layer = layer == null ? "" : layer;
         object = object == null ? "" : object;
+        insets = insets == null ? InsetsSpec.AUTO : insets;
+    }
+
+    /** A source that is not a TopoJSON file, with the automatic {@code insets} setting. */
+    public RegionSourceSpec(String file, String key, String name, String layer) {
+        this(file, key, name, layer, "", null);
+    }
+
+    /** A source with the automatic {@code insets} setting. */
+    public RegionSourceSpec(String file, String key, String name, String layer, String object) {
+        this(file, key, name, layer, object, null);
     }
 
     /** A source that is not a TopoJSON file. */
-    public RegionSourceSpec(String file, String key, String name, String layer) {
-        this(file, key, name, layer, "");
+    public RegionSourceSpec(String file, String key, String name, String layer, InsetsSpec insets) {
+        this(file, key, name, layer, "", insets);
     }
 }

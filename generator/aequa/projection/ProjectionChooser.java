@@ -132,10 +132,7 @@ public final class ProjectionChooser {
 
     /** The families the trade's rules allow for this footprint (see the class comment). */
     static List<ProjectionFamily> candidateFamilies(Footprint footprint) {
-        double latRange = footprint.maxLatDeg() - footprint.minLatDeg();
-        boolean aroundTheGlobe = footprint.lonSpanDeg() >= 240 && latRange >= 120;
-        boolean farFromCentre = footprint.lonSpanDeg() < 240 && footprint.angularRadiusDeg() > 100;
-        if (aroundTheGlobe || farFromCentre) {
+        if (worldOnly(footprint)) {
             return List.of(ProjectionFamily.EQUAL_EARTH, ProjectionFamily.MOLLWEIDE);
         }
         List<ProjectionFamily> families = new ArrayList<>(List.of(ProjectionFamily.LAMBERT_AZIMUTHAL, ProjectionFamily.CYLINDRICAL));
@@ -151,6 +148,14 @@ public final class ProjectionChooser {
             families.add(ProjectionFamily.MOLLWEIDE);
         }
         return families;
+    }
+
+    /** Whether the data span so much of the globe that only the world families are candidates (class comment). */
+    public static boolean worldOnly(Footprint footprint) {
+        double latRange = footprint.maxLatDeg() - footprint.minLatDeg();
+        boolean aroundTheGlobe = footprint.lonSpanDeg() >= 240 && latRange >= 120;
+        boolean farFromCentre = footprint.lonSpanDeg() < 240 && footprint.angularRadiusDeg() > 100;
+        return aroundTheGlobe || farFromCentre;
     }
 
     /**

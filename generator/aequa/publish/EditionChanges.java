@@ -14,10 +14,10 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
  * The {@code changes} section of report.json: what differs from the previous edition whose figures were
  * different, compared map by map (matched on id) from the two reports' {@code maps} sections.
  *
- * <p>Per map it lists: the date of the figures, a projection change (family or parameters), class limits
- * that moved, regions whose class (in the latest period) changed, regions whose figure changed within the
- * same class ({@code valueChanged}: an edited figure must show even when its colour did not), and regions
- * added or removed. Maps
+ * <p>Per map it lists: the date of the figures, a projection change (family or parameters), framed parts
+ * added, removed or re-projected, class limits that moved, regions whose class (in the latest period)
+ * changed, regions whose figure changed within the same class ({@code valueChanged}: an edited figure must
+ * show even when its colour did not), and regions added or removed. Maps
  * without change are counted, not listed. When the figures are identical to the previous edition
  * ({@code editionDigest} equal), the previous comparison is carried over unchanged, so republishing the same
  * inputs gives the same bytes and the page keeps showing what the last real update changed.
@@ -91,6 +91,11 @@ final class EditionChanges {
             p.set("to", projNow);
             any = true;
         }
+        ArrayNode partChanges = partChanges(was.path("parts"), now.path("parts"), json);
+        if (!partChanges.isEmpty()) {
+            diff.set("parts", partChanges);
+            any = true;
+        }
         JsonNode breaksWas = was.path("classification").path("breaks");
         JsonNode breaksNow = now.path("classification").path("breaks");
         if (!breaksWas.equals(breaksNow)) {
@@ -122,6 +127,32 @@ final class EditionChanges {
         regionsWas.keySet().stream().filter(k -> !regionsNow.containsKey(k)).forEach(removed::add);
         any |= classChanged.size() + valueChanged.size() + added.size() + removed.size() > 0;
         return any ? diff : null;
+    }
+
+    /**
+     * The framed parts added, removed, re-projected or given other regions or another area scale, matched by
+     * name, as sentences (a map that gained or lost its parts altogether shows as parts added or removed).
+     */
+    private static ArrayNode partChanges(JsonNode was, JsonNode now, ObjectMapper json) {
+        Map<String, JsonNode> before = new LinkedHashMap<>();
+        was.forEach(p -> before.put(p.path("name").asText(), p));
+        Map<String, JsonNode> after = new LinkedHashMap<>();
+        now.forEach(p -> after.put(p.path("name").asText(), p));
+        ArrayNode sentences = json.createArrayNode();
+        for (Map.Entry<String, JsonNode> e : after.entrySet()) {
+            JsonNode old = before.get(e.getKey());
+            JsonNode part = e.getValue();
+            if (old == null) {
+                sentences.add("Part added: " + e.getKey() + ".");
+            } else if (!projectionKey(old.path("projection"), json).equals(projectionKey(part.path("projection"), json))) {
+                sentences.add("Part re-projected: " + e.getKey() + " (" + old.path("projection").path("name").asText() + " → "
+                        + part.path("projection").path("name").asText() + ").");
+            } else if (!old.path("regions").equals(part.path("regions")) || !old.path("areaScale").equals(part.path("areaScale"))) {
+                sentences.add("Part changed: " + e.getKey() + " (its regions or area scale).");
+            }
+        }
+        before.keySet().stream().filter(name -> !after.containsKey(name)).forEach(name -> sentences.add("Part removed: " + name + "."));
+        return sentences;
     }
 
     private static JsonNode projectionKey(JsonNode projection, ObjectMapper json) {

@@ -14,6 +14,7 @@ import java.util.HexFormat;
 import org.locationtech.jts.io.WKBWriter;
 
 import aequa.atlas.MapModel;
+import aequa.atlas.MapPart;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
 import aequa.projection.EqualAreaProjection;
@@ -54,6 +55,13 @@ final class MapFingerprint {
             text(out, map.ramp().toString());
             text(out, map.areaAudit().toString());
             text(out, map.notices().toString());
+            for (MapPart part : map.parts()) {
+                text(out, part.id() + "|" + part.name() + "|" + part.keys() + "|" + part.areaScale() + "|" + part.frame()
+                        + "|" + part.nameBandM() + "|" + part.areaAudit());
+                text(out, part.projection().projection().wkt2());
+                out.writeDouble(part.projection().omegaMaxDeg());
+                out.writeDouble(part.projection().omegaMeanDeg());
+            }
             WKBWriter wkb = new WKBWriter(2);
             for (MapRegion region : map.regions()) {
                 text(out, region.key());

@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.stream.Collectors;
 
 import aequa.atlas.MapModel;
+import aequa.atlas.MapPart;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
 import aequa.classes.ClassMethod;
@@ -16,6 +17,7 @@ import aequa.pages.FiguresView;
 import aequa.pages.IndexView;
 import aequa.pages.MapPageView;
 import aequa.pages.NumberText;
+import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionParameter;
 import aequa.statistics.FigureStatus;
 
@@ -199,5 +201,36 @@ final class MapViews {
     /** The last path segment, for links between files of the same map folder. */
     static String fileName(String path) {
         return path.substring(path.lastIndexOf('/') + 1);
+    }
+
+    /**
+     * One sentence per part of a composite map, main part first: its regions, gap, projection, omega, and area
+     * scale with its own area check. Empty for a map on one projection.
+     */
+    static List<String> partSentences(MapModel map) {
+        List<String> sentences = new ArrayList<>();
+        for (MapPart part : map.parts()) {
+            ProjectionChoice choice = part.projection();
+            String params = choice.projection().parameters().stream().map(MapViews::parameterText).collect(Collectors.joining(", "));
+            StringBuilder s = new StringBuilder(part.name()).append(": ").append(part.keys().size())
+                    .append(part.keys().size() == 1 ? " region, " : " regions, ").append(NumberText.of(Math.round(part.areaKm2())))
+                    .append(" km²");
+            if (!part.main() && Double.isFinite(part.gapKm())) {
+                s.append(", ").append(NumberText.of(Math.round(part.gapKm()))).append(" km from the main map");
+            }
+            s.append(". ").append(choice.projection().family().displayName());
+            if (!params.isEmpty()) {
+                s.append(" (").append(params).append(')');
+            }
+            s.append("; omega at most ").append(NumberText.fixed(choice.omegaMaxDeg(), 2)).append("°, on average ")
+                    .append(NumberText.fixed(choice.omegaMeanDeg(), 2)).append("°. ");
+            s.append(part.main() ? "Its area scale is the map's."
+                    : part.areaScale() == 1 ? "Drawn at the main map's area scale, so its areas compare with the rest of the map."
+                    : "Drawn at " + part.areaScaleText() + " × the main map's area scale: its areas compare only with each other.");
+            s.append(" Largest area difference from the ellipsoid at that scale: ")
+                    .append(percent(part.areaAudit().maxRelativeError())).append(" %.");
+            sentences.add(s.toString());
+        }
+        return sentences;
     }
 }

@@ -16,6 +16,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import aequa.atlas.Atlas;
 import aequa.atlas.MapModel;
+import aequa.atlas.MapPart;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
 import aequa.findings.Finding;
@@ -153,6 +154,10 @@ final class SiteReport {
         map.ramp().fills().forEach(fill -> colours.withArray("fills").add(fill.hex()));
         colours.put("checksPassed", map.ramp().passes());
         map.notices().forEach(node.putArray("notices")::add);
+        ArrayNode parts = node.putArray("parts");
+        for (MapPart part : map.parts()) {
+            parts.add(part(part, json));
+        }
         ArrayNode regions = node.putArray("regions");
         for (MapRegion region : map.regions()) {
             regions.add(region(region, map.periods(), json));
@@ -196,6 +201,31 @@ final class SiteReport {
             number(cand, "omegaMaxDeg", c.omegaMaxDeg());
             number(cand, "omegaMeanDeg", c.omegaMeanDeg());
         }
+        return node;
+    }
+
+    /** One part of a composite map: its regions, projection, area scale and audit, and its frame in map metres. */
+    private static ObjectNode part(MapPart part, ObjectMapper json) {
+        ObjectNode node = json.createObjectNode();
+        node.put("id", part.id());
+        node.put("name", part.name());
+        node.put("main", part.main());
+        part.keys().forEach(node.putArray("regions")::add);
+        number(node, "areaKm2", part.areaKm2());
+        number(node, "gapKm", part.gapKm());
+        number(node, "areaScale", part.areaScale());
+        node.set("projection", projection(part.projection(), json));
+        number(node, "omegaMaxDeg", part.projection().omegaMaxDeg());
+        number(node, "omegaMeanDeg", part.projection().omegaMeanDeg());
+        ObjectNode audit = node.putObject("areaAudit");
+        number(audit, "maxRelativeError", part.areaAudit().maxRelativeError());
+        audit.put("worstKey", part.areaAudit().worstKey());
+        audit.put("passed", part.areaAudit().passed());
+        ObjectNode frame = node.putObject("frameM");
+        number(frame, "minX", part.frame().minXM());
+        number(frame, "minY", part.frame().minYM());
+        number(frame, "maxX", part.frame().maxXM());
+        number(frame, "maxY", part.frame().maxYM());
         return node;
     }
 

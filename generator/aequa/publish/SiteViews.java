@@ -53,7 +53,8 @@ final class SiteViews {
                     MapViews.percent(map.areaAudit().maxRelativeError()), map.areaAudit().worstKey(),
                     MapViews.percent(map.areaAudit().tolerance()), map.areaAudit().passed(),
                     methodName(map.classification().method()), limits, map.classification().counts(),
-                    normalisation(map.spec()), map.spec().source(), map.spec().asOf(), map.notices(), files.get(i).page()));
+                    normalisation(map.spec()), map.spec().source(), map.spec().asOf(), map.notices(), files.get(i).page(),
+                    MapViews.partSentences(map)));
         }
         return new MethodView(sections);
     }
@@ -109,7 +110,7 @@ final class SiteViews {
             maps.add(new ChangesView.MapChange(index < 0 ? SafePaths.fileSafeId(id) : files.get(index).fileId(),
                     m.path("title").asText(), m.path("state").asText(), fromTo(m.path("asOf")),
                     projectionText(m.path("projection")), breaksText(m.path("breaks")), moved, edited,
-                    texts(m.path("regionsAdded")), texts(m.path("regionsRemoved")), href));
+                    texts(m.path("regionsAdded")), texts(m.path("regionsRemoved")), href, texts(m.path("parts"))));
         }
         return new ChangesView(basis, maps, changes.path("unchangedMaps").asInt());
     }

@@ -23,7 +23,7 @@ class StageOrderTest {
 
     /** The stages in data-flow order; the index is the rank. */
     private static final List<String> STAGES = List.of("findings", "project", "inputs", "ellipsoid", "projection",
-            "planar", "statistics", "classes", "colour", "atlas", "drawing", "pages", "publish", "cli");
+            "planar", "composite", "statistics", "classes", "colour", "atlas", "drawing", "pages", "publish", "cli");
 
     /** Libraries confined to one stage, or to one package of a stage (a reader's package: "inputs.regions"). */
     private static final Map<String, String> LIBRARY_OWNERS = Map.of(

@@ -110,6 +110,23 @@ class CommandLineTest {
         assertEquals(2, run("explain", tmp.resolve("missing.geojson").toString()));
     }
 
+    /** The US Census Bureau's 2017 states (src/test/resources/geometry/SOURCE.md): FIPS 02 is Alaska, 15 Hawaii. */
+    @Test
+    void explainListsTheDetachedParts() throws IOException {
+        String states = Path.of("src/test/resources/geometry/us-states-2017.geojson").toString();
+        assertEquals(0, run("explain", states, "--json"), err.toString());
+        JsonNode parts = new ObjectMapper().readTree(out.toString()).path("parts");
+        assertEquals(6, parts.size(), parts.toString());
+        assertTrue(parts.get(0).path("main").asBoolean());
+        // explain keys regions by the feature id, which this file has as the FIPS code
+        assertEquals("[\"02\"]", parts.get(1).path("regions").toString());
+        assertEquals("[\"15\"]", parts.get(2).path("regions").toString());
+        assertTrue(parts.get(1).path("omegaMaxDeg").asDouble() < parts.get(0).path("omegaMaxDeg").asDouble() * 2);
+        out.getBuffer().setLength(0);
+        assertEquals(0, run("explain", states), err.toString());
+        assertTrue(out.toString().contains("Parts (insets: auto): the main map and 5 framed parts"), out.toString());
+    }
+
     private Path scaffolded(Path tmp) {
         Path project = tmp.resolve("project");
         assertEquals(0, run("scaffold", project.toString()));

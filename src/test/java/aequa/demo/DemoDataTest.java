@@ -23,7 +23,7 @@ class DemoDataTest {
         try (Stream<Path> files = Files.walk(fresh)) {
             generated = files.filter(Files::isRegularFile).map(fresh::relativize).sorted().toList();
         }
-        assertEquals(10, generated.size(), "five region files and five figure files");
+        assertEquals(12, generated.size(), "six region files and six figure files");
         for (Path relative : generated) {
             Path committed = Path.of("data-demo").resolve(relative);
             assertTrue(Files.isRegularFile(committed), "missing in data-demo/: " + relative);

@@ -85,6 +85,17 @@ final class DemoFigures {
         }
     }
 
+    /** Wide, comma-separated: the share of adults with a library card, in %. */
+    static void marrowLibraries(Path file, List<DemoGenerator.Place> places, Random random) throws IOException {
+        try (Writer out = DemoGenerator.utf8(file)) {
+            out.write("code,name,library_card_share\n");
+            for (DemoGenerator.Place p : places) {
+                double share = 18 + 50 * DemoGenerator.field(p.lonDeg(), p.latDeg(), 75) + 6 * random.nextGaussian();
+                out.write(p.code() + "," + quoted(p.name()) + "," + fixed(clamp(share, 2, 95), 1) + "\n");
+            }
+        }
+    }
+
     private static String fixed(double v, int decimals) {
         return String.format(Locale.ROOT, "%." + decimals + "f", v);
     }

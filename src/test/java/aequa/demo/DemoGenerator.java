@@ -20,9 +20,10 @@ import org.locationtech.jts.geom.Point;
  * bytes. Run with
  * {@code mvn -q test-compile exec:java -Dexec.classpathScope=test -Dexec.mainClass=aequa.demo.DemoGenerator -Dexec.args=data-demo}.
  *
- * <p>Five extents, chosen so that the automatic projection choice differs: the whole world, a wide
+ * <p>Six extents, chosen so that the automatic projection choice differs: the whole world, a wide
  * east-west land at mid-latitudes, a circumpolar ring, an equatorial archipelago across the antimeridian,
- * and a long north-south land.
+ * a long north-south land, and a country with a detached island group and a remote territory (a composite
+ * map with insets).
  */
 public final class DemoGenerator {
 
@@ -73,6 +74,19 @@ public final class DemoGenerator {
         List<Place> districts = places("SD", serrano, names);
         DemoFiles.geojson(projectDir.resolve("regions/serrano-districts.geojson"), "Serrano districts (invented)", districts);
         DemoFigures.serranoLiteracy(projectDir.resolve("figures/serrano-districts.csv"), districts, random);
+
+        // a country with a detached island group 1,100 km off its coast and a remote territory in another ocean,
+        // published with insets
+        List<Geometry> marrow = InventedCells.tile(LocalPlane.sinusoidal(14.0), new Envelope(-10, 10, 40, 52), 90,
+                (lon, lat) -> blob(lon, lat, 14, 46, 7, 4, 0.15, 5), 0.5, random);
+        marrow.addAll(InventedCells.tile(LocalPlane.sinusoidal(1.0), new Envelope(-3, 3, 34, 39), 24,
+                (lon, lat) -> greatCircleDeg(lon, lat, -0.8, 36) < 0.9 || greatCircleDeg(lon, lat, 1.6, 37.2) < 0.7
+                        || greatCircleDeg(lon, lat, 2.2, 35.4) < 0.5, 0.25, random));
+        marrow.addAll(InventedCells.tile(LocalPlane.sinusoidal(-31.0), new Envelope(-2, 2, -24, -20), 12,
+                (lon, lat) -> blob(lon, lat, -31, -22, 1.2, 0.9, 0.2, 3), 0.25, random));
+        List<Place> counties = places("MR", marrow, names);
+        DemoFiles.geojson(projectDir.resolve("regions/marrow-counties.geojson"), "Marrow counties (invented)", counties);
+        DemoFigures.marrowLibraries(projectDir.resolve("figures/marrow-counties.csv"), counties, random);
     }
 
     /** A region of the demo: its code, invented name, lon/lat geometry and a representative point. */

@@ -109,7 +109,7 @@ class DemoPublishTest {
 
     @Test
     void theReportHoldsAParseableProjectionAndTheFiguresOfEveryMap() throws Exception {
-        assertEquals(6, report.path("maps").size());
+        assertEquals(7, report.path("maps").size());
         for (JsonNode map : report.path("maps")) {
             JsonNode projection = map.path("projection");
             assertTrue(projection.path("family").isTextual());
@@ -197,6 +197,28 @@ class DemoPublishTest {
         assertTrue(method.contains("imply no position on any disputed border"));
         assertTrue(method.contains("says nothing about how the figure varies inside the region"));
         assertTrue(method.contains("Classes depend on the method"));
+    }
+
+    @Test
+    void theCountryWithDetachedPartsIsDrawnInFramesWithItsScalesStated() throws IOException {
+        JsonNode marrow = null;
+        for (JsonNode map : report.path("maps")) {
+            marrow = map.path("id").asText().equals("library-cards") ? map : marrow;
+        }
+        JsonNode parts = marrow.path("parts");
+        assertEquals(3, parts.size());
+        assertEquals("Gannet Isles", parts.get(1).path("name").asText());
+        assertEquals(1.0, parts.get(1).path("areaScale").asDouble());
+        assertEquals("Port Ossory", parts.get(2).path("name").asText());
+        assertEquals(4.0, parts.get(2).path("areaScale").asDouble());
+        for (JsonNode part : parts) {
+            assertTrue(part.path("areaAudit").path("passed").asBoolean(), part.toString());
+            assertTrue(part.path("projection").path("wkt2").asText().startsWith("PROJCRS"));
+        }
+        String svg = Files.readString(site.resolve("maps/library-cards/library-cards.svg"));
+        assertTrue(svg.contains("id='regions-part-2'") && svg.contains("areas at 4 \u00d7 the main map"), "a layer and a stated scale per part");
+        String method = Files.readString(site.resolve("method.html"));
+        assertTrue(method.contains("Drawn at 4 \u00d7 the main map"), "the method page states the scale");
     }
 
     private String family(String mapId) {

@@ -131,4 +131,34 @@ class EditionChangesTest {
         assertTrue(page.contains("Figures that changed within their class"), page);
         assertTrue(page.contains("<td class=\"num\">50</td><td class=\"num\">50.5</td>"), page);
     }
+
+    @Test
+    void aFramedPartAddedOrReprojectedIsReported() throws IOException {
+        Path out = tmp.resolve("site");
+        MapModel map = SiteFixtures.map("a", texts, 10, 0);
+        List<String> keys = map.regions().stream().map(aequa.atlas.MapRegion::key).toList();
+        MapModel oneIsland = withParts(map, part("main", "Main map", keys.subList(1, keys.size()), 10),
+                part("part-1", "Isles", keys.subList(0, 1), 20));
+        publish(out, List.of(oneIsland));
+        MapModel twoIslands = withParts(map, part("main", "Main map", keys.subList(2, keys.size()), 10),
+                part("part-1", "Isles", keys.subList(0, 1), 25), part("part-2", "Reef", keys.subList(1, 2), 30));
+        JsonNode report = publish(out, List.of(twoIslands));
+        List<String> said = new java.util.ArrayList<>();
+        report.at("/changes/maps/0/parts").forEach(n -> said.add(n.asText()));
+        assertEquals(List.of("Part changed: Main map (its regions or area scale).",
+                "Part re-projected: Isles (Lambert azimuthal equal-area → Lambert azimuthal equal-area).", "Part added: Reef."), said);
+        assertTrue(Files.readString(out.resolve("changes.html")).contains("Part added: Reef."));
+    }
+
+    private static MapModel withParts(MapModel map, aequa.atlas.MapPart... parts) {
+        return new MapModel(map.spec(), map.periods(), parts[0].projection(), map.regions(), map.classification(),
+                map.ramp(), map.areaAudit(), map.notices(), List.of(parts));
+    }
+
+    private static aequa.atlas.MapPart part(String id, String name, List<String> keys, double centreLonDeg) {
+        var choice = new aequa.projection.ProjectionChoice(aequa.projection.Projections.lambertAzimuthal(centreLonDeg, 52),
+                1, 1, 0, 0, List.of(), "fitted");
+        return new aequa.atlas.MapPart(id, name, keys, id.equals("main"), 1, choice,
+                new aequa.planar.AreaAudit(1e-9, "", 1e-4), 100, 0, new aequa.atlas.MapPart.Frame(0, 0, 1, 1), 0);
+    }
 }

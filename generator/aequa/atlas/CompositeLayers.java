@@ -1,0 +1,104 @@
+package aequa.atlas;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.util.AffineTransformation;
+
+import aequa.composite.PartLayout;
+import aequa.composite.PartPlan;
+import aequa.inputs.regions.Region;
+import aequa.planar.AreaAudit;
+import aequa.planar.CoverageSimplification;
+import aequa.projection.Footprint;
+
+/**
+ * The planar layers of a composite map: one {@link PlanarLayer} per part (the part's regions on its own
+ * projection, at its own area scale), the framed parts placed by {@link PartLayout} and moved there. Moving is
+ * a translation, so every drawn area stays what the part's audit proved.
+ *
+ * @param parts          the parts, main part first
+ * @param simplifiedM    the drawable geometry per key, on the map's plane
+ * @param mapAreaRatio   planar / (area scale x geodesic) area per key
+ * @param audit          the worst of the parts' audits
+ * @param dropped        the parts' islands too small to draw
+ */
+record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, Map<String, Double> mapAreaRatio,
+                       AreaAudit audit, List<CoverageSimplification.DroppedPart> dropped) {
+
+    /**
+     * A part's planar layer ({@link PlanarLayer#of(RegionLayer, aequa.projection.EqualAreaProjection, Footprint,
+     * double, double, double)}); the caller may share them between maps.
+     */
+    interface PlanarLayers {
+        PlanarLayer of(RegionLayer subset, PartPlan plan, Footprint drawnFootprint, double minDrawnWidthM);
+    }
+
+    static CompositeLayers of(RegionLayer layer, List<PartPlan> plans, PlanarLayers planarLayers) {
+        PartPlan mainPlan = plans.get(0);
+        double mainWidthM = PlanarLayer.roughWidthM(mainPlan.footprint());
+        List<PlanarLayer> planar = new ArrayList<>();
+        for (PartPlan plan : plans) {
+            double minWidthM = plan.main() ? 0 : mainWidthM / Math.sqrt(plan.areaScale());
+            // a part drawn no larger than the main part is densified for the main part's drawing; an enlarged one for its own
+            Footprint drawn = plan.areaScale() > 1 ? plan.footprint() : mainPlan.footprint();
+            planar.add(planarLayers.of(subset(layer, plan), plan, drawn, minWidthM));
+        }
+        Envelope mainExtent = extent(planar.get(0).simplifiedM().values());
+        List<PartLayout.Inset> insets = new ArrayList<>();
+        for (int i = 1; i < plans.size(); i++) {
+            insets.add(new PartLayout.Inset(extent(planar.get(i).simplifiedM().values()),
+                    PartLayout.nameWidthM(MapPart.frameLabel(plans.get(i).name(), plans.get(i).areaScale()), mainExtent), plans.get(i).corner()));
+        }
+        List<PartLayout.Placement> placements = PartLayout.place(List.copyOf(planar.get(0).simplifiedM().values()), insets);
+
+        Map<String, Geometry> geometry = new LinkedHashMap<>();
+        Map<String, Double> ratios = new HashMap<>();
+        List<MapPart> parts = new ArrayList<>();
+        List<CoverageSimplification.DroppedPart> dropped = new ArrayList<>();
+        AreaAudit worst = planar.get(0).audit();
+        for (int i = 0; i < plans.size(); i++) {
+            PartPlan plan = plans.get(i);
+            PlanarLayer part = planar.get(i);
+            Envelope frame = i == 0 ? mainExtent : placements.get(i - 1).frameM();
+            AffineTransformation move = i == 0 ? null
+                    : AffineTransformation.translationInstance(placements.get(i - 1).dxM(), placements.get(i - 1).dyM());
+            part.simplifiedM().forEach((key, g) -> geometry.put(key, move == null ? g : move.transform(g)));
+            ratios.putAll(part.mapAreaRatio());
+            dropped.addAll(part.dropped());
+            if (part.audit().maxRelativeError() > worst.maxRelativeError() || Double.isNaN(part.audit().maxRelativeError())) {
+                worst = part.audit();
+            }
+            parts.add(new MapPart(plan.id(), plan.name(), plan.keys().stream().sorted().toList(), plan.main(),
+                    plan.areaScale(), plan.choice(), part.audit(), plan.areaKm2(), plan.gapKm(),
+                    new MapPart.Frame(frame.getMinX(), frame.getMinY(), frame.getMaxX(), frame.getMaxY()),
+                    i == 0 ? 0 : placements.get(i - 1).nameBandM()));
+        }
+        return new CompositeLayers(parts, geometry, ratios, worst, dropped);
+    }
+
+    /** The regions of one part, as a layer of their own (its id names the part, for caches keyed by id). */
+    static RegionLayer subset(RegionLayer layer, PartPlan plan) {
+        Set<String> keys = Set.copyOf(plan.keys());
+        List<Region> regions = layer.regions().stream().filter(r -> keys.contains(r.key())).toList();
+        Map<String, Double> areas = new HashMap<>();
+        regions.forEach(r -> areas.put(r.key(), layer.areaKm2ByKey().get(r.key())));
+        return new RegionLayer(layer.sourceId() + "#" + plan.id() + "#" + plan.keys().hashCode(), layer.file(), regions, areas);
+    }
+
+    private static Envelope extent(java.util.Collection<Geometry> geometries) {
+        Envelope e = new Envelope();
+        geometries.forEach(g -> {
+            if (!g.isEmpty()) {
+                e.expandToInclude(g.getEnvelopeInternal());
+            }
+        });
+        return e;
+    }
+}

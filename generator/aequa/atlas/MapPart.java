@@ -1,0 +1,57 @@
+package aequa.atlas;
+
+import java.util.List;
+
+import aequa.planar.AreaAudit;
+import aequa.projection.ProjectionChoice;
+
+/**
+ * One part of a composite map: the main part, or a detached part drawn in a frame on its own projection.
+ * Coordinates are metres on the map's plane (the main part's projection plane, where every framed part has
+ * been moved to its place).
+ *
+ * @param id         {@code main}, {@code part-1}, ...
+ * @param name       the name on its frame
+ * @param keys       its regions' keys, sorted
+ * @param main       whether this is the main part (no frame)
+ * @param areaScale  its area scale relative to the main part (1 keeps areas comparable across the map)
+ * @param projection its projection and the evidence for it
+ * @param areaAudit  its area proof, against its own area scale
+ * @param areaKm2    the geodesic area of its regions
+ * @param gapKm      its geodesic gap to the main part when the parts were found automatically, else NaN
+ * @param frame      its frame (for the main part, the extent of its regions)
+ * @param nameBandM  the height of the name band at the top of the frame (0 for the main part)
+ */
+public record MapPart(String id, String name, List<String> keys, boolean main, double areaScale,
+                      ProjectionChoice projection, AreaAudit areaAudit, double areaKm2, double gapKm, Frame frame,
+                      double nameBandM) {
+
+    public MapPart {
+        keys = List.copyOf(keys);
+    }
+
+    /**
+     * The text on the part's frame: its name, and for a part at another area scale how its areas compare, for
+     * example "Alaska (areas at 0.25 × the main map)".
+     */
+    public String frameLabel() {
+        return frameLabel(name, areaScale);
+    }
+
+    static String frameLabel(String name, double areaScale) {
+        return areaScale == 1 ? name : name + " (areas at " + factorText(areaScale) + " \u00d7 the main map)";
+    }
+
+    /** The area scale as readers see it: at most three significant digits, for example "0.25". */
+    public String areaScaleText() {
+        return factorText(areaScale);
+    }
+
+    private static String factorText(double areaScale) {
+        return java.math.BigDecimal.valueOf(areaScale).round(new java.math.MathContext(3)).stripTrailingZeros().toPlainString();
+    }
+
+    /** A rectangle on the map's plane, metres. */
+    public record Frame(double minXM, double minYM, double maxXM, double maxYM) {
+    }
+}

@@ -1,0 +1,207 @@
+package aequa.composite;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.geom.prep.PreparedGeometry;
+import org.locationtech.jts.geom.prep.PreparedGeometryFactory;
+import org.locationtech.jts.index.strtree.STRtree;
+
+/**
+ * Places the framed parts of a composite map around its main part, on the main part's plane (metres).
+ *
+ * <p>Each part's frame holds its regions with a margin, and a band at the top for its name. Parts are placed
+ * one by one, largest first. The candidate places for a frame line it up with an edge of the main part's
+ * extent, of the map so far, or of a frame already placed, inside or just outside them; a place is allowed
+ * when the frame, grown by a gap, touches no region of the main part and no other frame. Among the allowed
+ * places the one that leaves the map filling the most of its page wins (the page as wide as the map and at
+ * most {@value #MAX_ASPECT} times as tall, the drawing's own limit); a preferred corner, when given, limits the
+ * candidates to that quarter of the main part when any there is allowed. The winner is then slid towards the
+ * main part's centre as far as it stays allowed, which tucks frames into empty corners. Every step is
+ * arithmetic on fixed candidate lists, so the same parts always get the same places.
+ */
+public final class PartLayout {
+
+    /** Frame margin, gap between frames and regions, and name band, as shares of the main part's larger side (chosen by eye). */
+    static final double MARGIN_SHARE = 0.012;
+    static final double GAP_SHARE = 0.02;
+    static final double NAME_BAND_SHARE = 0.04;
+    /** The drawing's tallest map block relative to its width (drawing's Layout.MAX_MAP_ASPECT). */
+    static final double MAX_ASPECT = 1.25;
+    /** Trials of the slide towards the centre: halving steps down to 1/2^12 of the way. */
+    private static final int SLIDE_STEPS = 12;
+
+    private static final GeometryFactory GEOMETRY = new GeometryFactory();
+
+    /**
+     * One part to place.
+     *
+     * @param contentM    the envelope of its regions on its own plane, metres (after its area scale)
+     * @param nameWidthM  how wide its name is, in the same metres, when drawn in the name band
+     * @param corner      {@code top-left}, {@code top-right}, {@code bottom-left}, {@code bottom-right} or empty
+     */
+    public record Inset(Envelope contentM, double nameWidthM, String corner) {
+    }
+
+    /**
+     * Where a part goes: add ({@code dxM}, {@code dyM}) to its coordinates to draw it in {@code frameM}.
+     *
+     * @param nameBandM the height of the name band at the top of the frame
+     */
+    public record Placement(double dxM, double dyM, Envelope frameM, double nameBandM) {
+    }
+
+    private PartLayout() {
+    }
+
+    /** Width of a name in the name band, per character, as a share of the band's height (generous for sans type, by eye). */
+    static final double NAME_CHAR_SHARE = 0.36;
+
+    /** How wide a part's name is in its name band, for a main part of extent {@code mainM}; the drawing fits the name to it. */
+    public static double nameWidthM(String name, Envelope mainM) {
+        return name.length() * NAME_CHAR_SHARE * NAME_BAND_SHARE * Math.max(mainM.getWidth(), mainM.getHeight());
+    }
+
+    /** Places {@code insets} (in order: pass the largest first) around the main part's regions. */
+    public static List<Placement> place(List<Geometry> mainRegionsM, List<Inset> insets) {
+        Envelope main = new Envelope();
+        STRtree index = new STRtree();
+        for (Geometry g : mainRegionsM) {
+            if (!g.isEmpty()) {
+                main.expandToInclude(g.getEnvelopeInternal());
+                index.insert(g.getEnvelopeInternal(), g);
+            }
+        }
+        double side = Math.max(main.getWidth(), main.getHeight());
+        double margin = MARGIN_SHARE * side;
+        double gap = GAP_SHARE * side;
+        double band = NAME_BAND_SHARE * side;
+        List<Envelope> frames = new ArrayList<>();
+        Envelope whole = new Envelope(main);
+        List<Placement> placements = new ArrayList<>();
+        for (Inset inset : insets) {
+            Envelope c = inset.contentM();
+            double w = Math.max(c.getWidth() + 2 * margin, inset.nameWidthM() + 2 * margin);
+            double h = c.getHeight() + 2 * margin + band;
+            Envelope best = best(candidates(main, whole, frames, w, h, gap), inset.corner(), main, whole, index, frames, gap);
+            best = slide(best, main, index, frames, gap);
+            frames.add(best);
+            whole.expandToInclude(best);
+            double dx = best.getMinX() + (best.getWidth() - c.getWidth()) / 2 - c.getMinX();
+            double dy = best.getMinY() + margin - c.getMinY();
+            placements.add(new Placement(dx, dy, best, band));
+        }
+        return placements;
+    }
+
+    private static List<Envelope> candidates(Envelope main, Envelope whole, List<Envelope> frames, double w, double h, double gap) {
+        List<Double> xs = new ArrayList<>(List.of(main.getMinX(), main.getMaxX() - w, whole.getMinX(), whole.getMaxX() - w,
+                whole.getMinX() - gap - w, whole.getMaxX() + gap));
+        List<Double> ys = new ArrayList<>(List.of(main.getMinY(), main.getMaxY() - h, whole.getMinY(), whole.getMaxY() - h,
+                whole.getMinY() - gap - h, whole.getMaxY() + gap));
+        for (Envelope f : frames) {
+            xs.addAll(List.of(f.getMaxX() + gap, f.getMinX() - gap - w, f.getMinX(), f.getMaxX() - w));
+            ys.addAll(List.of(f.getMaxY() + gap, f.getMinY() - gap - h, f.getMinY(), f.getMaxY() - h));
+        }
+        List<Envelope> out = new ArrayList<>();
+        for (double y : ys) {
+            for (double x : xs) {
+                out.add(new Envelope(x, x + w, y, y + h));
+            }
+        }
+        return out;
+    }
+
+    private static Envelope best(List<Envelope> candidates, String corner, Envelope main, Envelope whole, STRtree index,
+                                 List<Envelope> frames, double gap) {
+        for (boolean useCorner : new boolean[] {true, false}) {
+            if (useCorner && corner.isEmpty()) {
+                continue;
+            }
+            Envelope best = null;
+            double bestScore = Double.NEGATIVE_INFINITY;
+            for (Envelope f : candidates) {
+                if (useCorner && !inCorner(f, corner, main)) {
+                    continue;
+                }
+                if (!allowed(f, index, frames, gap)) {
+                    continue;
+                }
+                Envelope grown = new Envelope(whole);
+                grown.expandToInclude(f);
+                double score = fill(grown);
+                if (score > bestScore * (1 + 1e-9)) {
+                    bestScore = score;
+                    best = f;
+                }
+            }
+            if (best != null) {
+                return best;
+            }
+        }
+        throw new IllegalStateException("no place for a frame"); // the outside candidates are always allowed
+    }
+
+    /** The share of a page (as wide as the map, at most MAX_ASPECT as tall) the map leaves, up to a constant. */
+    static double fill(Envelope map) {
+        double aspect = map.getHeight() / map.getWidth();
+        return aspect <= MAX_ASPECT ? 1 / (map.getWidth() * map.getHeight()) : MAX_ASPECT / (map.getHeight() * map.getHeight());
+    }
+
+    private static boolean inCorner(Envelope f, String corner, Envelope main) {
+        boolean left = f.centre().x < main.centre().x;
+        boolean bottom = f.centre().y < main.centre().y;
+        return switch (corner) {
+            case "top-left" -> left && !bottom;
+            case "top-right" -> !left && !bottom;
+            case "bottom-left" -> left && bottom;
+            case "bottom-right" -> !left && bottom;
+            default -> true;
+        };
+    }
+
+    private static boolean allowed(Envelope frame, STRtree index, List<Envelope> frames, double gap) {
+        Envelope grown = new Envelope(frame);
+        grown.expandBy(gap);
+        for (Envelope other : frames) {
+            if (other.intersects(grown)) {
+                return false;
+            }
+        }
+        PreparedGeometry box = null;
+        for (Object o : index.query(grown)) {
+            if (box == null) {
+                box = PreparedGeometryFactory.prepare(GEOMETRY.toGeometry(grown));
+            }
+            if (box.intersects((Geometry) o)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** Slides the frame towards the main part's centre, along x then y, as far as it stays allowed. */
+    private static Envelope slide(Envelope frame, Envelope main, STRtree index, List<Envelope> frames, double gap) {
+        Envelope current = frame;
+        for (int axis = 0; axis < 2; axis++) {
+            double towards = axis == 0 ? main.centre().x - current.centre().x : main.centre().y - current.centre().y;
+            double moved = 0;
+            for (int step = 1; step <= SLIDE_STEPS; step++) {
+                double trial = moved + towards / (1 << step);
+                Envelope shifted = shift(current, axis == 0 ? trial : 0, axis == 0 ? 0 : trial);
+                if (allowed(shifted, index, frames, gap)) {
+                    moved = trial;
+                }
+            }
+            current = shift(current, axis == 0 ? moved : 0, axis == 0 ? 0 : moved);
+        }
+        return current;
+    }
+
+    private static Envelope shift(Envelope e, double dx, double dy) {
+        return new Envelope(e.getMinX() + dx, e.getMaxX() + dx, e.getMinY() + dy, e.getMaxY() + dy);
+    }
+}

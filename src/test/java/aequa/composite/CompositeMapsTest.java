@@ -1,0 +1,261 @@
+package aequa.composite;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
+
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.geom.GeometryFactory;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+import aequa.atlas.Atlas;
+import aequa.atlas.AtlasLoader;
+import aequa.atlas.LoadOptions;
+import aequa.atlas.MapModel;
+import aequa.atlas.MapPart;
+import aequa.atlas.MapRegion;
+import aequa.findings.Findings;
+import aequa.project.LoadedProject;
+import aequa.project.ProjectLoader;
+import aequa.projection.Distortion;
+import aequa.projection.EqualAreaProjection;
+import aequa.projection.Footprint;
+import aequa.projection.ProjectionFamily;
+import aequa.projection.Projections;
+
+/**
+ * Composite maps of the US Census Bureau's 2017 counties and states (src/test/resources/geometry/SOURCE.md),
+ * loaded as a fresh project with no projection or inset settings, and with a listed part drawn at a quarter
+ * of the area scale. State FIPS codes (FIPS 5-2): 02 Alaska, 15 Hawaii, 72 Puerto Rico.
+ */
+class CompositeMapsTest {
+
+    private static final ObjectMapper JSON = new ObjectMapper();
+    private static final GeometryFactory GEOMETRY = new GeometryFactory();
+
+    private static MapModel counties;
+    private static MapModel countiesOneProjection;
+    private static MapModel statesScaled;
+
+    @BeforeAll
+    static void load(@TempDir Path project) throws IOException {
+        Files.createDirectories(project.resolve("regions"));
+        Files.createDirectories(project.resolve("figures"));
+        Path resources = Path.of("src/test/resources/geometry");
+        Files.copy(resources.resolve("us-counties-2017.geojson"), project.resolve("regions/counties.geojson"));
+        Files.copy(resources.resolve("us-states-2017.geojson"), project.resolve("regions/states.geojson"));
+        figures(project.resolve("regions/counties.geojson"), project.resolve("figures/counties.csv"));
+        figures(project.resolve("regions/states.geojson"), project.resolve("figures/states.csv"));
+        Files.writeString(project.resolve("aequa.yaml"), String.join("\n",
+                "regions:",
+                "  counties: { file: regions/counties.geojson, key: id, name: name }",
+                "  states: { file: regions/states.geojson, key: id, name: name }",
+                "figures:",
+                "  counties: { file: figures/counties.csv, key: code }",
+                "  states: { file: figures/states.csv, key: code }",
+                "maps:",
+                "  - { id: counties, regions: counties, figures: counties, indicator: code_number, measure: rate }",
+                "  - { id: counties-one, regions: counties, figures: counties, indicator: code_number, measure: rate, insets: off }",
+                "  - id: states",
+                "    regions: states",
+                "    figures: states",
+                "    indicator: code_number",
+                "    measure: rate",
+                "    insets:",
+                "      - { name: Alaska, regions: [\"02\"], scale: 0.25, corner: bottom-left }",
+                "      - { name: Hawaii, box: [-161, 18, -154, 23] }",
+                ""));
+        Findings findings = new Findings();
+        LoadedProject loaded = ProjectLoader.load(project, findings).orElseThrow(() -> new AssertionError(findings.list()));
+        Atlas atlas = AtlasLoader.load(loaded, LoadOptions.defaults(), findings);
+        assertTrue(!findings.hasErrors(), findings.list().toString());
+        counties = atlas.maps().get(0);
+        countiesOneProjection = atlas.maps().get(1);
+        statesScaled = atlas.maps().get(2);
+    }
+
+    @Test
+    void theCountiesFallIntoTheContiguousStatesAlaskaHawaiiAndTheTerritories() {
+        List<Set<String>> statesByPart = counties.parts().stream().map(p -> {
+            Set<String> states = new TreeSet<>();
+            p.keys().forEach(k -> states.add(k.substring(0, 2)));
+            return (Set<String>) states;
+        }).toList();
+        assertEquals(49, statesByPart.get(0).size(), "48 contiguous states and DC");
+        assertEquals(List.of(Set.of("02"), Set.of("15"), Set.of("72", "78"), Set.of("66", "69"), Set.of("60")),
+                statesByPart.subList(1, statesByPart.size()));
+        assertTrue(counties.parts().stream().allMatch(p -> p.areaScale() == 1));
+    }
+
+    @Test
+    void everyPartIsWithinTenPercentOfTheBestProjectionFoundByExhaustiveSearch() {
+        RealRegions lonLat = RealRegions.read("us-counties-2017.geojson", "id");
+        for (MapPart part : counties.parts()) {
+            Set<String> keys = Set.copyOf(part.keys());
+            Footprint footprint = Footprint.of(lonLat.regions().stream()
+                    .filter(r -> keys.contains(r.key())).map(aequa.inputs.regions.Region::lonLat).toList());
+            double best = exhaustiveBestOmegaDeg(footprint);
+            double omega = part.projection().omegaMaxDeg();
+            assertTrue(omega <= 1.1 * best + 0.01, part.name() + ": omega " + omega + " against a grid search's " + best);
+        }
+        // the issue's own figure: 6.6 deg for one projection of everything; the contiguous states alone need
+        // what 'aequa explain' reports for them alone, 1.37 deg (Albers, this chooser)
+        assertTrue(counties.parts().get(0).projection().omegaMaxDeg() < 1.5);
+    }
+
+    @Test
+    void noRegionOfOnePartTouchesAnotherPartsFrame() {
+        for (MapPart framed : counties.parts()) {
+            if (framed.main()) {
+                continue;
+            }
+            var frame = GEOMETRY.toGeometry(new Envelope(framed.frame().minXM(), framed.frame().maxXM(),
+                    framed.frame().minYM(), framed.frame().maxYM()));
+            Set<String> inside = Set.copyOf(framed.keys());
+            for (MapRegion region : counties.regions()) {
+                boolean intersects = frame.intersects(region.planarM());
+                assertEquals(inside.contains(region.key()) && !region.planarM().isEmpty(), intersects,
+                        region.key() + " against the frame of " + framed.name());
+            }
+        }
+    }
+
+    @Test
+    void drawnAreasDividedByTheDeclaredScalesSumToTheGeodesicAreas() {
+        for (MapModel map : List.of(counties, statesScaled)) {
+            double drawnOverScaleKm2 = 0;
+            double simplifiedOverScaleKm2 = 0;
+            double geodesicKm2 = 0;
+            for (MapPart part : map.parts()) {
+                Set<String> keys = Set.copyOf(part.keys());
+                for (MapRegion region : map.regions()) {
+                    if (keys.contains(region.key())) {
+                        // the audited area: the projected outline before simplification (MapRegion.mapAreaRatio)
+                        drawnOverScaleKm2 += region.mapAreaRatio() * part.areaScale() * region.geodesicAreaKm2() / part.areaScale();
+                        geodesicKm2 += region.geodesicAreaKm2();
+                        simplifiedOverScaleKm2 += region.planarM().getArea() / 1e6 / part.areaScale();
+                    }
+                }
+                assertTrue(part.areaAudit().passed(), part.name());
+            }
+            assertEquals(1, drawnOverScaleKm2 / geodesicKm2, 1e-4, map.id()); // the default area tolerance
+            // the simplified outlines as drawn, islets too small to draw left out (reported): on the counties map
+            // within the area tolerance too (measured 5.2e-5); with Alaska at a quarter scale, 2.5e-3
+            assertEquals(1, simplifiedOverScaleKm2 / geodesicKm2, map == counties ? 1e-4 : 5e-3, map.id());
+        }
+    }
+
+    @Test
+    void aListedPartKeepsItsNameScaleAndCorner() {
+        MapPart alaska = statesScaled.parts().get(1);
+        assertEquals("Alaska", alaska.name());
+        assertEquals(List.of("02"), alaska.keys());
+        assertEquals(0.25, alaska.areaScale());
+        MapPart main = statesScaled.parts().get(0);
+        assertTrue(alaska.frame().maxXM() < (main.frame().minXM() + main.frame().maxXM()) / 2, "left");
+        assertTrue(alaska.frame().maxYM() < (main.frame().minYM() + main.frame().maxYM()) / 2, "bottom");
+        // drawn at a quarter of the area: the simplified outline's area over its geodesic area, within 2 % (at a
+        // quarter scale more of Alaska's islets are too small to draw, and are reported as left out)
+        MapRegion drawn = statesScaled.regions().stream().filter(r -> r.key().equals("02")).findFirst().orElseThrow();
+        assertEquals(0.25, drawn.planarM().getArea() / 1e6 / drawn.geodesicAreaKm2(), 0.005);
+        assertEquals(List.of("15"), statesScaled.parts().get(2).keys());
+        assertEquals(3, statesScaled.parts().size(), "the other territories stay in the main part of a listed map");
+    }
+
+    /**
+     * The share of the map's box (regions and frames) that regions fill: the issue measured well under a third
+     * for one projection of the counties; the composite map must fill clearly more.
+     */
+    @Test
+    void theCompositeMapFillsMoreOfItsFrame() {
+        assertEquals(List.of(), countiesOneProjection.parts(), "insets: off draws one projection");
+        double before = fillShare(countiesOneProjection);
+        double after = fillShare(counties);
+        assertTrue(before < 1.0 / 3, "one projection fills " + before);
+        // measured: 6.6 % for one oblique projection, 30.5 % for the composite map (frames included)
+        assertTrue(after > 3 * before, "composite fills " + after + " against " + before);
+    }
+
+    static double fillShare(MapModel map) {
+        Envelope box = new Envelope();
+        double areaM2 = 0;
+        for (MapRegion r : map.regions()) {
+            if (!r.planarM().isEmpty()) {
+                box.expandToInclude(r.planarM().getEnvelopeInternal());
+                areaM2 += r.planarM().getArea();
+            }
+        }
+        for (MapPart p : map.parts()) {
+            box.expandToInclude(new Envelope(p.frame().minXM(), p.frame().maxXM(), p.frame().minYM(), p.frame().maxYM()));
+        }
+        return areaM2 / box.getArea();
+    }
+
+    /**
+     * The smallest largest-omega over the footprint's samples found by a grid search, independent of the chooser's
+     * optimiser: Lambert azimuthal centres on a 21 x 21 grid over the data's box, and Albers with both standard
+     * parallels on an 11-step grid over the data's latitudes (Snyder 1987: the usual choices for regional maps).
+     */
+    static double exhaustiveBestOmegaDeg(Footprint footprint) {
+        double[] samples = footprint.samples().lonLatDeg();
+        double best = Double.POSITIVE_INFINITY;
+        double lonSpan = footprint.lonSpanDeg();
+        double latSpan = footprint.maxLatDeg() - footprint.minLatDeg();
+        for (int i = 0; i <= 20; i++) {
+            for (int j = 0; j <= 20; j++) {
+                double lon = wrap(footprint.centreLonDeg() - lonSpan / 2 + lonSpan * i / 20);
+                double lat = footprint.minLatDeg() + latSpan * j / 20;
+                best = Math.min(best, omegaMaxDeg(Projections.lambertAzimuthal(lon, lat), samples));
+            }
+        }
+        if (footprint.minLatDeg() > 0 || footprint.maxLatDeg() < 0) {
+            for (int a = 0; a <= 10; a++) {
+                for (int b = a + 1; b <= 10; b++) {
+                    double p1 = footprint.minLatDeg() + latSpan * a / 10;
+                    double p2 = footprint.minLatDeg() + latSpan * b / 10;
+                    EqualAreaProjection albers = Projections.create(ProjectionFamily.ALBERS_CONIC, Map.of("centre-lon",
+                            footprint.centreLonDeg(), "centre-lat", footprint.midLatDeg(), "standard-parallel-1", p1,
+                            "standard-parallel-2", p2));
+                    best = Math.min(best, omegaMaxDeg(albers, samples));
+                }
+            }
+        }
+        return best;
+    }
+
+    private static double omegaMaxDeg(EqualAreaProjection projection, double[] lonLat) {
+        double worst = 0;
+        for (int k = 0; k < lonLat.length; k += 2) {
+            double omega = Distortion.at(projection, lonLat[k], lonLat[k + 1]).omegaDeg();
+            worst = Math.max(worst, Double.isNaN(omega) ? Double.POSITIVE_INFINITY : omega);
+        }
+        return worst;
+    }
+
+    private static double wrap(double lonDeg) {
+        return ((lonDeg + 540) % 360) - 180;
+    }
+
+
+    /** A figure per region: its numeric code, real attribute data enough to classify and draw. */
+    private static void figures(Path geojson, Path csv) throws IOException {
+        StringBuilder out = new StringBuilder("code,code_number\n");
+        for (JsonNode feature : JSON.readTree(geojson.toFile()).path("features")) {
+            String id = feature.path("properties").path("id").asText();
+            out.append(id).append(',').append(Integer.parseInt(id) % 97).append('\n');
+        }
+        Files.writeString(csv, out);
+    }
+}
