@@ -6,6 +6,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Supplier;
 
 import org.locationtech.jts.geom.Geometry;
 
@@ -28,7 +29,9 @@ import aequa.statistics.RegionArea;
 
 /**
  * Builds the {@link MapModel} of each map. Geometry sources, statistics sources, projection choices and
- * planar layers are computed once and shared by every map that uses the same ones.
+ * planar layers are computed once and shared by every map that uses the same ones; the geometry stage's
+ * results come from the {@link GeometryCache} when their inputs are unchanged (the footprint is then not
+ * even measured).
  */
 final class MapAssembler {
 
@@ -36,6 +39,7 @@ final class MapAssembler {
     private final LoadOptions options;
     private final Findings findings;
     private final RegionLayers layers;
+    private final GeometryCache cache;
     private final Map<String, FigureTable> tables = new HashMap<>();
     private final Map<String, Footprint> footprints = new HashMap<>();
     private final Map<String, ProjectionChoice> choices = new HashMap<>();
@@ -45,7 +49,8 @@ final class MapAssembler {
         this.project = project;
         this.options = options;
         this.findings = findings;
-        this.layers = new RegionLayers(project, findings);
+        this.cache = options.geometryCache();
+        this.layers = new RegionLayers(project, findings, cache);
     }
 
     Optional<MapModel> assemble(int mapIndex, MapSpec map) {
@@ -68,12 +73,12 @@ final class MapAssembler {
         if (request.isEmpty()) {
             return Optional.empty();
         }
-        Footprint footprint = footprints.computeIfAbsent(layer.sourceId(),
+        Supplier<Footprint> footprint = () -> footprints.computeIfAbsent(layer.sourceId(),
                 id -> Footprint.of(layer.regions().stream().map(Region::lonLat).toList()));
         ProjectionChoice choice;
         try {
             choice = choices.computeIfAbsent(layer.sourceId() + "|" + request.get(),
-                    key -> ProjectionChooser.choose(footprint, request.get()));
+                    key -> cache.choice(layer, request.get(), () -> ProjectionChooser.choose(footprint.get(), request.get())));
         } catch (IllegalArgumentException e) {
             findings.add(Finding.error("projection-parameters-invalid", ProjectFile.FILE_NAME,
                     project.places().place("/maps/" + mapIndex + "/projection"),
@@ -82,7 +87,8 @@ final class MapAssembler {
             return Optional.empty();
         }
         PlanarLayer planar = planarLayers.computeIfAbsent(layer.sourceId() + "|" + choice.projection().wkt2(),
-                key -> PlanarLayer.of(layer, choice.projection(), footprint, project.file().checks().areaTolerance()));
+                key -> cache.planar(layer, choice.projection(), project.file().checks().areaTolerance(),
+                        () -> PlanarLayer.of(layer, choice.projection(), footprint.get(), project.file().checks().areaTolerance())));
         if (!planar.audit().passed()) {
             findings.add(Finding.error("area-audit-failed", layer.file(), "feature \"" + planar.audit().worstKey() + "\"",
                     String.format(java.util.Locale.ROOT, "On map '%s' the drawn area differs from the true area by %.2e, more than the allowed %.1e.",

@@ -17,16 +17,21 @@ import aequa.project.LoadedProject;
 import aequa.project.RegionSourceSpec;
 import aequa.projection.SourceCrs;
 
-/** Reads, checks and measures each geometry source once, however many maps use it. */
+/**
+ * Reads, checks and measures each geometry source once, however many maps use it, or takes the result from
+ * the {@link GeometryCache} when the source is unchanged.
+ */
 final class RegionLayers {
 
     private final LoadedProject project;
     private final Findings findings;
+    private final GeometryCache cache;
     private final Map<String, RegionLayer> loaded = new HashMap<>();
 
-    RegionLayers(LoadedProject project, Findings findings) {
+    RegionLayers(LoadedProject project, Findings findings, GeometryCache cache) {
         this.project = project;
         this.findings = findings;
+        this.cache = cache;
     }
 
     RegionLayer get(String sourceId) {
@@ -35,6 +40,11 @@ final class RegionLayers {
 
     private RegionLayer load(String sourceId) {
         RegionSourceSpec spec = project.file().regions().get(sourceId);
+        return cache.layer(project.dir(), sourceId, spec, findings, () -> compute(sourceId, spec));
+    }
+
+    private GeometryCodec.LayerWithFindings compute(String sourceId, RegionSourceSpec spec) {
+        Findings findings = new Findings();
         List<Region> read = RegionReaders.read(project.dir(), spec, SourceCrs::toLonLat, findings);
         List<Region> valid = RegionValidator.validate(read, spec.file(), findings);
         CoverageChecks.report(valid, spec.file(), findings);
@@ -48,6 +58,6 @@ final class RegionLayers {
             densified.add(fine);
             areas.put(region.key(), GeodesicArea.areaKm2(fine.lonLat()));
         }
-        return new RegionLayer(sourceId, spec.file(), densified, areas);
+        return new GeometryCodec.LayerWithFindings(new RegionLayer(sourceId, spec.file(), densified, areas), findings.list());
     }
 }
