@@ -1,10 +1,10 @@
 package aequa.atlas;
 
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.stream.IntStream;
 
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
@@ -38,17 +38,14 @@ record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAre
     static PlanarLayer of(RegionLayer layer, EqualAreaProjection projection, Footprint footprint, double tolerance) {
         double stepDeg = LonLatDensifier.stepDeg(roughWidthM(footprint), WEB_WIDTH_PX);
         PolygonProjector projector = new PolygonProjector(projection, stepDeg);
-        List<String> keys = new ArrayList<>();
-        List<Geometry> planar = new ArrayList<>();
-        List<RegionAreaCheck> checks = new ArrayList<>();
+        List<String> keys = layer.regions().stream().map(Region::key).toList();
+        // each region is densified, projected and measured alone, in parallel; the lists keep the layer's order
+        List<Geometry> planar = layer.regions().parallelStream()
+                .map(region -> projector.project(LonLatDensifier.densify(region.lonLat(), stepDeg))).toList();
+        List<RegionAreaCheck> checks = IntStream.range(0, keys.size()).parallel()
+                .mapToObj(i -> AreaAuditor.check(keys.get(i), layer.areaKm2ByKey().get(keys.get(i)), planar.get(i))).toList();
         Envelope extent = new Envelope();
-        for (Region region : layer.regions()) {
-            Geometry projected = projector.project(LonLatDensifier.densify(region.lonLat(), stepDeg));
-            keys.add(region.key());
-            planar.add(projected);
-            checks.add(AreaAuditor.check(region.key(), layer.areaKm2ByKey().get(region.key()), projected));
-            extent.expandToInclude(projected.getEnvelopeInternal());
-        }
+        planar.forEach(projected -> extent.expandToInclude(projected.getEnvelopeInternal()));
         AreaAudit audit = AreaAuditor.audit(checks, tolerance);
         double widthM = Math.max(extent.getWidth(), extent.getHeight());
         double toleranceM = Math.min(CoverageSimplification.screenToleranceM(widthM, WEB_WIDTH_PX),

@@ -1,6 +1,5 @@
 package aequa.atlas;
 
-import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -48,15 +47,15 @@ final class RegionLayers {
         List<Region> read = RegionReaders.read(project.dir(), spec, SourceCrs::toLonLat, findings);
         List<Region> valid = RegionValidator.validate(read, spec.file(), findings);
         CoverageChecks.report(valid, spec.file(), findings);
-        List<Region> densified = new ArrayList<>(valid.size());
+        // GeoJSON edges are straight in lon/lat (RFC 7946, section 3.1.1); densified, the geodesic edges
+        // between vertices follow them, so the geodesic area is the area of the region as drawn. Each region
+        // is measured alone, in parallel; the lists keep the input order.
+        List<Region> densified = valid.parallelStream().map(region -> new Region(region.key(), region.name(),
+                LonLatDensifier.densify(region.lonLat(), LonLatDensifier.MAX_STEP_DEG))).toList();
+        double[] areasKm2 = densified.parallelStream().mapToDouble(region -> GeodesicArea.areaKm2(region.lonLat())).toArray();
         Map<String, Double> areas = new LinkedHashMap<>();
-        for (Region region : valid) {
-            // GeoJSON edges are straight in lon/lat (RFC 7946, section 3.1.1); densified, the geodesic edges
-            // between vertices follow them, so the geodesic area is the area of the region as drawn
-            Region fine = new Region(region.key(), region.name(),
-                    LonLatDensifier.densify(region.lonLat(), LonLatDensifier.MAX_STEP_DEG));
-            densified.add(fine);
-            areas.put(region.key(), GeodesicArea.areaKm2(fine.lonLat()));
+        for (int i = 0; i < densified.size(); i++) {
+            areas.put(densified.get(i).key(), areasKm2[i]);
         }
         return new GeometryCodec.LayerWithFindings(new RegionLayer(sourceId, spec.file(), densified, areas), findings.list());
     }

@@ -65,18 +65,16 @@ public final class ProjectionChooser {
         double step = roundingStepDeg(footprint);
         FootprintSamples search = footprint.samples().thinned(SEARCH_SAMPLES);
         FootprintSamples latitudes = footprint.samples().byLatitude(SEARCH_SAMPLES);
-        List<Evaluated> evaluated = new ArrayList<>();
-        for (ProjectionFamily family : families) {
+        // the families are searched and scored in parallel, each alone; the list keeps their order
+        List<Evaluated> evaluated = families.parallelStream().map(family -> {
             // normal conic and cylindrical maps distort alike all along a parallel (Snyder 1987, chapters 10
             // and 14), so their search needs one sample per latitude only
             boolean latitudeOnly = family == ProjectionFamily.ALBERS_CONIC || family == ProjectionFamily.CYLINDRICAL;
             Map<String, Double> values = new FamilySearch(family, footprint, latitudeOnly ? latitudes : search, forced, step).run();
             EqualAreaProjection projection = request.family().isPresent()
                     ? Projections.create(family, values) : FamilySearch.build(family, values);
-            if (projection != null) {
-                evaluated.add(new Evaluated(projection, OmegaScore.of(projection, footprint.samples())));
-            }
-        }
+            return projection == null ? null : new Evaluated(projection, OmegaScore.of(projection, footprint.samples()));
+        }).filter(java.util.Objects::nonNull).collect(java.util.stream.Collectors.toCollection(ArrayList::new));
         evaluated.sort(Comparator.comparingDouble((Evaluated e) -> e.score.score()).thenComparing(e -> e.projection.family()));
         Evaluated chosen = mostConventionalNearBest(evaluated);
         ChoiceReason.Basis basis = request.family().isPresent() ? ChoiceReason.Basis.FORCED : ChoiceReason.Basis.AUTOMATIC;
