@@ -104,54 +104,75 @@ final class GeometryCache {
 
     /** The projection choice for {@code layer} and {@code request}, from the cache or from {@code compute}. */
     ProjectionChoice choice(RegionLayer layer, ProjectionRequest request, Supplier<ProjectionChoice> compute) {
-        Optional<String> key = entryKey(layer, "choice\n" + requestText(request));
-        if (key.isEmpty()) {
-            return compute.get();
+        if (request.previous().isPresent()) {
+            // ProjectionChooser keeps its own best choice when the previous one has the same family and
+            // parameters, so the answer is then the one made without a previous choice, which the first
+            // publish stored: the monthly rebuild after it need not choose again
+            ProjectionRequest.Previous previous = request.previous().get();
+            Optional<ProjectionChoice> first = lookup(layer, "choice", "choice\n" + requestText(
+                    new ProjectionRequest(request.family(), request.forcedParameters(), Optional.empty())),
+                    in -> rebuild(GeometryCodec.readChoice(in)));
+            if (first.isPresent() && first.get().projection().family() == previous.family()
+                    && first.get().projection().parameters().equals(
+                            Projections.create(previous.family(), previous.parameters()).parameters())) {
+                return first.get();
+            }
         }
-        Path file = entryFile(layer, "choice", key.get());
-        Optional<ProjectionChoice> cached = CacheFile.read(file, "projection-choice", FORMAT, in -> {
-            keyed(in, key.get());
-            return rebuild(GeometryCodec.readChoice(in));
-        }).flatMap(c -> c);
-        if (cached.isPresent()) {
-            return cached.get();
-        }
-        ProjectionChoice computed = compute.get();
-        if (writable) {
-            CacheFile.write(file, "projection-choice", FORMAT, out -> {
-                CacheFile.writeText(out, key.get());
-                GeometryCodec.writeChoice(out, computed);
-            });
-        }
-        return computed;
+        return entry(layer, "choice", "choice\n" + requestText(request),
+                in -> rebuild(GeometryCodec.readChoice(in)), GeometryCodec::writeChoice, compute);
     }
 
     /** The planar layer of {@code layer} in {@code projection}, from the cache or from {@code compute}. */
     PlanarLayer planar(RegionLayer layer, EqualAreaProjection projection, double tolerance, Supplier<PlanarLayer> compute) {
         StringBuilder regions = new StringBuilder();
         layer.regions().forEach(r -> regions.append(r.key()).append('\n'));
-        Optional<String> key = entryKey(layer, "planar\n" + projection.wkt2() + "\n" + hex(regions.toString())
-                + "\n" + Double.doubleToLongBits(tolerance));
+        List<String> keys = layer.regions().stream().map(Region::key).toList();
+        return entry(layer, "planar", "planar\n" + projection.wkt2() + "\n" + hex(regions.toString()) + "\n"
+                        + Double.doubleToLongBits(tolerance),
+                in -> Optional.of(GeometryCodec.readPlanar(in)).filter(p -> List.copyOf(p.simplifiedM().keySet()).equals(keys)),
+                GeometryCodec::writePlanar, compute);
+    }
+
+    /** Writes an entry's value after its key. */
+    private interface EntryWriter<T> {
+        void write(java.io.DataOutputStream out, T value) throws IOException;
+    }
+
+    /**
+     * An entry derived from {@code layer}: read when its file holds the same key and {@code read} accepts it,
+     * otherwise computed and, when the cache is writable, stored.
+     */
+    private <T> T entry(RegionLayer layer, String kind, String what, CacheFile.PayloadReader<Optional<T>> read,
+                        EntryWriter<T> write, Supplier<T> compute) {
+        Optional<String> key = entryKey(layer, what);
         if (key.isEmpty()) {
             return compute.get();
         }
-        Path file = entryFile(layer, "planar", key.get());
-        Optional<PlanarLayer> cached = CacheFile.read(file, "planar-layer", FORMAT, in -> {
-            keyed(in, key.get());
-            return GeometryCodec.readPlanar(in);
-        }).filter(p -> p.simplifiedM().keySet().equals(layer.regions().stream().map(Region::key)
-                .collect(java.util.stream.Collectors.toCollection(java.util.LinkedHashSet::new))));
+        Optional<T> cached = lookup(layer, kind, what, read);
         if (cached.isPresent()) {
             return cached.get();
         }
-        PlanarLayer computed = compute.get();
+        Path file = entryFile(layer, kind, key.get());
+        T computed = compute.get();
         if (writable) {
-            CacheFile.write(file, "planar-layer", FORMAT, out -> {
+            CacheFile.write(file, kind, FORMAT, out -> {
                 CacheFile.writeText(out, key.get());
-                GeometryCodec.writePlanar(out, computed);
+                write.write(out, computed);
             });
         }
         return computed;
+    }
+
+    /** The entry derived from {@code layer}, when its file holds the same key and {@code read} accepts it. */
+    private <T> Optional<T> lookup(RegionLayer layer, String kind, String what, CacheFile.PayloadReader<Optional<T>> read) {
+        Optional<String> key = entryKey(layer, what);
+        if (key.isEmpty()) {
+            return Optional.empty();
+        }
+        return CacheFile.read(entryFile(layer, kind, key.get()), kind, FORMAT, in -> {
+            keyed(in, key.get());
+            return read.read(in);
+        }).flatMap(value -> value);
     }
 
     private Optional<String> entryKey(RegionLayer layer, String what) {

@@ -28,9 +28,12 @@ record MapPictures(String webSvg, byte[] printSvg, byte[] pdf, byte[] png, byte[
                 (byte[]) drawn.get(4));
     }
 
-    /** How many maps to draw at once: the parallelism of the pool the caller runs in. */
+    /**
+     * How many maps to draw at once: the parallelism of the pool the caller runs in, plus the calling thread
+     * when it is not one of the pool's (it takes part in the work of its parallel streams).
+     */
     static int mapsAtOnce() {
-        ForkJoinPool pool = ForkJoinTask.inForkJoinPool() ? ForkJoinTask.getPool() : ForkJoinPool.commonPool();
-        return Math.max(1, pool.getParallelism());
+        return ForkJoinTask.inForkJoinPool() ? Math.max(1, ForkJoinTask.getPool().getParallelism())
+                : ForkJoinPool.getCommonPoolParallelism() + 1;
     }
 }

@@ -7,14 +7,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.FileTime;
 import java.util.Arrays;
 import java.util.List;
-import java.util.Map;
-import java.util.TreeMap;
 import java.util.stream.Stream;
 
 import org.junit.jupiter.api.BeforeEach;
@@ -39,13 +36,7 @@ class GeometryCacheTest {
     void publishOnceToFillTheCache() throws IOException {
         project = tmp.resolve("project");
         assertEquals(0, run("scaffold", project.toString()));
-        // inputs written an hour ago, so their time stamps are settled (FileStamp.SETTLE_MILLIS)
-        FileTime anHourAgo = FileTime.fromMillis(System.currentTimeMillis() - 3_600_000);
-        try (Stream<Path> files = Files.walk(project)) {
-            for (Path f : files.filter(Files::isRegularFile).toList()) {
-                Files.setLastModifiedTime(f, anHourAgo);
-            }
-        }
+        ProjectFolders.settle(project);
         assertEquals(0, run("publish", project.toString(), "--out", tmp.resolve("first").toString()), err.toString());
         assertTrue(cacheFiles().stream().anyMatch(f -> f.contains("-layer-")), "the layer is cached: " + cacheFiles());
         assertTrue(cacheFiles().stream().anyMatch(f -> f.contains("-planar-")), "the planar layer is cached: " + cacheFiles());
@@ -54,7 +45,7 @@ class GeometryCacheTest {
     @Test
     void aFiguresOnlyRebuildUsesTheCachedGeometryAndMatchesAColdBuild() throws IOException {
         changeACell(project);
-        Path cold = copyWithoutCache(project, tmp.resolve("cold-project"));
+        Path cold = ProjectFolders.copyWithoutCache(project, tmp.resolve("cold-project"));
         // the cache alone can now supply the geometry: the file keeps its size and time but cannot be read
         Path geometry = project.resolve("regions/districts.geojson");
         FileTime time = Files.getLastModifiedTime(geometry);
@@ -65,9 +56,22 @@ class GeometryCacheTest {
 
         assertEquals(0, run("publish", project.toString(), "--out", tmp.resolve("cached").toString()), err.toString());
         assertEquals(0, run("publish", cold.toString(), "--out", tmp.resolve("cold").toString()), err.toString());
-        assertEquals(contents(tmp.resolve("cold")), contents(tmp.resolve("cached")));
-        assertNotEquals(contents(tmp.resolve("first")).get("report.json"), contents(tmp.resolve("cached")).get("report.json"),
+        assertEquals(ProjectFolders.contents(tmp.resolve("cold")), ProjectFolders.contents(tmp.resolve("cached")));
+        assertNotEquals(ProjectFolders.contents(tmp.resolve("first")).get("report.json"), ProjectFolders.contents(tmp.resolve("cached")).get("report.json"),
                 "the changed figure is published");
+    }
+
+    @Test
+    void theMonthlyUpdateIntoTheSameFolderMatchesAColdProjectDoingTheSame() throws IOException {
+        // the second publish into a folder has a previous projection; the cache answers from the first choice
+        Path cold = ProjectFolders.copyWithoutCache(project, tmp.resolve("cold-project"));
+        assertEquals(0, run("publish", cold.toString(), "--out", tmp.resolve("cold").toString()), err.toString());
+        deleteTree(cold.resolve(".aequa-cache"));
+        changeACell(project);
+        changeACell(cold);
+        assertEquals(0, run("publish", project.toString(), "--out", tmp.resolve("first").toString()), err.toString());
+        assertEquals(0, run("publish", cold.toString(), "--out", tmp.resolve("cold").toString()), err.toString());
+        assertEquals(ProjectFolders.contents(tmp.resolve("cold")), ProjectFolders.contents(tmp.resolve("first")));
     }
 
     @Test
@@ -83,14 +87,14 @@ class GeometryCacheTest {
             }
         }
         assertEquals(0, run("publish", project.toString(), "--out", tmp.resolve("again").toString()), err.toString());
-        assertEquals(contents(tmp.resolve("first")), contents(tmp.resolve("again")));
+        assertEquals(ProjectFolders.contents(tmp.resolve("first")), ProjectFolders.contents(tmp.resolve("again")));
         // made again: a build with the geometry unreadable now succeeds from the repaired cache
         Path geometry = project.resolve("regions/districts.geojson");
         FileTime time = Files.getLastModifiedTime(geometry);
         Files.write(geometry, new byte[(int) Files.size(geometry)]);
         Files.setLastModifiedTime(geometry, time);
         assertEquals(0, run("publish", project.toString(), "--out", tmp.resolve("repaired").toString()), err.toString());
-        assertEquals(contents(tmp.resolve("first")), contents(tmp.resolve("repaired")));
+        assertEquals(ProjectFolders.contents(tmp.resolve("first")), ProjectFolders.contents(tmp.resolve("repaired")));
     }
 
     @Test
@@ -99,11 +103,11 @@ class GeometryCacheTest {
         // moves the corner the four districts share (the same point in each), keeping the coverage clean
         Files.writeString(geometry, Files.readString(geometry).replace("[11,46.0]", "[11,46.05]")
                 .replace("[11.0,46]", "[11.0,46.05]").replace("[11,46.0]", "[11,46.05]"));
-        Path cold = copyWithoutCache(project, tmp.resolve("cold-project"));
+        Path cold = ProjectFolders.copyWithoutCache(project, tmp.resolve("cold-project"));
         assertEquals(0, run("publish", project.toString(), "--out", tmp.resolve("cached").toString()), err.toString());
         assertEquals(0, run("publish", cold.toString(), "--out", tmp.resolve("cold").toString()), err.toString());
-        assertEquals(contents(tmp.resolve("cold")), contents(tmp.resolve("cached")));
-        assertNotEquals(contents(tmp.resolve("first")).get("report.json"), contents(tmp.resolve("cached")).get("report.json"));
+        assertEquals(ProjectFolders.contents(tmp.resolve("cold")), ProjectFolders.contents(tmp.resolve("cached")));
+        assertNotEquals(ProjectFolders.contents(tmp.resolve("first")).get("report.json"), ProjectFolders.contents(tmp.resolve("cached")).get("report.json"));
     }
 
     private int run(String... args) {
@@ -123,28 +127,11 @@ class GeometryCacheTest {
         assertNotEquals(before, Files.readString(csv));
     }
 
-    private static Path copyWithoutCache(Path from, Path to) throws IOException {
-        try (Stream<Path> walk = Files.walk(from)) {
-            for (Path p : walk.filter(p -> !p.toString().contains(".aequa-cache")).toList()) {
-                Path target = to.resolve(from.relativize(p).toString());
-                if (Files.isDirectory(p)) {
-                    Files.createDirectories(target);
-                } else {
-                    Files.copy(p, target);
-                }
+    private static void deleteTree(Path root) throws IOException {
+        try (Stream<Path> paths = Files.walk(root)) {
+            for (Path p : paths.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.delete(p);
             }
         }
-        return to;
-    }
-
-    /** Every file of a site by relative path, with its exact bytes (as ISO 8859-1 text, one char per byte). */
-    private static Map<String, String> contents(Path site) throws IOException {
-        Map<String, String> files = new TreeMap<>();
-        try (Stream<Path> walk = Files.walk(site)) {
-            for (Path p : walk.filter(Files::isRegularFile).toList()) {
-                files.put(site.relativize(p).toString(), new String(Files.readAllBytes(p), StandardCharsets.ISO_8859_1));
-            }
-        }
-        return files;
     }
 }

@@ -3,16 +3,11 @@ package aequa.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
-import java.util.TreeMap;
 import java.util.concurrent.ForkJoinPool;
-import java.util.stream.Stream;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -40,7 +35,7 @@ class ParallelOutputTest {
     }
 
     private Map<String, String> publishIn(ForkJoinPool pool, String name) throws Exception {
-        Path project = copy(Path.of("data-demo"), tmp.resolve(name + "-project"));
+        Path project = ProjectFolders.copyWithoutCache(Path.of("data-demo"), tmp.resolve(name + "-project"));
         Path site = tmp.resolve(name + "-site");
         StringWriter err = new StringWriter();
         try {
@@ -50,31 +45,6 @@ class ParallelOutputTest {
         } finally {
             pool.shutdown();
         }
-        return contents(site);
-    }
-
-    private static Path copy(Path from, Path to) throws IOException {
-        try (Stream<Path> walk = Files.walk(from)) {
-            for (Path p : walk.filter(p -> !p.toString().contains(".aequa-cache")).toList()) {
-                Path target = to.resolve(from.relativize(p).toString());
-                if (Files.isDirectory(p)) {
-                    Files.createDirectories(target);
-                } else {
-                    Files.copy(p, target);
-                }
-            }
-        }
-        return to;
-    }
-
-    /** Every file of a site by relative path, with its exact bytes (as ISO 8859-1 text, one char per byte). */
-    private static Map<String, String> contents(Path site) throws IOException {
-        Map<String, String> files = new TreeMap<>();
-        try (Stream<Path> walk = Files.walk(site)) {
-            for (Path p : walk.filter(Files::isRegularFile).toList()) {
-                files.put(site.relativize(p).toString(), new String(Files.readAllBytes(p), StandardCharsets.ISO_8859_1));
-            }
-        }
-        return files;
+        return ProjectFolders.contents(site);
     }
 }
