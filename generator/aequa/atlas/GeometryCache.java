@@ -36,7 +36,8 @@ import aequa.projection.Projections;
  * <li>a source's {@link RegionLayer} with its findings: the geometry file's bytes (SHA-256, through a
  *     {@link FileStamp} so an unchanged file is not read), its settings in the project file and aequa's
  *     code ({@link CodeStamp});</li>
- * <li>a {@link ProjectionChoice}: that layer key and the projection request;</li>
+ * <li>a {@link ProjectionChoice}: that layer key, the keys of the regions in the layer and the projection
+ *     request;</li>
  * <li>a {@link PlanarLayer}: that layer key, the projection (WKT 2), the keys of the regions projected (so a
  *     layer of part of a source, such as an inset, has its own entry) and the area tolerance.</li>
  * </ul>
@@ -109,7 +110,7 @@ final class GeometryCache {
             // parameters, so the answer is then the one made without a previous choice, which the first
             // publish stored: the monthly rebuild after it need not choose again
             ProjectionRequest.Previous previous = request.previous().get();
-            Optional<ProjectionChoice> first = lookup(layer, "choice", "choice\n" + requestText(
+            Optional<ProjectionChoice> first = lookup(layer, "choice", "choice\n" + regionsHash(layer) + "\n" + requestText(
                     new ProjectionRequest(request.family(), request.forcedParameters(), Optional.empty())),
                     in -> rebuild(GeometryCodec.readChoice(in)));
             if (first.isPresent() && first.get().projection().family() == previous.family()
@@ -118,19 +119,24 @@ final class GeometryCache {
                 return first.get();
             }
         }
-        return entry(layer, "choice", "choice\n" + requestText(request),
+        return entry(layer, "choice", "choice\n" + regionsHash(layer) + "\n" + requestText(request),
                 in -> rebuild(GeometryCodec.readChoice(in)), GeometryCodec::writeChoice, compute);
     }
 
     /** The planar layer of {@code layer} in {@code projection}, from the cache or from {@code compute}. */
     PlanarLayer planar(RegionLayer layer, EqualAreaProjection projection, double tolerance, Supplier<PlanarLayer> compute) {
-        StringBuilder regions = new StringBuilder();
-        layer.regions().forEach(r -> regions.append(r.key()).append('\n'));
         List<String> keys = layer.regions().stream().map(Region::key).toList();
-        return entry(layer, "planar", "planar\n" + projection.wkt2() + "\n" + hex(regions.toString()) + "\n"
+        return entry(layer, "planar", "planar\n" + projection.wkt2() + "\n" + regionsHash(layer) + "\n"
                         + Double.doubleToLongBits(tolerance),
                 in -> Optional.of(GeometryCodec.readPlanar(in)).filter(p -> List.copyOf(p.simplifiedM().keySet()).equals(keys)),
                 GeometryCodec::writePlanar, compute);
+    }
+
+    /** The keys of the regions a layer holds: a layer of part of a source (an inset) has entries of its own. */
+    private static String regionsHash(RegionLayer layer) {
+        StringBuilder regions = new StringBuilder();
+        layer.regions().forEach(r -> regions.append(r.key()).append('\n'));
+        return hex(regions.toString());
     }
 
     /** Writes an entry's value after its key. */
