@@ -23,6 +23,7 @@ import aequa.composite.PartPlan;
 import aequa.project.InsetsSpec;
 import aequa.projection.Footprint;
 import aequa.projection.ProjectionChoice;
+import aequa.projection.ProjectionChooser;
 import aequa.projection.ProjectionRequest;
 import aequa.statistics.MapFigures;
 import aequa.statistics.MapStatistics;
@@ -38,6 +39,7 @@ final class MapAssembler {
     private final LoadOptions options;
     private final Findings findings;
     private final RegionLayers layers;
+    private final GeometryCache cache;
     private final Map<String, FigureTable> tables = new HashMap<>();
     private final Map<String, List<PartPlan>> plans = new HashMap<>();
     private final Map<String, PlanarLayer> planarLayers = new HashMap<>();
@@ -46,7 +48,8 @@ final class MapAssembler {
         this.project = project;
         this.options = options;
         this.findings = findings;
-        this.layers = new RegionLayers(project, findings);
+        this.cache = options.geometryCache();
+        this.layers = new RegionLayers(project, findings, cache);
     }
 
     Optional<MapModel> assemble(int mapIndex, MapSpec map) {
@@ -79,7 +82,8 @@ final class MapAssembler {
         if (plans.get().size() == 1) {
             Footprint footprint = plans.get().get(0).footprint();
             planar = planarLayers.computeIfAbsent(layer.sourceId() + "|" + choice.projection().wkt2(),
-                    key -> PlanarLayer.of(layer, choice.projection(), footprint, project.file().checks().areaTolerance()));
+                    key -> cache.planar(layer, choice.projection(), project.file().checks().areaTolerance(), 1, 0,
+                            () -> PlanarLayer.of(layer, choice.projection(), footprint, project.file().checks().areaTolerance())));
         } else {
             CompositeLayers composite = CompositeLayers.of(layer, plans.get(), this::partLayer);
             planar = new PlanarLayer(composite.simplifiedM(), composite.mapAreaRatio(), composite.audit(), composite.dropped());
@@ -124,7 +128,9 @@ final class MapAssembler {
         }
         try {
             List<PartPlan> planned = CompositePlanner.plan(layer.regions(), layer.areaKm2ByKey(), insets, request,
-                    new CompositePlanner.SettingPlace(project.places(), pointer), findings);
+                    new CompositePlanner.SettingPlace(project.places(), pointer), findings,
+                    (keys, footprint, partRequest) -> cache.choice(subset(layer, keys), partRequest,
+                            () -> ProjectionChooser.choose(footprint, partRequest)));
             if (planned.isEmpty()) {
                 return Optional.empty();
             }
@@ -141,9 +147,23 @@ final class MapAssembler {
 
     /** One part's planar layer, shared by every map drawing the same regions on the same projection and scale. */
     private PlanarLayer partLayer(RegionLayer subset, PartPlan plan, Footprint drawnFootprint, double minDrawnWidthM) {
+        double tolerance = project.file().checks().areaTolerance();
         return planarLayers.computeIfAbsent(subset.sourceId() + "|" + plan.choice().projection().wkt2() + "|" + plan.areaScale(),
-                key -> PlanarLayer.of(subset, plan.choice().projection(), drawnFootprint,
-                        project.file().checks().areaTolerance(), plan.areaScale(), minDrawnWidthM));
+                key -> cache.planar(subset, plan.choice().projection(), tolerance, plan.areaScale(), minDrawnWidthM,
+                        () -> PlanarLayer.of(subset, plan.choice().projection(), drawnFootprint, tolerance,
+                                plan.areaScale(), minDrawnWidthM)));
+    }
+
+    /** The regions of {@code layer} with these keys, in the layer's order (a part's own layer, for the cache). */
+    private static RegionLayer subset(RegionLayer layer, List<String> keys) {
+        if (keys.size() == layer.regions().size()) {
+            return layer;
+        }
+        java.util.Set<String> wanted = new java.util.HashSet<>(keys);
+        List<Region> members = layer.regions().stream().filter(r -> wanted.contains(r.key())).toList();
+        Map<String, Double> areas = new java.util.LinkedHashMap<>();
+        members.forEach(r -> areas.put(r.key(), layer.areaKm2ByKey().get(r.key())));
+        return new RegionLayer(layer.sourceId(), layer.file(), members, areas);
     }
 
     /** Readers see at most this many notices of one kind; report.json keeps every finding. */

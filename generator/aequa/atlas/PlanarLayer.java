@@ -1,10 +1,10 @@
 package aequa.atlas;
 
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.stream.IntStream;
 
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
@@ -66,20 +66,18 @@ record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAre
         // thin and tiny regions get finer steps, so the drawn chords keep the true area (EdgeSteps)
         EdgeSteps steps = EdgeSteps.forLayer(layer.regions().stream().map(Region::lonLat).toList(), stepDeg,
                 tolerance * FINER_STEP_MARGIN);
-        List<String> keys = new ArrayList<>();
-        List<Geometry> planar = new ArrayList<>();
-        List<RegionAreaCheck> checks = new ArrayList<>();
-        Envelope extent = new Envelope();
-        for (Region region : layer.regions()) {
+        List<String> keys = layer.regions().stream().map(Region::key).toList();
+        // each region is densified, projected, scaled and measured alone, in parallel; the lists keep the
+        // layer's order (EdgeSteps and the transformation are only read)
+        List<Geometry> planar = layer.regions().parallelStream().map(region -> {
             Geometry projected = projector.project(LonLatDensifier.densify(region.lonLat(), steps));
-            if (scaling != null) {
-                projected = scaling.transform(projected);
-            }
-            keys.add(region.key());
-            planar.add(projected);
-            checks.add(AreaAuditor.check(region.key(), areaScale * layer.areaKm2ByKey().get(region.key()), projected));
-            extent.expandToInclude(projected.getEnvelopeInternal());
-        }
+            return scaling == null ? projected : scaling.transform(projected);
+        }).toList();
+        List<RegionAreaCheck> checks = IntStream.range(0, keys.size()).parallel()
+                .mapToObj(i -> AreaAuditor.check(keys.get(i), areaScale * layer.areaKm2ByKey().get(keys.get(i)), planar.get(i)))
+                .toList();
+        Envelope extent = new Envelope();
+        planar.forEach(projected -> extent.expandToInclude(projected.getEnvelopeInternal()));
         AreaAudit audit = AreaAuditor.audit(checks, tolerance);
         double widthM = Math.max(Math.max(extent.getWidth(), extent.getHeight()), minDrawnWidthM);
         double toleranceM = Math.min(CoverageSimplification.screenToleranceM(widthM, WEB_WIDTH_PX),

@@ -9,6 +9,7 @@ import aequa.atlas.AtlasLoader;
 import aequa.atlas.LoadOptions;
 import aequa.atlas.MapModel;
 import aequa.findings.Findings;
+import aequa.inputs.CacheFolder;
 import aequa.project.LoadedProject;
 import aequa.project.ProjectLoader;
 import picocli.CommandLine.Command;
@@ -36,7 +37,8 @@ final class AuditCommand implements Callable<Integer> {
             FindingsPrinter.print(findings.list(), err, true);
             return ExitCode.USAGE.code;
         }
-        Atlas atlas = AtlasLoader.load(project.get(), LoadOptions.defaults(), findings);
+        Atlas atlas = AtlasLoader.load(project.get(),
+                LoadOptions.defaults().withCache(CacheFolder.of(project.get().dir()), LoadOptions.CacheUse.READ), findings);
         FindingsPrinter.print(findings.list(), err, true);
         var out = spec.commandLine().getOut();
         for (MapModel map : atlas.maps()) {

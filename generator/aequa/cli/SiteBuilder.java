@@ -14,10 +14,12 @@ import aequa.drawing.Theme;
 import aequa.drawing.Themes;
 import aequa.findings.Finding;
 import aequa.findings.Findings;
+import aequa.inputs.CacheFolder;
 import aequa.project.LoadedProject;
 import aequa.project.ProjectFile;
 import aequa.project.ProjectLoader;
 import aequa.publish.DrawingArtwork;
+import aequa.publish.LastPublish;
 import aequa.publish.PreviousProjections;
 import aequa.publish.PublishOptions;
 import aequa.publish.PublishProgress;
@@ -30,7 +32,8 @@ import aequa.publish.SitePublisher;
 /**
  * One whole build, as {@code publish} and {@code preview} run it: load the project (step 1), stop with the
  * findings if the data has errors, otherwise publish (step 2). Returns the exit code; writes nothing at all
- * when it fails.
+ * when it fails. When the inputs, aequa and the output are exactly as the last publish left them
+ * ({@link LastPublish}), it says so and stops before step 1.
  */
 final class SiteBuilder {
 
@@ -54,6 +57,12 @@ final class SiteBuilder {
             return ExitCode.USAGE;
         }
         LoadedProject project = loaded.get();
+        LastPublish last = LastPublish.check(project, outDir);
+        if (last.unchanged()) {
+            out.println("Nothing changed since the last publish (inputs, themes, templates and aequa are the same): "
+                    + outDir + " was left as it was.");
+            return ExitCode.OK;
+        }
         Findings setup = new Findings();
         Theme theme = Themes.load(project.dir(), project.file().site().theme(), setup);
         Theme printTheme = Themes.load(project.dir(), project.file().site().printTheme(), setup);
@@ -67,7 +76,7 @@ final class SiteBuilder {
             return ExitCode.USAGE;
         }
         try (SiteLock lock = SiteLock.acquire(outDir, lockWait)) {
-            return loadAndPublish(project, theme, printTheme, printSize.get(), lock, findings, showProgress);
+            return loadAndPublish(project, theme, printTheme, printSize.get(), lock, last, findings, showProgress);
         } catch (SiteLockedException e) {
             err.println("aequa: " + e.getMessage());
             return ExitCode.LOCKED;
@@ -78,9 +87,11 @@ final class SiteBuilder {
     }
 
     private ExitCode loadAndPublish(LoadedProject project, Theme theme, Theme printTheme, PrintSize printSize,
-                                    SiteLock lock, Findings findings, boolean showProgress) throws IOException {
+                                    SiteLock lock, LastPublish last, Findings findings, boolean showProgress)
+            throws IOException {
         Path outDir = lock.outDir();
-        LoadOptions options = new LoadOptions(theme.colours().background(), PreviousProjections.read(outDir));
+        LoadOptions options = new LoadOptions(theme.colours().background(), PreviousProjections.read(outDir))
+                .withCache(CacheFolder.of(project.dir()), LoadOptions.CacheUse.READ_AND_STORE);
         Atlas atlas = AtlasLoader.load(project, options, findings);
         FindingsPrinter.print(findings.list(), err, false, FindingsPrinter.SHOWN_PER_KIND, "; `aequa audit` lists every one");
         if (findings.hasErrors()) {
@@ -92,6 +103,7 @@ final class SiteBuilder {
         PublishOptions publishOptions = PublishOptions.defaults()
                 .withProgress(showProgress ? PublishProgress.forTerminal(System.err) : PublishProgress.silent());
         PublishResult result = SitePublisher.publish(atlas, findings.list(), artwork, lock, publishOptions);
+        last.record(outDir);
         FindingsPrinter.print(artwork.preflightFindings(), err, false);
         for (var map : atlas.maps()) {
             out.println(MapSummary.line(map));

@@ -33,6 +33,15 @@ import aequa.projection.ProjectionRequest;
  */
 public final class CompositePlanner {
 
+    /**
+     * Chooses a part's projection: {@link ProjectionChooser#choose} by default; the load step passes one that
+     * first asks its geometry cache, keyed by the part's regions and the request.
+     */
+    @FunctionalInterface
+    public interface PartChooser {
+        ProjectionChoice choose(List<String> keys, Footprint footprint, ProjectionRequest request);
+    }
+
     /** Where findings about a listed part point: the project file's places and the setting's JSON Pointer. */
     public record SettingPlace(ProjectPlaces places, String pointer) {
     }
@@ -46,6 +55,14 @@ public final class CompositePlanner {
      */
     public static List<PartPlan> plan(List<Region> regions, Map<String, Double> areaKm2ByKey, InsetsSpec insets,
                                       ProjectionRequest request, SettingPlace place, Findings findings) {
+        return plan(regions, areaKm2ByKey, insets, request, place, findings,
+                (keys, footprint, partRequest) -> ProjectionChooser.choose(footprint, partRequest));
+    }
+
+    /** As {@link #plan(List, Map, InsetsSpec, ProjectionRequest, SettingPlace, Findings)}, choosing through {@code chooser}. */
+    public static List<PartPlan> plan(List<Region> regions, Map<String, Double> areaKm2ByKey, InsetsSpec insets,
+                                      ProjectionRequest request, SettingPlace place, Findings findings,
+                                      PartChooser chooser) {
         Function<List<String>, Double> area = keys -> keys.stream().mapToDouble(areaKm2ByKey::get).sum();
         boolean forced = request.family().isPresent() || !request.forcedParameters().isEmpty();
         List<Group> groups = new ArrayList<>();
@@ -71,7 +88,7 @@ public final class CompositePlanner {
             Group g = groups.get(i);
             List<Region> members = g.keys.stream().map(byKey::get).toList();
             Footprint footprint = Footprint.of(members.stream().map(Region::lonLat).toList());
-            ProjectionChoice choice = ProjectionChooser.choose(footprint, i == 0 ? request : ProjectionRequest.automatic());
+            ProjectionChoice choice = chooser.choose(g.keys, footprint, i == 0 ? request : ProjectionRequest.automatic());
             String name = !g.name.isEmpty() ? g.name : i == 0 ? "Main map"
                     : defaultName(members, areaKm2ByKey, g.gapKm, parts.get(0).footprint(), footprint);
             parts.add(new PartPlan(i == 0 ? "main" : "part-" + i, name, g.keys, i == 0, g.areaScale, g.corner,

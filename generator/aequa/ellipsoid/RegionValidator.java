@@ -4,7 +4,9 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.Set;
+import java.util.stream.IntStream;
 
 import org.locationtech.jts.algorithm.Orientation;
 import org.locationtech.jts.geom.Coordinate;
@@ -53,38 +55,54 @@ public final class RegionValidator {
      * @return the usable regions in input order, each a valid Polygon or MultiPolygon in RFC 7946 form
      */
     public static List<Region> validate(List<Region> regions, String file, Findings findings) {
+        // duplicates depend on order, so they are found first; the regions are then checked in parallel
+        // (each one alone) and their findings merged in input order, the same whatever the parallelism
         Set<String> keys = new HashSet<>();
+        boolean[] duplicate = new boolean[regions.size()];
+        for (int i = 0; i < regions.size(); i++) {
+            duplicate[i] = !keys.add(regions.get(i).key());
+        }
+        List<Checked> checked = IntStream.range(0, regions.size()).parallel()
+                .mapToObj(i -> check(regions.get(i), duplicate[i], file)).toList();
         List<Region> usable = new ArrayList<>(regions.size());
-        for (Region region : regions) {
-            String place = "feature \"" + region.key() + "\"";
-            if (!keys.add(region.key())) {
-                findings.add(Finding.error("region-key-duplicate", file, place,
-                        "Another feature has the same key; only the first one is used.",
-                        "Give every region its own key, or merge the duplicates into one MultiPolygon."));
-                continue;
-            }
-            Geometry geometry = region.lonLat();
-            if (geometry.isEmpty()) {
-                findings.add(Finding.warning("geometry-missing", file, place,
-                        "The feature has no geometry (null or empty), so it cannot be drawn and was left out.",
-                        "Add the region's outline, or remove the feature."));
-                continue;
-            }
-            Coordinate outside = firstOutOfRange(geometry);
-            if (outside != null) {
-                findings.add(Finding.error("coordinates-out-of-range", file, place,
-                        String.format(Locale.ROOT, "It has the position (%s, %s), outside longitude -180..180 and latitude -90..90.",
-                                outside.x, outside.y),
-                        "The file may be in a projected coordinate system; GeoJSON must be WGS 84 longitude/latitude (RFC 7946, section 4)."));
-                continue;
-            }
-            Geometry repaired = repair(geometry, file, place, findings);
-            if (repaired.isEmpty()) {
-                continue;
-            }
-            usable.add(new Region(region.key(), region.name(), repaired));
+        for (Checked c : checked) {
+            findings.addAll(c.findings());
+            c.usable().ifPresent(usable::add);
         }
         return usable;
+    }
+
+    /** One region's outcome: the region in RFC 7946 form, or nothing, and what was found. */
+    private record Checked(Optional<Region> usable, Findings findings) {
+    }
+
+    private static Checked check(Region region, boolean duplicate, String file) {
+        Findings findings = new Findings();
+        String place = "feature \"" + region.key() + "\"";
+        if (duplicate) {
+            findings.add(Finding.error("region-key-duplicate", file, place,
+                    "Another feature has the same key; only the first one is used.",
+                    "Give every region its own key, or merge the duplicates into one MultiPolygon."));
+            return new Checked(Optional.empty(), findings);
+        }
+        Geometry geometry = region.lonLat();
+        if (geometry.isEmpty()) {
+            findings.add(Finding.warning("geometry-missing", file, place,
+                    "The feature has no geometry (null or empty), so it cannot be drawn and was left out.",
+                    "Add the region's outline, or remove the feature."));
+            return new Checked(Optional.empty(), findings);
+        }
+        Coordinate outside = firstOutOfRange(geometry);
+        if (outside != null) {
+            findings.add(Finding.error("coordinates-out-of-range", file, place,
+                    String.format(Locale.ROOT, "It has the position (%s, %s), outside longitude -180..180 and latitude -90..90.",
+                            outside.x, outside.y),
+                    "The file may be in a projected coordinate system; GeoJSON must be WGS 84 longitude/latitude (RFC 7946, section 4)."));
+            return new Checked(Optional.empty(), findings);
+        }
+        Geometry repaired = repair(geometry, file, place, findings);
+        return new Checked(repaired.isEmpty() ? Optional.empty()
+                : Optional.of(new Region(region.key(), region.name(), repaired)), findings);
     }
 
     private static Geometry repair(Geometry geometry, String file, String place, Findings findings) {

@@ -73,26 +73,10 @@ public final class ProjectionChooser {
         double step = roundingStepDeg(footprint);
         FootprintSamples search = footprint.samples().thinned(SEARCH_SAMPLES);
         FootprintSamples latitudes = footprint.samples().byLatitude(SEARCH_SAMPLES);
-        List<Evaluated> evaluated = new ArrayList<>();
-        for (ProjectionFamily family : families) {
-            // normal conic and cylindrical maps distort alike all along a parallel (Snyder 1987, chapters 10
-            // and 14), so their search needs one sample per latitude only
-            boolean latitudeOnly = family == ProjectionFamily.ALBERS_CONIC || family == ProjectionFamily.CYLINDRICAL;
-            FootprintSamples samples = latitudeOnly ? latitudes : search;
-            Evaluated best = evaluate(family, new FamilySearch(family, footprint, samples, forced, step).run(), request, footprint);
-            if (family == ProjectionFamily.ALBERS_CONIC && nearPole(footprint) && !forced.containsKey(FamilyDefinitions.STANDARD_PARALLEL_1)) {
-                // the limiting conic: one standard parallel at the pole, the other searched (issue #16)
-                Map<String, Double> atPole = new java.util.HashMap<>(forced);
-                atPole.put(FamilyDefinitions.STANDARD_PARALLEL_1, footprint.midLatDeg() >= 0 ? 90.0 : -90.0);
-                Evaluated limiting = evaluate(family, new FamilySearch(family, footprint, samples, atPole, step).run(), request, footprint);
-                if (best == null || limiting != null && limiting.score.score() < best.score.score()) {
-                    best = limiting;
-                }
-            }
-            if (best != null) {
-                evaluated.add(best);
-            }
-        }
+        // the families are searched and scored in parallel, each alone; the list keeps their order
+        List<Evaluated> evaluated = families.parallelStream()
+                .map(family -> bestOfFamily(family, footprint, request, forced, step, search, latitudes))
+                .filter(java.util.Objects::nonNull).collect(java.util.stream.Collectors.toCollection(ArrayList::new));
         evaluated.sort(Comparator.comparingDouble((Evaluated e) -> e.score.score()).thenComparing(e -> e.projection.family()));
         Evaluated chosen = mostConventionalNearBest(evaluated);
         ChoiceReason.Basis basis = request.family().isPresent() ? ChoiceReason.Basis.FORCED : ChoiceReason.Basis.AUTOMATIC;
@@ -114,6 +98,27 @@ public final class ProjectionChooser {
         return new ProjectionChoice(chosen.projection, chosen.score.omegaMaxDeg(), chosen.score.omegaMeanDeg(),
                 chosen.score.worstLonDeg(), chosen.score.worstLatDeg(), runnersUp, reason,
                 DistortionSpread.of(chosen.projection, footprint, chosen.score.worstLonDeg(), chosen.score.worstLatDeg()));
+    }
+
+    /** The best of one family for the footprint, or null when no allowed values were found. */
+    private static Evaluated bestOfFamily(ProjectionFamily family, Footprint footprint, ProjectionRequest request,
+                                          Map<String, Double> forced, double step, FootprintSamples search,
+                                          FootprintSamples latitudes) {
+        // normal conic and cylindrical maps distort alike all along a parallel (Snyder 1987, chapters 10
+        // and 14), so their search needs one sample per latitude only
+        boolean latitudeOnly = family == ProjectionFamily.ALBERS_CONIC || family == ProjectionFamily.CYLINDRICAL;
+        FootprintSamples samples = latitudeOnly ? latitudes : search;
+        Evaluated best = evaluate(family, new FamilySearch(family, footprint, samples, forced, step).run(), request, footprint);
+        if (family == ProjectionFamily.ALBERS_CONIC && nearPole(footprint) && !forced.containsKey(FamilyDefinitions.STANDARD_PARALLEL_1)) {
+            // the limiting conic: one standard parallel at the pole, the other searched
+            Map<String, Double> atPole = new java.util.HashMap<>(forced);
+            atPole.put(FamilyDefinitions.STANDARD_PARALLEL_1, footprint.midLatDeg() >= 0 ? 90.0 : -90.0);
+            Evaluated limiting = evaluate(family, new FamilySearch(family, footprint, samples, atPole, step).run(), request, footprint);
+            if (best == null || limiting != null && limiting.score.score() < best.score.score()) {
+                best = limiting;
+            }
+        }
+        return best;
     }
 
     /** The family with these values, scored on all of the footprint's samples; null when the values are not allowed. */

@@ -1,8 +1,9 @@
 package aequa.publish;
 
 import java.nio.charset.StandardCharsets;
-import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentSkipListMap;
 
 import aequa.atlas.MapModel;
 import aequa.drawing.DrawOptions;
@@ -16,7 +17,8 @@ import aequa.findings.Finding;
 
 /**
  * The pictures of each map, drawn by the drawing stage in one theme. Every print drawing passes the print
- * preflight before it is handed over; what the preflight finds is kept for the terminal summary.
+ * preflight before it is handed over; what the preflight finds is kept for the terminal summary. Safe to
+ * use from several threads at once.
  */
 public final class DrawingArtwork implements MapArtwork {
 
@@ -24,8 +26,9 @@ public final class DrawingArtwork implements MapArtwork {
     private final Theme printTheme;
     private final PrintSize printSize;
     private final String version;
-    private final List<Finding> preflight = new ArrayList<>();
-    private String fingerprint;
+    /** What the print preflight found, by map id (maps are drawn in parallel; the order stays stable). */
+    private final Map<String, List<Finding>> preflight = new ConcurrentSkipListMap<>();
+    private volatile String fingerprint;
 
     /**
      * @param theme      the site's theme, for web maps and PNGs
@@ -49,7 +52,7 @@ public final class DrawingArtwork implements MapArtwork {
     @Override
     public byte[] printSvg(MapModel map) {
         DrawnMap drawn = MapDrawings.printSvg(map, printTheme, printSize);
-        preflight.addAll(PrintPreflight.check(map, printTheme, drawn, "maps/" + map.id() + "/" + map.id() + ".svg"));
+        preflight.put(map.id(), PrintPreflight.check(map, printTheme, drawn, "maps/" + map.id() + "/" + map.id() + ".svg"));
         return drawn.bytes();
     }
 
@@ -72,8 +75,11 @@ public final class DrawingArtwork implements MapArtwork {
         return fingerprint;
     }
 
-    /** What the print preflight found in the drawings made so far (maps carried over are not redrawn). */
+    /**
+     * What the print preflight found in the drawings made so far (maps carried over are not redrawn), map
+     * by map in the order of their ids.
+     */
     public List<Finding> preflightFindings() {
-        return List.copyOf(preflight);
+        return preflight.values().stream().flatMap(List::stream).toList();
     }
 }

@@ -11,7 +11,8 @@ import aequa.atlas.MapModel;
  * scripts) with a {@code viewBox}, role/aria labelling, a legend and a caption inside, and one element
  * with {@code id="r-KEY"} per drawn region. Every piece of user text in it must already be XML-escaped:
  * the page inserts it as trusted markup. Implementations must be deterministic (same model, same bytes)
- * and may be called from one thread at a time.
+ * and safe to call from several threads at once: a publish draws the formats of a map, and several maps,
+ * at the same time.
  */
 public interface MapArtwork {
 

@@ -8,10 +8,13 @@ import java.util.Map;
 import java.util.TreeMap;
 import java.util.stream.Stream;
 
+import aequa.inputs.CacheFolder;
+
 /**
  * Size and modification time of every file in a project folder, to notice edits by polling (portable and
  * recursive, unlike the JDK's WatchService, which watches one folder at a time and on some systems polls
- * anyway). The output folder and its staging siblings are left out when they lie inside the project.
+ * anyway). The output folder and its staging siblings are left out when they lie inside the project, and so
+ * is the project's cache folder, which every build writes.
  */
 record ProjectSnapshot(Map<String, String> files) {
 
@@ -19,9 +22,10 @@ record ProjectSnapshot(Map<String, String> files) {
         Map<String, String> files = new TreeMap<>();
         Path out = outDir.toAbsolutePath().normalize();
         String outName = out.getFileName().toString();
+        Path cache = CacheFolder.of(projectDir.toAbsolutePath().normalize());
         try (Stream<Path> walk = Files.walk(projectDir.toAbsolutePath().normalize())) {
             walk.filter(Files::isRegularFile)
-                    .filter(p -> !p.startsWith(out) && !isStagingOf(p, out, outName))
+                    .filter(p -> !p.startsWith(out) && !isStagingOf(p, out, outName) && !p.startsWith(cache))
                     .forEach(p -> files.put(p.toString(), stamp(p)));
         } catch (IOException | UncheckedIOException e) {
             files.put("", "unreadable: " + e.getMessage()); // changes when it becomes readable again

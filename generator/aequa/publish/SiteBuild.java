@@ -12,6 +12,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
+import java.util.stream.IntStream;
 import java.util.stream.Stream;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -83,11 +84,22 @@ final class SiteBuild {
             staging = folder;
             int count = atlas.maps().size();
             Sha256 edition = new Sha256();
-            for (int i = 0; i < count; i++) {
-                progress.step(Stage.MAPS, i, count);
-                String fingerprint = MapFingerprint.of(atlas.maps().get(i));
-                edition.add(files.get(i).fileId()).add(fingerprint);
-                buildMap(atlas.maps().get(i), fingerprint, files.get(i), renderer, site, siteHash);
+            List<String> fingerprints = IntStream.range(0, count).parallel()
+                    .mapToObj(i -> MapFingerprint.of(atlas.maps().get(i))).toList();
+            List<String> drawHashes = fingerprints.stream().map(this::drawHash).toList();
+            int atOnce = MapPictures.mapsAtOnce();
+            for (int first = 0; first < count; first += atOnce) {
+                // the maps of a batch are drawn at the same time; their files are written one map after another
+                List<Optional<MapPictures>> pictures = IntStream.range(first, Math.min(count, first + atOnce)).parallel()
+                        .mapToObj(i -> reusable(files.get(i).drawn(), drawHashes.get(i)) ? Optional.<MapPictures>empty()
+                                : Optional.of(MapPictures.draw(artwork, atlas.maps().get(i), options.pngWidthPx())))
+                        .toList();
+                for (int i = first; i < Math.min(count, first + atOnce); i++) {
+                    progress.step(Stage.MAPS, i, count);
+                    edition.add(files.get(i).fileId()).add(fingerprints.get(i));
+                    buildMap(atlas.maps().get(i), drawHashes.get(i), pictures.get(i - first), files.get(i),
+                            renderer, site, siteHash);
+                }
             }
             progress.step(Stage.MAPS, count, count);
 
@@ -139,25 +151,28 @@ final class SiteBuild {
         }
     }
 
-    private void buildMap(MapModel map, String fingerprint, MapFiles files, PageRenderer renderer, SiteView site,
-                          String siteHash) throws IOException {
-        String drawHash = new Sha256().add(fingerprint).add(artwork.fingerprint())
-                .add(Integer.toString(options.pngWidthPx())).hex();
+    private String drawHash(String fingerprint) {
+        return new Sha256().add(fingerprint).add(artwork.fingerprint()).add(Integer.toString(options.pngWidthPx())).hex();
+    }
+
+    private void buildMap(MapModel map, String drawHash, Optional<MapPictures> drawn, MapFiles files,
+                          PageRenderer renderer, SiteView site, String siteHash) throws IOException {
         String pageHash = new Sha256().add(drawHash).add(siteHash).hex();
         String webSvg = null;
-        if (reusable(files.drawn(), drawHash)) {
+        if (drawn.isEmpty()) {
             files.drawn().forEach(path -> carryOver(path, drawHash));
             mapsReused.add(map.id());
         } else {
-            webSvg = artwork.webSvg(map);
+            MapPictures pictures = drawn.get();
+            webSvg = pictures.webSvg();
             if (webSvg.toLowerCase(Locale.ROOT).contains("<script")) {
                 throw new IllegalStateException("the web SVG of map " + map.id() + " contains a script; refusing to inline it");
             }
             write(files.webSvg(), utf8(webSvg), drawHash);
-            write(files.printSvg(), artwork.printSvg(map), drawHash);
-            write(files.pdf(), artwork.pdf(map), drawHash);
-            write(files.png(), artwork.png(map, options.pngWidthPx(), 1), drawHash);
-            write(files.pngDouble(), artwork.png(map, options.pngWidthPx(), 2), drawHash);
+            write(files.printSvg(), pictures.printSvg(), drawHash);
+            write(files.pdf(), pictures.pdf(), drawHash);
+            write(files.png(), pictures.png(), drawHash);
+            write(files.pngDouble(), pictures.pngDouble(), drawHash);
             mapsDrawn.add(map.id());
         }
         if (reusable(files.written(), pageHash)) {

@@ -1,0 +1,39 @@
+package aequa.publish;
+
+import java.util.List;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.ForkJoinTask;
+import java.util.function.Supplier;
+
+import aequa.atlas.MapModel;
+
+/**
+ * The five pictures of one map, drawn at the same time: web SVG, print SVG, PDF, PNG and 2x PNG are
+ * independent, so each goes to its own task of the fork/join pool the publish runs in (the common pool
+ * unless the caller runs it inside another). The result does not depend on how many run at once.
+ *
+ * @param webSvg    the web SVG, inlined in the map's page
+ * @param printSvg  the print SVG file
+ * @param pdf       the print PDF
+ * @param png       the PNG
+ * @param pngDouble the PNG at twice the pixels
+ */
+record MapPictures(String webSvg, byte[] printSvg, byte[] pdf, byte[] png, byte[] pngDouble) {
+
+    static MapPictures draw(MapArtwork artwork, MapModel map, int pngWidthPx) {
+        List<Supplier<Object>> formats = List.of(() -> artwork.webSvg(map), () -> artwork.printSvg(map),
+                () -> artwork.pdf(map), () -> artwork.png(map, pngWidthPx, 1), () -> artwork.png(map, pngWidthPx, 2));
+        List<Object> drawn = formats.parallelStream().map(Supplier::get).toList();
+        return new MapPictures((String) drawn.get(0), (byte[]) drawn.get(1), (byte[]) drawn.get(2), (byte[]) drawn.get(3),
+                (byte[]) drawn.get(4));
+    }
+
+    /**
+     * How many maps to draw at once: the parallelism of the pool the caller runs in, plus the calling thread
+     * when it is not one of the pool's (it takes part in the work of its parallel streams).
+     */
+    static int mapsAtOnce() {
+        return ForkJoinTask.inForkJoinPool() ? Math.max(1, ForkJoinTask.getPool().getParallelism())
+                : ForkJoinPool.getCommonPoolParallelism() + 1;
+    }
+}
