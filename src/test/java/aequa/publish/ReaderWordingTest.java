@@ -9,40 +9,55 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 
-import aequa.atlas.MapModel;
-
+import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
+import aequa.atlas.MapModel;
+
 /** What readers of a first edition read: no build findings on the map page, plain words elsewhere. */
 class ReaderWordingTest {
+
+    @TempDir
+    static Path tmp;
+
+    /** The first edition of a one-map choropleth site, published once for the tests that read it. */
+    private static Map<String, byte[]> choroplethSite;
+
+    @BeforeAll
+    static void publishChoropleth() throws IOException {
+        choroplethSite = publish(tmp.resolve("choropleth"), SiteFixtures.map("map-a", SiteFixtures.Texts.plain(), 12, 0.0));
+    }
+
+    private static Map<String, byte[]> publish(Path dir, MapModel map) throws IOException {
+        Path out = dir.resolve("site");
+        SitePublisher.publish(SiteFixtures.atlas(dir.resolve("project"), SiteFixtures.Texts.plain(), List.of(map)),
+                new FakeArtwork(), out, PublishOptions.defaults());
+        return PublishTestSupport.files(out);
+    }
+
+    private static String page(Map<String, byte[]> site, String name) {
+        return new String(site.get(name), StandardCharsets.UTF_8);
+    }
 
     /**
      * The checks' findings about a map (here the fixture's "One region has no figure.") are for the author:
      * the method page lists them, the map's own page does not; the author's notes stay on the map page.
      */
     @Test
-    void findingsGoToTheMethodPageNotTheMapPage(@TempDir Path tmp) throws IOException {
-        Path out = tmp.resolve("site");
-        SitePublisher.publish(SiteFixtures.atlas(tmp.resolve("project"), SiteFixtures.Texts.plain(), 1, 12),
-                new FakeArtwork(), out, PublishOptions.defaults());
-        Map<String, byte[]> site = PublishTestSupport.files(out);
-        String mapPage = new String(site.get("maps/map-a/index.html"), StandardCharsets.UTF_8);
-        String method = new String(site.get("method.html"), StandardCharsets.UTF_8);
+    void findingsGoToTheMethodPageNotTheMapPage() {
+        String mapPage = page(choroplethSite, "maps/map-a/index.html");
+        String method = page(choroplethSite, "method.html");
         assertFalse(mapPage.contains("One region has no figure."), mapPage);
         assertTrue(mapPage.contains("Figures are invented."), "the author's notes stay with the map");
         assertTrue(method.contains("<li>One region has no figure.</li>"), method);
     }
 
     @Test
-    void firstEditionSaysSoAndTheSummaryNamesWhatColoursShow(@TempDir Path tmp) throws IOException {
-        Path out = tmp.resolve("site");
-        SitePublisher.publish(SiteFixtures.atlas(tmp.resolve("project"), SiteFixtures.Texts.plain(), 1, 12),
-                new FakeArtwork(), out, PublishOptions.defaults());
-        Map<String, byte[]> site = PublishTestSupport.files(out);
-        String changes = new String(site.get("changes.html"), StandardCharsets.UTF_8);
+    void firstEditionSaysSoAndTheSummaryNamesWhatColoursShow() {
+        String changes = page(choroplethSite, "changes.html");
         assertFalse(changes.contains("No map changed"), "a first edition has nothing to compare with: " + changes);
-        String mapPage = new String(site.get("maps/map-a/index.html"), StandardCharsets.UTF_8);
+        String mapPage = page(choroplethSite, "maps/map-a/index.html");
         assertTrue(mapPage.contains(">Downloads</h2>"), mapPage);
         assertTrue(mapPage.contains("the colour of each region shows the figure (clinics per 1,000 people)"), mapPage);
         assertFalse(mapPage.contains("coloured by per"), mapPage);
@@ -50,12 +65,9 @@ class ReaderWordingTest {
 
     /** A circle map's key speaks of circle areas, never of colours, and names what the largest circle stands for. */
     @Test
-    void circleMapsHaveACircleKeyNotAColourKey(@TempDir Path tmp) throws IOException {
-        Path out = tmp.resolve("site");
+    void circleMapsHaveACircleKeyNotAColourKey() throws IOException {
         MapModel circles = SiteFixtures.map("map-a", SiteFixtures.Texts.plain(), 12, 0.0, "circles");
-        SitePublisher.publish(SiteFixtures.atlas(tmp.resolve("project"), SiteFixtures.Texts.plain(), List.of(circles)),
-                new FakeArtwork(), out, PublishOptions.defaults());
-        String mapPage = new String(PublishTestSupport.files(out).get("maps/map-a/index.html"), StandardCharsets.UTF_8);
+        String mapPage = page(publish(tmp.resolve("circles"), circles), "maps/map-a/index.html");
         assertFalse(mapPage.contains("Colour key"), mapPage);
         assertFalse(mapPage.contains("key-swatch"), mapPage);
         // the fixture's largest figure is 110 (region 11: 10 x 11), the unit "clinics per 1,000 people"
