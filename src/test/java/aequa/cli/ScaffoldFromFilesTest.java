@@ -1,0 +1,170 @@
+package aequa.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+import org.dhatim.fastexcel.Workbook;
+import org.dhatim.fastexcel.Worksheet;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+import aequa.findings.Findings;
+import aequa.inputs.regions.Region;
+import aequa.inputs.regions.RegionReaders;
+import aequa.inputs.regions.ShapefileFixture;
+import aequa.project.RegionSourceSpec;
+
+/**
+ * {@code scaffold DIR --regions FILE --figures FILE} on real data: the US states of the Census Bureau's 2017
+ * cartographic boundary file (src/test/resources/geometry, SOURCE.md there), whose features carry the 2-digit
+ * state FIPS code (FIPS PUB 5-2: "01" Alabama ... "56" Wyoming) as property {@code id}, and figures counted from the
+ * county file of the same source (counties and equivalents per state, property {@code state_fips}).
+ */
+class ScaffoldFromFilesTest {
+
+    private static final Path GEOMETRY = Path.of("src/test/resources/geometry");
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    private final StringWriter out = new StringWriter();
+    private final StringWriter err = new StringWriter();
+
+    private int run(String... args) {
+        return Main.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+    }
+
+    @Test
+    void fipsKeyedFiguresJoinOnTheFipsPropertyAndTheProjectPublishes(@TempDir Path tmp) throws IOException {
+        Path csv = tmp.resolve("counties.csv");
+        Files.writeString(csv, figuresCsv(false));
+        Path project = tmp.resolve("project");
+
+        assertEquals(0, run("scaffold", project.toString(), "--regions", GEOMETRY.resolve("us-states-2017.geojson").toString(),
+                "--figures", csv.toString()), err.toString());
+
+        String yaml = Files.readString(project.resolve("aequa.yaml"));
+        assertTrue(yaml.contains("key: \"id\""), yaml); // the FIPS property, not the name
+        assertTrue(yaml.contains("key: \"GEOID\""), yaml);
+        assertTrue(yaml.contains("indicator: \"counties\""), yaml);
+        assertFalse(yaml.contains("key-matching"), yaml);
+        assertTrue(Files.isRegularFile(project.resolve("regions/us-states-2017.geojson")));
+        assertTrue(Files.isRegularFile(project.resolve("figures/counties.csv")));
+        // 56 features: 50 states, DC and the territories; every one has a county count in the county file
+        assertTrue(out.toString().contains("56 of 56 regions matched on key = id (regions) and GEOID (figures)"), out.toString());
+
+        assertEquals(0, run("publish", project.toString(), "--out", tmp.resolve("site").toString()), err.toString());
+        assertTrue(Files.isRegularFile(tmp.resolve("site/index.html")));
+    }
+
+    @Test
+    void keysThatLostTheirLeadingZerosAreMatchedRelaxedAndSaidSo(@TempDir Path tmp) throws IOException {
+        Path csv = tmp.resolve("counties.csv");
+        Files.writeString(csv, figuresCsv(true)); // "1" for Alabama, as a spreadsheet round trip leaves it
+        Path project = tmp.resolve("project");
+
+        assertEquals(0, run("scaffold", project.toString(), "--regions", GEOMETRY.resolve("us-states-2017.geojson").toString(),
+                "--figures", csv.toString()), err.toString());
+
+        String yaml = Files.readString(project.resolve("aequa.yaml"));
+        assertTrue(yaml.contains("key: \"id\"") && yaml.contains("key-matching: relaxed"), yaml);
+        assertTrue(out.toString().contains("Only relaxed matching"), out.toString());
+        assertTrue(out.toString().contains("56 of 56 regions matched"), out.toString());
+        assertEquals(0, run("audit", project.toString()), err.toString());
+    }
+
+    @Test
+    void aShapefileWithSidecarsAndAWorkbookWithATitleRow(@TempDir Path tmp) throws IOException {
+        Path shp = Files.createDirectories(tmp.resolve("shp"));
+        List<ShapefileFixture.Feature> features = new ArrayList<>();
+        for (Region state : RegionReaders.read(GEOMETRY, new RegionSourceSpec("us-states-2017.geojson", "id", "name", ""),
+                new Findings())) {
+            features.add(new ShapefileFixture.Feature(List.of(state.name(), state.key()), state.lonLat()));
+        }
+        ShapefileFixture.write(shp, "states", List.of("NAME", "GEOID"), features, ShapefileFixture.WGS84_PRJ, "UTF-8",
+                StandardCharsets.UTF_8);
+        Path workbook = tmp.resolve("counties.xlsx");
+        writeWorkbook(countiesPerState(), workbook);
+        Path project = tmp.resolve("project");
+
+        assertEquals(0, run("scaffold", project.toString(), "--regions", shp.resolve("states.shp").toString(),
+                "--figures", workbook.toString()), err.toString());
+
+        for (String member : List.of("states.shp", "states.shx", "states.dbf", "states.prj", "states.cpg")) {
+            assertTrue(Files.isRegularFile(project.resolve("regions").resolve(member)), member);
+        }
+        String yaml = Files.readString(project.resolve("aequa.yaml"));
+        assertTrue(yaml.contains("key: \"GEOID\"") && yaml.contains("name: \"NAME\""), yaml);
+        assertTrue(yaml.contains("key: \"state\""), yaml);
+        assertTrue(out.toString().contains("56 of 56 regions matched on key = GEOID (regions) and state (figures)"),
+                out.toString());
+    }
+
+    @Test
+    void anUnsupportedFileIsAUsageErrorAndNothingIsWritten(@TempDir Path tmp) throws IOException {
+        Path ods = tmp.resolve("counties.ods");
+        Files.writeString(ods, "not read");
+        Path project = tmp.resolve("project");
+
+        assertEquals(2, run("scaffold", project.toString(), "--regions", GEOMETRY.resolve("us-states-2017.geojson").toString(),
+                "--figures", ods.toString()));
+        assertTrue(err.toString().contains("counties.ods") && err.toString().contains(".xlsx"), err.toString());
+        assertFalse(Files.exists(project));
+
+        assertEquals(2, run("scaffold", project.toString(), "--regions", GEOMETRY.resolve("areas.csv").toString(),
+                "--figures", ods.toString()));
+        assertTrue(err.toString().contains("areas.csv"), err.toString());
+        assertEquals(2, run("scaffold", project.toString(), "--regions", GEOMETRY.resolve("us-states-2017.geojson").toString()));
+        assertFalse(Files.exists(project));
+    }
+
+    /** GEOID (2-digit FIPS, or without its leading zero) and the number of counties of each state. */
+    private static String figuresCsv(boolean zerosLost) throws IOException {
+        StringBuilder csv = new StringBuilder("GEOID,counties\n");
+        countiesPerState().forEach((fips, n) -> csv.append(zerosLost ? String.valueOf(Integer.parseInt(fips)) : fips)
+                .append(',').append(n).append('\n'));
+        return csv.toString();
+    }
+
+    /** The number of counties and equivalents per state FIPS code in the county file of the same source. */
+    private static Map<String, Integer> countiesPerState() throws IOException {
+        Map<String, Integer> counts = new TreeMap<>();
+        for (JsonNode county : JSON.readTree(GEOMETRY.resolve("us-counties-2017.geojson").toFile()).path("features")) {
+            counts.merge(county.path("properties").path("state_fips").asText(), 1, Integer::sum);
+        }
+        return counts;
+    }
+
+    /** A title row (merged over two cells) above the table, as analysts keep workbooks. */
+    private static void writeWorkbook(Map<String, Integer> counties, Path file) throws IOException {
+        try (OutputStream stream = Files.newOutputStream(file)) {
+            Workbook workbook = new Workbook(stream, "aequa-test", "1.0");
+            Worksheet ws = workbook.newWorksheet("Counties");
+            ws.value(0, 0, "Counties and equivalents per state, 2017");
+            ws.range(0, 0, 0, 1).merge();
+            ws.value(2, 0, "state");
+            ws.value(2, 1, "counties");
+            int row = 3;
+            for (Map.Entry<String, Integer> entry : counties.entrySet()) {
+                ws.value(row, 0, entry.getKey());
+                ws.value(row, 1, entry.getValue());
+                row++;
+            }
+            workbook.finish();
+        }
+    }
+}
