@@ -34,8 +34,11 @@ import aequa.statistics.KeyPairGuess;
 final class ScaffoldFromFiles {
 
     private static final List<String> SHAPEFILE_SIDECARS = List.of(".shx", ".dbf", ".prj", ".cpg");
-    /** A plain decimal number, optionally signed, with an exponent; thousands separators are not figures here. */
-    private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
+    /**
+     * A plain decimal number, optionally signed, with an exponent. A leading zero before another digit ("01") marks a
+     * code, not a figure; thousands separators are not read here.
+     */
+    private static final Pattern NUMBER = Pattern.compile("[-+]?((0|[1-9]\\d*)(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?");
 
     private final Path dir;
     private final PrintWriter out;
@@ -106,13 +109,17 @@ final class ScaffoldFromFiles {
             return ExitCode.DATA_PROBLEMS.code;
         }
         Atlas atlas = AtlasLoader.load(project.get(), LoadOptions.defaults(), findings);
-        FindingsPrinter.print(findings.list(), err, false);
+        FindingsPrinter.print(findings.list(), err, false, FindingsPrinter.SHOWN_PER_KIND, "; `aequa audit` lists every one");
         String pair = "key = " + guess.attribute() + " (regions) and " + guess.column() + " (figures)";
         for (MapModel map : atlas.maps()) {
             long matched = map.regions().stream().filter(r -> r.values().stream()
                     .anyMatch(v -> v.status() != FigureStatus.NO_DATA)).count();
             out.println(String.format(Locale.ROOT, "Join dry run: %,d of %,d regions matched on %s.", matched,
                     map.regions().size(), pair));
+        }
+        if (atlas.maps().isEmpty()) {
+            out.println(String.format(Locale.ROOT, "Join dry run: the map could not be built; in the files, %,d of %,d"
+                    + " regions find a row on %s.", guess.matchedRegions(), guess.regions(), pair));
         }
         if (atlas.maps().isEmpty() || guess.weak()) {
             out.println("Fewer than half the regions match on the best pair found (" + pair + "): check 'key' in "

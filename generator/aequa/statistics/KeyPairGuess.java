@@ -10,7 +10,9 @@ import java.util.Set;
  * Guesses the join keys of a new project: the (region attribute, figure column) pair under which most regions
  * find a figure row. Exact matching is tried first; relaxed matching (letter case, whitespace, leading zeros of
  * digit runs: {@link RelaxedKey}, as {@code key-matching: relaxed} matches) is chosen only when it matches more regions than
- * the best exact pair. Ties go to the earlier attribute, then the earlier column, so the guess is deterministic.
+ * the best exact pair. Among pairs matching as many regions, the attribute with the shorter values wins (a code such
+ * as a FIPS code before a name spelled out: codes are what statistics offices key tables by, common practice), then
+ * the earlier attribute and the earlier column, so the guess is deterministic.
  */
 public final class KeyPairGuess {
 
@@ -42,8 +44,11 @@ public final class KeyPairGuess {
     public static Guess best(Map<String, List<String>> attributes, Map<String, List<String>> columns) {
         Guess bestExact = null;
         Guess bestRelaxed = null;
+        long bestExactChars = 0;
+        long bestRelaxedChars = 0;
         for (var attribute : attributes.entrySet()) {
             List<String> regionKeys = attribute.getValue().stream().filter(Objects::nonNull).toList();
+            long keyChars = regionKeys.stream().mapToLong(String::length).sum();
             for (var column : columns.entrySet()) {
                 Set<String> exact = new HashSet<>();
                 Set<String> relaxed = new HashSet<>();
@@ -55,11 +60,13 @@ public final class KeyPairGuess {
                 }
                 int exactCount = (int) regionKeys.stream().filter(exact::contains).count();
                 int relaxedCount = (int) regionKeys.stream().filter(k -> relaxed.contains(RelaxedKey.of(k))).count();
-                if (bestExact == null || exactCount > bestExact.matchedRegions()) {
+                if (bestExact == null || better(exactCount, keyChars, bestExact.matchedRegions(), bestExactChars)) {
                     bestExact = new Guess(attribute.getKey(), column.getKey(), false, exactCount, regionKeys.size());
+                    bestExactChars = keyChars;
                 }
-                if (bestRelaxed == null || relaxedCount > bestRelaxed.matchedRegions()) {
+                if (bestRelaxed == null || better(relaxedCount, keyChars, bestRelaxed.matchedRegions(), bestRelaxedChars)) {
                     bestRelaxed = new Guess(attribute.getKey(), column.getKey(), true, relaxedCount, regionKeys.size());
+                    bestRelaxedChars = keyChars;
                 }
             }
         }
@@ -67,5 +74,9 @@ public final class KeyPairGuess {
             return null;
         }
         return bestRelaxed.matchedRegions() > bestExact.matchedRegions() ? bestRelaxed : bestExact;
+    }
+
+    private static boolean better(int matched, long keyChars, int bestMatched, long bestKeyChars) {
+        return matched > bestMatched || matched == bestMatched && matched > 0 && keyChars < bestKeyChars;
     }
 }

@@ -50,8 +50,16 @@ class ScaffoldFromFilesTest {
 
     @Test
     void fipsKeyedFiguresJoinOnTheFipsPropertyAndTheProjectPublishes(@TempDir Path tmp) throws IOException {
+        // a name column as well: names match as fully as codes, and the code must win
+        Map<String, String> names = new TreeMap<>();
+        for (JsonNode state : JSON.readTree(GEOMETRY.resolve("us-states-2017.geojson").toFile()).path("features")) {
+            names.put(state.path("properties").path("id").asText(), state.path("properties").path("name").asText());
+        }
+        StringBuilder withNames = new StringBuilder("state,GEOID,counties\n");
+        countiesPerState().forEach((fips, n) -> withNames.append(names.get(fips)).append(',').append(fips).append(',')
+                .append(n).append('\n'));
         Path csv = tmp.resolve("counties.csv");
-        Files.writeString(csv, figuresCsv(false));
+        Files.writeString(csv, withNames);
         Path project = tmp.resolve("project");
 
         assertEquals(0, run("scaffold", project.toString(), "--regions", GEOMETRY.resolve("us-states-2017.geojson").toString(),
@@ -59,6 +67,7 @@ class ScaffoldFromFilesTest {
 
         String yaml = Files.readString(project.resolve("aequa.yaml"));
         assertTrue(yaml.contains("key: \"id\""), yaml); // the FIPS property, not the name
+        assertTrue(yaml.contains("name: \"name\""), yaml);
         assertTrue(yaml.contains("key: \"GEOID\""), yaml);
         assertTrue(yaml.contains("indicator: \"counties\""), yaml);
         assertFalse(yaml.contains("key-matching"), yaml);
@@ -111,6 +120,38 @@ class ScaffoldFromFilesTest {
         assertTrue(yaml.contains("key: \"GEOID\"") && yaml.contains("name: \"NAME\""), yaml);
         assertTrue(yaml.contains("key: \"state\""), yaml);
         assertTrue(out.toString().contains("56 of 56 regions matched on key = GEOID (regions) and state (figures)"),
+                out.toString());
+    }
+
+    @Test
+    void aTopologyJoinsOnItsFeatureIdAndNamesItsObject(@TempDir Path tmp) throws IOException {
+        // states-10m.json: the us-atlas 3.0.1 topology (src/test/resources/topojson/SOURCE.md), objects "states" and
+        // "nation", each state's FIPS code as the geometry id and only its name as a property
+        Path csv = tmp.resolve("counties.csv");
+        Files.writeString(csv, figuresCsv(false));
+        Path project = tmp.resolve("project");
+
+        int code = run("scaffold", project.toString(), "--regions", "src/test/resources/topojson/states-10m.json",
+                "--figures", csv.toString());
+
+        String yaml = Files.readString(project.resolve("aequa.yaml"));
+        assertTrue(yaml.contains("object: \"states\"") && yaml.contains("key: \"@id\""), yaml);
+        assertTrue(out.toString().contains("of 56 regions matched on key = @id (regions) and GEOID (figures)"), out.toString());
+        assertTrue(code == 0 || code == 1, err.toString());
+    }
+
+    @Test
+    void aPairMatchingFewerThanHalfTheRegionsIsWrittenWithAWarning(@TempDir Path tmp) throws IOException {
+        // county FIPS codes (5 digits) are no state's code: the best pair still matches nothing
+        Path csv = tmp.resolve("counties.csv");
+        Files.writeString(csv, "county,population\n01001,55869\n01003,223234\n");
+        Path project = tmp.resolve("project");
+
+        run("scaffold", project.toString(), "--regions", GEOMETRY.resolve("us-states-2017.geojson").toString(),
+                "--figures", csv.toString());
+
+        assertTrue(Files.isRegularFile(project.resolve("aequa.yaml")));
+        assertTrue(out.toString().contains("Fewer than half the regions match") && out.toString().contains("check 'key'"),
                 out.toString());
     }
 
