@@ -10,7 +10,8 @@ final class ProjectFileText {
     private ProjectFileText() {
     }
 
-    static String of(String regionsFile, String topologyObject, KeyPairGuess.Guess guess, String nameAttribute,
+    /** @param part the TopoJSON object or the Shapefile in a zip to read, empty for none */
+    static String of(String regionsFile, String part, KeyPairGuess.Guess guess, String nameAttribute,
                      String figuresFile, String indicator) {
         StringBuilder yaml = new StringBuilder();
         yaml.append("# Written by 'aequa scaffold' from your files; the keys were guessed, check them.\n");
@@ -18,8 +19,9 @@ final class ProjectFileText {
         yaml.append("site:\n  title: \"My maps\"\n  publisher: \"My organisation\"\n\n");
         yaml.append("regions:\n  regions:\n");
         yaml.append("    file: ").append(quoted(regionsFile)).append('\n');
-        if (!topologyObject.isEmpty()) {
-            yaml.append("    object: ").append(quoted(topologyObject)).append('\n');
+        if (!part.isEmpty()) {
+            String partKey = regionsFile.toLowerCase(Locale.ROOT).endsWith(".zip") ? "layer" : "object";
+            yaml.append("    ").append(partKey).append(": ").append(quoted(part)).append('\n');
         }
         yaml.append("    key: ").append(quoted(guess.attribute())).append('\n');
         if (!nameAttribute.isEmpty()) {

@@ -30,7 +30,7 @@ final class ScaffoldCommand implements Callable<Integer> {
     Path dir;
 
     @Option(names = "--regions", paramLabel = "FILE",
-            description = "Your region boundaries (GeoJSON, TopoJSON or Shapefile .shp); copied into DIR/regions/.")
+            description = "Your region boundaries (GeoJSON, TopoJSON, Shapefile .shp or .zip); copied into DIR/regions/.")
     Path regionsFile;
 
     @Option(names = "--figures", paramLabel = "FILE",

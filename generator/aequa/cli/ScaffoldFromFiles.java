@@ -26,7 +26,7 @@ import aequa.statistics.KeyPairGuess;
 
 /**
  * {@code scaffold DIR --regions FILE --figures FILE}: copies the user's two files into {@code DIR/regions/} and
- * {@code DIR/figures/} (a Shapefile with its {@code .shx .dbf .prj .cpg} sidecars), writes an {@code aequa.yaml}
+ * {@code DIR/figures/} (a {@code .shp} with its {@code .shx .dbf .prj .cpg} sidecars; a zip as it is), writes an {@code aequa.yaml}
  * whose keys are guessed by {@link KeyPairGuess} with one map of the first numeric figure column, then loads the
  * project as {@code aequa audit} does and prints the join summary. Nothing is written when a file cannot be
  * sampled (an unsupported kind is a usage error).
@@ -88,7 +88,7 @@ final class ScaffoldFromFiles {
         copy(figuresFile, dir.resolve(figuresCopy));
         String name = regions.get().attributes().keySet().stream()
                 .filter(a -> !a.equals(guess.attribute()) && a.toLowerCase(Locale.ROOT).contains("name")).findFirst().orElse("");
-        Files.writeString(dir.resolve("aequa.yaml"), ProjectFileText.of(regionsCopy, regions.get().object(), guess, name,
+        Files.writeString(dir.resolve("aequa.yaml"), ProjectFileText.of(regionsCopy, regions.get().part(), guess, name,
                 figuresCopy, indicator.get()), StandardCharsets.UTF_8);
         out.println("Wrote a new project in " + dir + " from " + regionsFile.getFileName() + " and " + figuresFile.getFileName()
                 + ": regions keyed by '" + guess.attribute() + "', figures by '" + guess.column() + "', one map of '"

@@ -11,6 +11,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.zip.ZipFile;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -21,16 +22,17 @@ import aequa.project.RegionSourceSpec;
  * The attributes of a region file and their values, feature by feature, for guessing which one is the key:
  * GeoJSON and TopoJSON properties, then the feature id as {@value RegionSourceSpec#FEATURE_ID} (last, so that a
  * property holding the same codes is preferred on a tie, as more explicit), and the fields of
- * a loose Shapefile's {@code .dbf}. Values are text as the readers see them (leading zeros kept); a missing
+ * a Shapefile's {@code .dbf}, beside a {@code .shp} or in a {@code .zip} (its first Shapefile, by name). Values are text as the readers see them (leading zeros kept); a missing
  * value is null. The whole file is read in memory, which suits boundary files of a few tens of MB.
  *
  * @param attributes attribute name to its values in feature order, attributes in first-seen order
- * @param object     the TopoJSON object read (the first of the topology), empty for other kinds
+ * @param part       which part of the file was read: the TopoJSON object (the first of the topology) or the
+ *                   Shapefile in a zip (the first, sorted by name); empty for other kinds
  */
-public record RegionAttributes(Map<String, List<String>> attributes, String object) {
+public record RegionAttributes(Map<String, List<String>> attributes, String part) {
 
     /** The file kinds this sampler reads, for a usage message. */
-    public static final String KINDS = "GeoJSON (.geojson, .json), TopoJSON (.topojson) or Shapefile (.shp)";
+    public static final String KINDS = "GeoJSON (.geojson, .json), TopoJSON (.topojson) or Shapefile (.shp, or a .zip holding one)";
 
     public RegionAttributes {
         Map<String, List<String>> copy = new LinkedHashMap<>();
@@ -45,7 +47,16 @@ public record RegionAttributes(Map<String, List<String>> attributes, String obje
     public static Optional<RegionAttributes> read(Path file) throws IOException {
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
         if (name.endsWith(".shp")) {
-            return Optional.of(new RegionAttributes(dbf(file), ""));
+            return Optional.of(new RegionAttributes(dbf(file, ShapefileFiles.loose(file)), ""));
+        }
+        if (name.endsWith(".zip")) {
+            try (ZipFile zip = new ZipFile(file.toFile())) {
+                List<String> layers = ShapefileFiles.layersIn(zip);
+                if (layers.isEmpty()) {
+                    throw new IOException(file.getFileName() + " holds no Shapefile (.shp)");
+                }
+                return Optional.of(new RegionAttributes(dbf(file, ShapefileFiles.inZip(zip, layers.get(0))), layers.get(0)));
+            }
         }
         if (!name.endsWith(".geojson") && !name.endsWith(".json") && !name.endsWith(".topojson")) {
             return Optional.empty();
@@ -95,8 +106,7 @@ public record RegionAttributes(Map<String, List<String>> attributes, String obje
         values.add(value.asText());
     }
 
-    private static Map<String, List<String>> dbf(Path shp) throws IOException {
-        ShapefileFiles files = ShapefileFiles.loose(shp);
+    private static Map<String, List<String>> dbf(Path shp, ShapefileFiles files) throws IOException {
         Map<String, List<String>> columns = new LinkedHashMap<>();
         if (!files.has(ShapefileFiles.Member.DBF)) {
             return columns;

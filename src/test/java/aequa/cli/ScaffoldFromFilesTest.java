@@ -121,6 +121,15 @@ class ScaffoldFromFilesTest {
         assertTrue(yaml.contains("key: \"state\""), yaml);
         assertTrue(out.toString().contains("56 of 56 regions matched on key = GEOID (regions) and state (figures)"),
                 out.toString());
+
+        // the same Shapefile zipped, as statistics offices publish it, is copied as it is and named by layer
+        ShapefileFixture.zip(shp, "states", tmp.resolve("states.zip"));
+        Path zipped = tmp.resolve("zipped");
+        assertEquals(0, run("scaffold", zipped.toString(), "--regions", tmp.resolve("states.zip").toString(),
+                "--figures", workbook.toString()), err.toString());
+        String zippedYaml = Files.readString(zipped.resolve("aequa.yaml"));
+        assertTrue(zippedYaml.contains("file: \"regions/states.zip\"") && zippedYaml.contains("layer: \"states\"")
+                && zippedYaml.contains("key: \"GEOID\""), zippedYaml);
     }
 
     @Test
