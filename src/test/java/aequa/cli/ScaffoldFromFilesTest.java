@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.OutputStream;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
@@ -16,14 +15,13 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 
-import org.dhatim.fastexcel.Workbook;
-import org.dhatim.fastexcel.Worksheet;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
+import aequa.endtoend.AnalystInputsTest;
 import aequa.findings.Findings;
 import aequa.inputs.regions.Region;
 import aequa.inputs.regions.RegionReaders;
@@ -56,7 +54,7 @@ class ScaffoldFromFilesTest {
             names.put(state.path("properties").path("id").asText(), state.path("properties").path("name").asText());
         }
         StringBuilder withNames = new StringBuilder("state,GEOID,counties\n");
-        countiesPerState().forEach((fips, n) -> withNames.append(names.get(fips)).append(',').append(fips).append(',')
+        AnalystInputsTest.countiesPerState().forEach((fips, n) -> withNames.append(names.get(fips)).append(',').append(fips).append(',')
                 .append(n).append('\n'));
         Path csv = tmp.resolve("counties.csv");
         Files.writeString(csv, withNames);
@@ -107,7 +105,7 @@ class ScaffoldFromFilesTest {
         ShapefileFixture.write(shp, "states", List.of("NAME", "GEOID"), features, ShapefileFixture.WGS84_PRJ, "UTF-8",
                 StandardCharsets.UTF_8);
         Path workbook = tmp.resolve("counties.xlsx");
-        writeWorkbook(countiesPerState(), workbook);
+        AnalystInputsTest.writeWorkbook(AnalystInputsTest.countiesPerState(), workbook);
         Path project = tmp.resolve("project");
 
         assertEquals(0, run("scaffold", project.toString(), "--regions", shp.resolve("states.shp").toString(),
@@ -118,8 +116,7 @@ class ScaffoldFromFilesTest {
         }
         String yaml = Files.readString(project.resolve("aequa.yaml"));
         assertTrue(yaml.contains("key: \"GEOID\"") && yaml.contains("name: \"NAME\""), yaml);
-        assertTrue(yaml.contains("key: \"state\""), yaml);
-        assertTrue(out.toString().contains("56 of 56 regions matched on key = GEOID (regions) and state (figures)"),
+        assertTrue(out.toString().contains("56 of 56 regions matched on key = GEOID (regions) and GEOID (figures)"),
                 out.toString());
 
         // the same Shapefile zipped, as statistics offices publish it, is copied as it is and named by layer
@@ -185,36 +182,8 @@ class ScaffoldFromFilesTest {
     /** GEOID (2-digit FIPS, or without its leading zero) and the number of counties of each state. */
     private static String figuresCsv(boolean zerosLost) throws IOException {
         StringBuilder csv = new StringBuilder("GEOID,counties\n");
-        countiesPerState().forEach((fips, n) -> csv.append(zerosLost ? String.valueOf(Integer.parseInt(fips)) : fips)
+        AnalystInputsTest.countiesPerState().forEach((fips, n) -> csv.append(zerosLost ? String.valueOf(Integer.parseInt(fips)) : fips)
                 .append(',').append(n).append('\n'));
         return csv.toString();
-    }
-
-    /** The number of counties and equivalents per state FIPS code in the county file of the same source. */
-    private static Map<String, Integer> countiesPerState() throws IOException {
-        Map<String, Integer> counts = new TreeMap<>();
-        for (JsonNode county : JSON.readTree(GEOMETRY.resolve("us-counties-2017.geojson").toFile()).path("features")) {
-            counts.merge(county.path("properties").path("state_fips").asText(), 1, Integer::sum);
-        }
-        return counts;
-    }
-
-    /** A title row (merged over two cells) above the table, as analysts keep workbooks. */
-    private static void writeWorkbook(Map<String, Integer> counties, Path file) throws IOException {
-        try (OutputStream stream = Files.newOutputStream(file)) {
-            Workbook workbook = new Workbook(stream, "aequa-test", "1.0");
-            Worksheet ws = workbook.newWorksheet("Counties");
-            ws.value(0, 0, "Counties and equivalents per state, 2017");
-            ws.range(0, 0, 0, 1).merge();
-            ws.value(2, 0, "state");
-            ws.value(2, 1, "counties");
-            int row = 3;
-            for (Map.Entry<String, Integer> entry : counties.entrySet()) {
-                ws.value(row, 0, entry.getKey());
-                ws.value(row, 1, entry.getValue());
-                row++;
-            }
-            workbook.finish();
-        }
     }
 }
