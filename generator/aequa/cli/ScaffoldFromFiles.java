@@ -60,9 +60,13 @@ final class ScaffoldFromFiles {
         Optional<FigureColumns> figures;
         try {
             regions = RegionAttributes.read(regionsFile);
+        } catch (IOException e) {
+            return usage(regionsFile + ": its attributes cannot be read (" + e + "); check that the file is complete.");
+        }
+        try {
             figures = FigureColumns.read(figuresFile);
         } catch (IOException e) {
-            return usage("cannot read the attributes or columns of the files: " + e.getMessage());
+            return usage(figuresFile + ": its columns cannot be read (" + e + "); text files must be UTF-8.");
         }
         if (regions.isEmpty()) {
             return usage(regionsFile + ": scaffold reads regions from " + RegionAttributes.KINDS + "; convert the file first.");

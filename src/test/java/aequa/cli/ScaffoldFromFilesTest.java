@@ -175,6 +175,11 @@ class ScaffoldFromFilesTest {
         assertEquals(2, run("scaffold", project.toString(), "--regions", GEOMETRY.resolve("areas.csv").toString(),
                 "--figures", ods.toString()));
         assertTrue(err.toString().contains("areas.csv"), err.toString());
+        Path latin1 = tmp.resolve("latin1.csv");
+        Files.write(latin1, "GEOID,r\u00e9sultat\n01,1\n".getBytes(StandardCharsets.ISO_8859_1));
+        assertEquals(2, run("scaffold", project.toString(), "--regions", GEOMETRY.resolve("us-states-2017.geojson").toString(),
+                "--figures", latin1.toString()));
+        assertTrue(err.toString().contains("latin1.csv") && err.toString().contains("UTF-8"), err.toString());
         assertEquals(2, run("scaffold", project.toString(), "--regions", GEOMETRY.resolve("us-states-2017.geojson").toString()));
         assertFalse(Files.exists(project));
     }
