@@ -9,13 +9,18 @@ import java.util.List;
 import java.util.concurrent.Callable;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-/** Writes a new, minimal project that {@code publish} builds as it is. */
+/**
+ * Writes a new, minimal project that {@code publish} builds as it is; with {@code --regions} and {@code --figures},
+ * a project made from the user's two files ({@link ScaffoldFromFiles}).
+ */
 @Command(name = "scaffold", mixinStandardHelpOptions = true,
-        description = "Write a new minimal project (project file, regions, figures) into DIR.")
+        description = {"Write a new minimal project (project file, regions, figures) into DIR.",
+                "With --regions and --figures, start from your own files: their keys are guessed and checked by a join dry run."})
 final class ScaffoldCommand implements Callable<Integer> {
 
     /** The files of the starter project, bundled as resources under /aequa/scaffold/. */
@@ -23,6 +28,14 @@ final class ScaffoldCommand implements Callable<Integer> {
 
     @Parameters(paramLabel = "DIR", description = "A folder that does not exist yet, or is empty.")
     Path dir;
+
+    @Option(names = "--regions", paramLabel = "FILE",
+            description = "Your region boundaries (GeoJSON, TopoJSON, Shapefile .shp or .zip); copied into DIR/regions/.")
+    Path regionsFile;
+
+    @Option(names = "--figures", paramLabel = "FILE",
+            description = "Your figures (CSV/TSV or .xlsx workbook); copied into DIR/figures/.")
+    Path figuresFile;
 
     @Spec
     CommandSpec spec;
@@ -33,6 +46,14 @@ final class ScaffoldCommand implements Callable<Integer> {
             spec.commandLine().getErr().println("aequa: " + dir + " already exists and is not an empty folder; "
                     + "scaffold never overwrites files. Name a new folder.");
             return ExitCode.USAGE.code;
+        }
+        if ((regionsFile == null) != (figuresFile == null)) {
+            spec.commandLine().getErr().println("aequa: give both --regions FILE and --figures FILE, or neither.");
+            return ExitCode.USAGE.code;
+        }
+        if (regionsFile != null) {
+            return new ScaffoldFromFiles(dir, spec.commandLine().getOut(), spec.commandLine().getErr())
+                    .run(regionsFile, figuresFile);
         }
         for (String name : FILES) {
             Path target = dir.resolve(name);

@@ -40,7 +40,7 @@ import aequa.project.RegionSourceSpec;
  * domain); the figure is real too: each state's count of counties and equivalents in the county file of the
  * same source.
  */
-class AnalystInputsTest {
+public class AnalystInputsTest {
 
     private static final ObjectMapper JSON = new ObjectMapper();
     private static final Path GEOMETRY = Path.of("src/test/resources/geometry");
@@ -99,7 +99,7 @@ class AnalystInputsTest {
     }
 
     /** The number of counties and equivalents per state FIPS code in the county file of the same source. */
-    private static Map<String, Integer> countiesPerState() throws IOException {
+    public static Map<String, Integer> countiesPerState() throws IOException {
         Map<String, Integer> counts = new TreeMap<>();
         for (JsonNode county : JSON.readTree(GEOMETRY.resolve("us-counties-2017.geojson").toFile()).path("features")) {
             counts.merge(county.path("properties").path("state_fips").asText(), 1, Integer::sum);
@@ -120,7 +120,7 @@ class AnalystInputsTest {
     }
 
     /** The figures as an analyst keeps them: a title row over the table, the table, a source note below. */
-    private static void writeWorkbook(Map<String, Integer> counties, Path file) throws IOException {
+    public static void writeWorkbook(Map<String, Integer> counties, Path file) throws IOException {
         try (OutputStream out = Files.newOutputStream(file)) {
             Workbook workbook = new Workbook(out, "aequa-test", "1.0");
             Worksheet ws = workbook.newWorksheet("Counties");
