@@ -10,9 +10,12 @@ final class ProjectFileText {
     private ProjectFileText() {
     }
 
-    /** @param part the TopoJSON object or the Shapefile in a zip to read, empty for none */
+    /**
+     * @param part        the TopoJSON object, the Shapefile in a zip or the GeoPackage layer to read, empty for none
+     * @param figuresPart the SQLite table of the figures, empty for none
+     */
     static String of(String regionsFile, String part, KeyPairGuess.Guess guess, String nameAttribute,
-                     String figuresFile, String indicator) {
+                     String figuresFile, String figuresPart, String indicator) {
         StringBuilder yaml = new StringBuilder();
         yaml.append("# Written by 'aequa scaffold' from your files; the keys were guessed, check them.\n");
         yaml.append("# Every key is documented in aequa's README (\"The project file\").\n");
@@ -20,7 +23,8 @@ final class ProjectFileText {
         yaml.append("regions:\n  regions:\n");
         yaml.append("    file: ").append(quoted(regionsFile)).append('\n');
         if (!part.isEmpty()) {
-            String partKey = regionsFile.toLowerCase(Locale.ROOT).endsWith(".zip") ? "layer" : "object";
+            String lower = regionsFile.toLowerCase(Locale.ROOT);
+            String partKey = lower.endsWith(".zip") || lower.endsWith(".gpkg") ? "layer" : "object";
             yaml.append("    ").append(partKey).append(": ").append(quoted(part)).append('\n');
         }
         yaml.append("    key: ").append(quoted(guess.attribute())).append('\n');
@@ -29,6 +33,9 @@ final class ProjectFileText {
         }
         yaml.append("\nfigures:\n  figures:\n");
         yaml.append("    file: ").append(quoted(figuresFile)).append('\n');
+        if (!figuresPart.isEmpty()) {
+            yaml.append("    table: ").append(quoted(figuresPart)).append('\n');
+        }
         yaml.append("    key: ").append(quoted(guess.column())).append('\n');
         if (guess.relaxed()) {
             yaml.append("    key-matching: relaxed   # only relaxed matching (case, blanks, leading zeros) joins the keys\n");

@@ -93,7 +93,7 @@ final class ScaffoldFromFiles {
         String name = regions.get().attributes().keySet().stream()
                 .filter(a -> !a.equals(guess.attribute()) && a.toLowerCase(Locale.ROOT).contains("name")).findFirst().orElse("");
         Files.writeString(dir.resolve("aequa.yaml"), ProjectFileText.of(regionsCopy, regions.get().part(), guess, name,
-                figuresCopy, indicator.get()), StandardCharsets.UTF_8);
+                figuresCopy, figures.get().table(), indicator.get()), StandardCharsets.UTF_8);
         out.println("Wrote a new project in " + dir + " from " + regionsFile.getFileName() + " and " + figuresFile.getFileName()
                 + ": regions keyed by '" + guess.attribute() + "', figures by '" + guess.column() + "', one map of '"
                 + indicator.get() + "'.");

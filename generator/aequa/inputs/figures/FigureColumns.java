@@ -24,18 +24,22 @@ import com.fasterxml.jackson.dataformat.csv.CsvMapper;
 import com.fasterxml.jackson.dataformat.csv.CsvParser;
 import com.fasterxml.jackson.dataformat.csv.CsvSchema;
 
+import aequa.inputs.SqliteColumns;
+
 /**
  * The columns of a figures file and their values, row by row, for guessing which one is the key: a delimited
  * text file's header (separator detected as {@link CsvFigureReader} does) or the first sheet of an {@code .xlsx}
  * workbook, whose header is taken to be the first row with two or more filled cells (a title row above it has
- * one). Values are text as the readers see them (leading zeros of text cells kept); the file is read in memory.
+ * one), or the first table or view (by name) of a SQLite file. Values are text as the readers see them (leading
+ * zeros of text cells kept); the file is read in memory.
  *
  * @param columns column name to its values in row order, columns in file order
+ * @param table   the SQLite table or view that was read; empty for other kinds
  */
-public record FigureColumns(Map<String, List<String>> columns) {
+public record FigureColumns(Map<String, List<String>> columns, String table) {
 
     /** The file kinds this sampler reads, for a usage message. */
-    public static final String KINDS = "delimited text (.csv, .tsv, .txt) or a workbook (.xlsx)";
+    public static final String KINDS = "delimited text (.csv, .tsv, .txt), a workbook (.xlsx) or SQLite (.sqlite, .db, .gpkg)";
 
     public FigureColumns {
         Map<String, List<String>> copy = new LinkedHashMap<>();
@@ -50,10 +54,16 @@ public record FigureColumns(Map<String, List<String>> columns) {
     public static Optional<FigureColumns> read(Path file) throws IOException {
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
         if (name.endsWith(".xlsx")) {
-            return Optional.of(new FigureColumns(workbook(file)));
+            return Optional.of(new FigureColumns(workbook(file), ""));
         }
         if (name.endsWith(".csv") || name.endsWith(".tsv") || name.endsWith(".txt")) {
-            return Optional.of(new FigureColumns(text(file, name.endsWith(".tsv"))));
+            return Optional.of(new FigureColumns(text(file, name.endsWith(".tsv")), ""));
+        }
+        if (name.endsWith(".sqlite") || name.endsWith(".db") || name.endsWith(".gpkg")) {
+            String table = SqliteColumns.firstName(file, "SELECT name FROM sqlite_master WHERE type IN ('table', 'view')"
+                    + " AND name NOT LIKE 'sqlite%' AND name NOT LIKE 'gpkg%' AND name NOT LIKE 'rtree%' ORDER BY name")
+                    .orElseThrow(() -> new IOException(file.getFileName() + " holds no table"));
+            return Optional.of(new FigureColumns(SqliteColumns.read(file, table, java.util.Set.of()), table));
         }
         return Optional.empty();
     }

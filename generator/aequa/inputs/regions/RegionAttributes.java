@@ -16,23 +16,26 @@ import java.util.zip.ZipFile;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
+import aequa.inputs.SqliteColumns;
 import aequa.project.RegionSourceSpec;
 
 /**
  * The attributes of a region file and their values, feature by feature, for guessing which one is the key:
  * GeoJSON and TopoJSON properties, then the feature id as {@value RegionSourceSpec#FEATURE_ID} (last, so that a
  * property holding the same codes is preferred on a tie, as more explicit), and the fields of
- * a Shapefile's {@code .dbf}, beside a {@code .shp} or in a {@code .zip} (its first Shapefile, by name). Values are text as the readers see them (leading zeros kept); a missing
+ * a Shapefile's {@code .dbf}, beside a {@code .shp} or in a {@code .zip} (its first Shapefile, by name), and the
+ * columns of a GeoPackage's first features table (by name) but its geometry column. Values are text as the readers see them (leading zeros kept); a missing
  * value is null. The whole file is read in memory, which suits boundary files of a few tens of MB.
  *
  * @param attributes attribute name to its values in feature order, attributes in first-seen order
- * @param part       which part of the file was read: the TopoJSON object (the first of the topology) or the
- *                   Shapefile in a zip (the first, sorted by name); empty for other kinds
+ * @param part       which part of the file was read: the TopoJSON object (the first of the topology), the
+ *                   Shapefile in a zip (the first, sorted by name) or the GeoPackage layer; empty for other kinds
  */
 public record RegionAttributes(Map<String, List<String>> attributes, String part) {
 
     /** The file kinds this sampler reads, for a usage message. */
-    public static final String KINDS = "GeoJSON (.geojson, .json), TopoJSON (.topojson) or Shapefile (.shp, or a .zip holding one)";
+    public static final String KINDS = "GeoJSON (.geojson, .json), TopoJSON (.topojson), GeoPackage (.gpkg) or Shapefile"
+            + " (.shp, or a .zip holding one)";
 
     public RegionAttributes {
         Map<String, List<String>> copy = new LinkedHashMap<>();
@@ -48,6 +51,17 @@ public record RegionAttributes(Map<String, List<String>> attributes, String part
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
         if (name.endsWith(".shp")) {
             return Optional.of(new RegionAttributes(dbf(file, ShapefileFiles.loose(file)), ""));
+        }
+        if (name.endsWith(".gpkg")) {
+            // GeoPackage 1.3, clauses 1.1.3 and 2.1.5: features tables are listed in gpkg_contents, their
+            // geometry columns in gpkg_geometry_columns
+            String layer = SqliteColumns.firstName(file, "SELECT table_name FROM gpkg_contents WHERE data_type = 'features'"
+                    + " ORDER BY table_name").orElseThrow(() -> new IOException(file.getFileName() + " holds no features table"));
+            String literal = "'" + layer.replace("'", "''") + "'";
+            Optional<String> geometry = SqliteColumns.firstName(file,
+                    "SELECT column_name FROM gpkg_geometry_columns WHERE table_name = " + literal);
+            return Optional.of(new RegionAttributes(SqliteColumns.read(file, layer, geometry.map(java.util.Set::of)
+                    .orElse(java.util.Set.of())), layer));
         }
         if (name.endsWith(".zip")) {
             try (ZipFile zip = new ZipFile(file.toFile())) {

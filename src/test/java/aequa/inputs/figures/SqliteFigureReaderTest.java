@@ -109,4 +109,15 @@ class SqliteFigureReaderTest {
         FigureReaders.read(dir, SourceSpecBuilder.file("fake.gpkg").build(), findings);
         assertEquals("figures-not-database", findings.list().get(0).code());
     }
+
+    /** scaffold's sampler reads the first table by name, its columns in order and its values as the reader sees them. */
+    @Test
+    void scaffoldSamplesTheFirstTable() throws java.io.IOException {
+        FigureColumns columns = FigureColumns.read(database).orElseThrow();
+        assertEquals("figures", columns.table());
+        assertEquals(java.util.List.of("code", "year", "births", "rate", "note", "people", "shape"),
+                java.util.List.copyOf(columns.columns().keySet()));
+        assertEquals(java.util.Arrays.asList("A", "B", "C", "7"), columns.columns().get("code"));
+        assertEquals(java.util.Arrays.asList("12", null, "3", "0"), columns.columns().get("births"));
+    }
 }

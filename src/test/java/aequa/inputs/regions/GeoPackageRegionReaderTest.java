@@ -82,6 +82,18 @@ class GeoPackageRegionReaderTest {
         }
     }
 
+    /**
+     * scaffold's sampler reads the first features table by name (gpkg_contents, clause 1.1.3) with every column
+     * but its geometry column (gpkg_geometry_columns, clause 2.1.5), values as text in row order.
+     */
+    @Test
+    void scaffoldSamplesTheFirstLayerWithoutItsGeometry() throws java.io.IOException {
+        RegionAttributes attributes = RegionAttributes.read(dir.resolve("regions.gpkg")).orElseThrow();
+        assertEquals("counties", attributes.part());
+        assertEquals(java.util.List.of("fid", "code", "label"), java.util.List.copyOf(attributes.attributes().keySet()));
+        assertEquals(java.util.Arrays.asList("A1", "B2", "C3", "D4", null, "E5", "F6"), attributes.attributes().get("code"));
+    }
+
     private static void layer(Statement s, String table, int srsId) throws Exception {
         s.execute("CREATE TABLE " + table + " (fid INTEGER PRIMARY KEY AUTOINCREMENT, code TEXT, label TEXT, geom BLOB)");
         s.execute("INSERT INTO gpkg_contents (table_name, data_type, identifier, srs_id) VALUES ('" + table + "', 'features', '" + table + "', " + srsId + ")");
