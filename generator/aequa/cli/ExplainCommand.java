@@ -73,8 +73,16 @@ final class ExplainCommand implements Callable<Integer> {
             root.put("parts", PartsReport.json(parts));
             out.println(mapper.writeValueAsString(root));
         } else {
-            out.print(ChoiceReport.text(file.toString(), regions.size(), choice));
-            out.print(PartsReport.text(parts));
+            if (parts.size() > 1) {
+                // what publish draws comes first: the composite map; then the single projection insets: off would use
+                out.println(file + " is drawn as a composite map:");
+                out.print(PartsReport.text(parts));
+                out.println("With insets: off, one projection would have to fit the whole extent:");
+                out.print(ChoiceReport.text(file.toString(), regions.size(), choice));
+            } else {
+                out.print(ChoiceReport.text(file.toString(), regions.size(), choice));
+                out.print(PartsReport.text(parts));
+            }
         }
         return findings.hasErrors() ? ExitCode.DATA_PROBLEMS.code : ExitCode.OK.code;
     }
