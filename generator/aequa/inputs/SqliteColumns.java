@@ -71,8 +71,8 @@ public final class SqliteColumns {
         return DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), config.toProperties());
     }
 
-    /** SQL identifier quoting (SQLite: double quotes, embedded quotes doubled). */
-    private static String quote(String identifier) {
+    /** SQL identifier quoting (SQLite: double quotes, embedded quotes doubled), for every SQLite reader. */
+    public static String quote(String identifier) {
         return "\"" + identifier.replace("\"", "\"\"") + "\"";
     }
 }

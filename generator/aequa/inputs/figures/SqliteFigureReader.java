@@ -21,6 +21,7 @@ import org.sqlite.SQLiteConfig;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
+import aequa.inputs.SqliteColumns;
 
 /**
  * Reads a table or view of a SQLite database (a GeoPackage is one) through sqlite-jdbc, read-only.
@@ -65,7 +66,7 @@ final class SqliteFigureReader {
     private static Optional<FigureTable> readTable(Connection connection, String table,
                                                    FigureSourceSettings settings, Findings findings) throws SQLException {
         try (Statement statement = connection.createStatement();
-             ResultSet rows = statement.executeQuery("SELECT * FROM " + quote(table))) {
+             ResultSet rows = statement.executeQuery("SELECT * FROM " + SqliteColumns.quote(table))) {
             ResultSetMetaData meta = rows.getMetaData();
             List<String> columns = new ArrayList<>();
             for (int c = 1; c <= meta.getColumnCount(); c++) {
@@ -144,10 +145,6 @@ final class SqliteFigureReader {
     /** SQLite's own tables, GeoPackage metadata tables and spatial index tables. */
     private static boolean isInternal(String name) {
         return name.startsWith("sqlite_") || name.startsWith("gpkg_") || name.startsWith("rtree_");
-    }
-
-    static String quote(String identifier) {
-        return "\"" + identifier.replace("\"", "\"\"") + "\"";
     }
 
     private static boolean hasSqliteHeader(Path path) throws IOException {

@@ -22,6 +22,7 @@ import org.sqlite.SQLiteConfig;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
+import aequa.inputs.SqliteColumns;
 import aequa.project.RegionSourceSpec;
 
 /**
@@ -143,8 +144,8 @@ final class GeoPackageRegionReader {
                                       CoordinateSequenceFilter toLonLat) throws SQLException {
         String keyColumn = RegionSourceSpec.FEATURE_ID.equals(spec.key()) ? primaryKey(connection, layer) : spec.key();
         String nameColumn = spec.name().isEmpty() ? keyColumn : spec.name();
-        String sql = "SELECT " + quote(keyColumn) + ", " + quote(nameColumn) + ", " + quote(geometryColumn)
-                + " FROM " + quote(layer) + " ORDER BY rowid";
+        String sql = "SELECT " + SqliteColumns.quote(keyColumn) + ", " + SqliteColumns.quote(nameColumn) + ", " + SqliteColumns.quote(geometryColumn)
+                + " FROM " + SqliteColumns.quote(layer) + " ORDER BY rowid";
         WKBReader wkb = new WKBReader(RegionGeometries.FACTORY);
         List<Region> regions = new ArrayList<>();
         try (Statement s = connection.createStatement(); ResultSet rs = s.executeQuery(sql)) {
@@ -208,7 +209,7 @@ final class GeoPackageRegionReader {
 
     private static String primaryKey(Connection connection, String layer) throws SQLException {
         try (Statement s = connection.createStatement();
-             ResultSet rs = s.executeQuery("PRAGMA table_info(" + quote(layer) + ")")) {
+             ResultSet rs = s.executeQuery("PRAGMA table_info(" + SqliteColumns.quote(layer) + ")")) {
             while (rs.next()) {
                 if (rs.getInt("pk") == 1) {
                     return rs.getString("name");
@@ -216,10 +217,5 @@ final class GeoPackageRegionReader {
             }
         }
         return "rowid";
-    }
-
-    /** SQL identifier quoting (SQLite: double quotes, embedded quotes doubled). */
-    private static String quote(String identifier) {
-        return "\"" + identifier.replace("\"", "\"\"") + "\"";
     }
 }
