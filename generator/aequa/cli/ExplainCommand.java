@@ -63,9 +63,11 @@ final class ExplainCommand implements Callable<Integer> {
             err.println("aequa: " + file + " holds no usable regions, so there is no extent to fit a projection to.");
             return ExitCode.DATA_PROBLEMS.code;
         }
-        ProjectionChoice choice = ProjectionChooser.choose(Footprint.of(regions.stream().map(Region::lonLat).toList()),
-                ProjectionRequest.automatic());
         List<PartPlan> parts = PartsReport.plan(regions, findings);
+        // one part is the whole extent with the automatic request: its choice is the one asked for here
+        ProjectionChoice choice = parts.size() == 1 ? parts.get(0).choice()
+                : ProjectionChooser.choose(Footprint.of(regions.stream().map(Region::lonLat).toList()),
+                        ProjectionRequest.automatic());
         var out = spec.commandLine().getOut();
         if (json) {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);

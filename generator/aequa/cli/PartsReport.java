@@ -7,7 +7,7 @@ import java.util.Map;
 
 import aequa.composite.CompositePlanner;
 import aequa.composite.PartPlan;
-import aequa.ellipsoid.GeodesicArea;
+import aequa.ellipsoid.LonLatArea;
 import aequa.ellipsoid.LonLatDensifier;
 import aequa.findings.Findings;
 import aequa.inputs.regions.Region;
@@ -27,7 +27,8 @@ final class PartsReport {
     static List<PartPlan> plan(List<Region> regions, Findings findings) {
         Map<String, Double> areas = new LinkedHashMap<>();
         for (Region r : regions) {
-            areas.put(r.key(), GeodesicArea.areaKm2(LonLatDensifier.densify(r.lonLat(), LonLatDensifier.MAX_STEP_DEG)));
+            // measured as the load step measures regions (RegionLayers): exactly along the lon/lat edges
+            areas.put(r.key(), LonLatArea.areaKm2(LonLatDensifier.densify(r.lonLat(), LonLatDensifier.MAX_STEP_DEG)));
         }
         return CompositePlanner.plan(regions, areas, InsetsSpec.AUTO, ProjectionRequest.automatic(),
                 new CompositePlanner.SettingPlace(pointer -> "", "/insets"), findings);

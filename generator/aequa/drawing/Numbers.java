@@ -51,14 +51,6 @@ final class Numbers {
         return 4;
     }
 
-    /**
-     * A legend limit in as few decimals as write it exactly (limits are already rounded for readers), each
-     * limit on its own: one tiny lowest limit must not force four decimals onto "1,170".
-     */
-    static String compact(double value) {
-        return format(value, decimalsFor(List.of(value)));
-    }
-
     /** A compact figure for captions: up to {@code decimals} decimals, trailing zeros removed. */
     static String trim(double value, int decimals) {
         if (!Double.isFinite(value)) {
