@@ -7,20 +7,13 @@ import java.time.Duration;
 import java.util.Optional;
 
 import aequa.atlas.Atlas;
-import aequa.atlas.AtlasLoader;
 import aequa.atlas.LoadOptions;
-import aequa.drawing.PrintSize;
-import aequa.drawing.Theme;
-import aequa.drawing.Themes;
-import aequa.findings.Finding;
 import aequa.findings.Findings;
-import aequa.inputs.CacheFolder;
 import aequa.project.LoadedProject;
-import aequa.project.ProjectFile;
-import aequa.project.ProjectLoader;
+import aequa.publish.CheckStep;
 import aequa.publish.DrawingArtwork;
+import aequa.publish.DrawingSettings;
 import aequa.publish.LastPublish;
-import aequa.publish.PreviousProjections;
 import aequa.publish.PublishOptions;
 import aequa.publish.PublishProgress;
 import aequa.publish.PublishRefusedException;
@@ -30,8 +23,8 @@ import aequa.publish.SiteLockedException;
 import aequa.publish.SitePublisher;
 
 /**
- * One whole build, as {@code publish} and {@code preview} run it: load the project (step 1), stop with the
- * findings if the data has errors, otherwise publish (step 2). Returns the exit code; writes nothing at all
+ * One whole build, as {@code publish} and {@code preview} run it: the check step ({@link CheckStep}, the same
+ * as {@code audit}'s), stop with the findings if the data has errors, otherwise publish (step 2). Returns the exit code; writes nothing at all
  * when it fails. When the inputs, aequa and the output are exactly as the last publish left them
  * ({@link LastPublish}), it says so and stops before step 1.
  */
@@ -51,7 +44,7 @@ final class SiteBuilder {
      */
     ExitCode build(Path projectDir, Path outDir, Duration lockWait, boolean showProgress) throws IOException {
         Findings findings = new Findings();
-        Optional<LoadedProject> loaded = ProjectLoader.load(projectDir, findings);
+        Optional<LoadedProject> loaded = CheckStep.readProject(projectDir, findings);
         if (loaded.isEmpty()) {
             FindingsPrinter.print(findings.list(), err, false);
             return ExitCode.USAGE;
@@ -63,20 +56,13 @@ final class SiteBuilder {
                     + outDir + " was left as it was.");
             return ExitCode.OK;
         }
-        Findings setup = new Findings();
-        Theme theme = Themes.load(project.dir(), project.file().site().theme(), setup);
-        Theme printTheme = Themes.load(project.dir(), project.file().site().printTheme(), setup);
-        Optional<PrintSize> printSize = PrintWidths.parse(project.file().site().printWidth());
-        if (printSize.isEmpty()) {
-            setup.add(Finding.error("project-bad-value", ProjectFile.FILE_NAME, project.places().place("/site/print-width"),
-                    "'" + project.file().site().printWidth() + "' is not a print width.", "Use " + PrintWidths.choices() + "."));
-        }
-        if (setup.hasErrors()) {
-            FindingsPrinter.print(setup.list(), err, false);
+        Optional<DrawingSettings> settings = CheckStep.readSettings(project, findings);
+        if (settings.isEmpty()) {
+            FindingsPrinter.print(findings.list(), err, false);
             return ExitCode.USAGE;
         }
         try (SiteLock lock = SiteLock.acquire(outDir, lockWait)) {
-            return loadAndPublish(project, theme, printTheme, printSize.get(), lock, last, findings, showProgress);
+            return loadAndPublish(project, settings.get(), lock, last, findings, showProgress);
         } catch (SiteLockedException e) {
             err.println("aequa: " + e.getMessage());
             return ExitCode.LOCKED;
@@ -86,22 +72,20 @@ final class SiteBuilder {
         }
     }
 
-    private ExitCode loadAndPublish(LoadedProject project, Theme theme, Theme printTheme, PrintSize printSize,
-                                    SiteLock lock, LastPublish last, Findings findings, boolean showProgress)
-            throws IOException {
+    private ExitCode loadAndPublish(LoadedProject project, DrawingSettings settings, SiteLock lock, LastPublish last,
+                                    Findings findings, boolean showProgress) throws IOException {
         Path outDir = lock.outDir();
-        LoadOptions options = new LoadOptions(theme.colours().background(), PreviousProjections.read(outDir))
-                .withCache(CacheFolder.of(project.dir()), LoadOptions.CacheUse.READ_AND_STORE);
-        Atlas atlas = AtlasLoader.load(project, options, findings);
+        Atlas atlas = CheckStep.load(project, settings, outDir, LoadOptions.CacheUse.READ_AND_STORE, findings);
         FindingsPrinter.print(findings.list(), err, false, FindingsPrinter.SHOWN_PER_KIND, "; `aequa audit` lists every one");
         if (findings.hasErrors()) {
             err.println("aequa: nothing was published: " + FindingsPrinter.tally(findings.list())
                     + ". The site in " + outDir + " is unchanged.");
             return ExitCode.DATA_PROBLEMS;
         }
-        DrawingArtwork artwork = new DrawingArtwork(theme, printTheme, printSize, new Version().getVersion()[0]);
+        DrawingArtwork artwork = new DrawingArtwork(settings.theme(), settings.printTheme(), settings.printSize(),
+                new Version().getVersion()[0]);
         PublishOptions publishOptions = PublishOptions.defaults()
-                .withProgress(showProgress ? PublishProgress.forTerminal(System.err) : PublishProgress.silent());
+                .withProgress(showProgress ? PublishProgress.forTerminal(err) : PublishProgress.silent());
         PublishResult result = SitePublisher.publish(atlas, findings.list(), artwork, lock, publishOptions);
         last.record(outDir);
         FindingsPrinter.print(artwork.preflightFindings(), err, false);

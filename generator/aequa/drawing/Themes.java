@@ -50,9 +50,17 @@ public final class Themes {
      * @param findings   receives {@code theme-unknown} or {@code theme-invalid} when the theme cannot be used
      */
     public static Theme load(Path projectDir, String name, Findings findings) {
+        return load(projectDir, name, "site.theme", findings);
+    }
+
+    /**
+     * As {@link #load(Path, String, Findings)}, with {@code place} (where the name stands in the project file,
+     * for example "line 4, column 10") in the {@code theme-unknown} finding.
+     */
+    public static Theme load(Path projectDir, String name, String place, Findings findings) {
         String file = "themes/" + name + "/theme.yaml";
         if (!SAFE_NAME.matcher(name).matches()) {
-            findings.add(Finding.error("theme-unknown", "aequa.yaml", "site.theme",
+            findings.add(Finding.error("theme-unknown", "aequa.yaml", place,
                     "The theme name \"" + name + "\" is not a folder name aequa accepts.",
                     "Use lower-case letters, digits and hyphens, for example \"" + DEFAULT_NAME + "\"."));
             return bundled(DEFAULT_NAME);
@@ -66,7 +74,7 @@ public final class Themes {
             if (theme != null) {
                 return theme;
             }
-            findings.add(Finding.error("theme-unknown", "aequa.yaml", "site.theme",
+            findings.add(Finding.error("theme-unknown", "aequa.yaml", place,
                     "There is no theme called \"" + name + "\" in the project's themes/ folder or among aequa's themes.",
                     "Name one of the bundled themes (daylight, newsprint, contrast) or add themes/" + name + "/theme.yaml."));
         } catch (IOException | RuntimeException e) {

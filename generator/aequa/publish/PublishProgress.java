@@ -1,11 +1,11 @@
 package aequa.publish;
 
-import java.io.PrintStream;
+import java.io.PrintWriter;
 import java.util.Locale;
 
 /**
- * Receives progress of a publish, stage by stage. The CLI passes {@link #forTerminal(PrintStream)}; tests and
- * scheduled jobs pass {@link #silent()}. Called from the publishing thread only.
+ * Receives progress of a publish, stage by stage. The CLI passes {@link #forTerminal(PrintWriter)} with the writer
+ * it was given for messages; tests and scheduled jobs pass {@link #silent()}. Called from the publishing thread only.
  */
 public interface PublishProgress {
 
@@ -40,7 +40,7 @@ public interface PublishProgress {
      * One updating line per stage on {@code out} when the process runs in a terminal
      * ({@link System#console()} is not null); silent otherwise, so logs of scheduled jobs stay clean.
      */
-    static PublishProgress forTerminal(PrintStream out) {
+    static PublishProgress forTerminal(PrintWriter out) {
         if (System.console() == null) {
             return silent();
         }

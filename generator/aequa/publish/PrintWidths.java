@@ -1,4 +1,4 @@
-package aequa.cli;
+package aequa.publish;
 
 import java.util.Arrays;
 import java.util.Locale;

@@ -1,0 +1,131 @@
+package aequa.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.net.URISyntaxException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.DynamicTest;
+import org.junit.jupiter.api.TestFactory;
+import org.junit.jupiter.api.io.TempDir;
+
+import aequa.findings.Finding;
+import aequa.findings.Severity;
+import aequa.publish.CheckStep;
+
+/**
+ * The fixture projects of {@code src/test/resources/aequa/fixtures} (its README says how one is made): each
+ * produces exactly the one finding code it names, and {@code audit} and {@code publish} print the same errors
+ * and warnings and exit with the same code, because both run the same check step.
+ */
+class FixtureProjectsTest {
+
+    /** The folder of fixture projects, one sub-folder each. */
+    static Path fixturesFolder() {
+        try {
+            return Path.of(FixtureProjectsTest.class.getResource("/aequa/fixtures").toURI());
+        } catch (URISyntaxException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    /** Every fixture folder, sorted by name. */
+    static List<Path> fixtures() throws IOException {
+        try (Stream<Path> children = Files.list(fixturesFolder())) {
+            return children.filter(Files::isDirectory).sorted().toList();
+        }
+    }
+
+    /** The code a fixture must produce, or "none". */
+    static String expectedCode(Path fixture) throws IOException {
+        return Files.readAllLines(fixture.resolve("expected-finding.txt"), StandardCharsets.UTF_8).get(0).trim();
+    }
+
+    @TestFactory
+    Stream<DynamicTest> eachFixtureGivesItsOneFindingInAuditAndPublishAlike(@TempDir Path tmp) throws IOException {
+        return fixtures().stream().map(fixture -> DynamicTest.dynamicTest(fixture.getFileName().toString(),
+                () -> checkFixture(fixture, tmp.resolve(fixture.getFileName().toString()))));
+    }
+
+    private static void checkFixture(Path fixture, Path work) throws IOException {
+        Path project = build(fixture, work.resolve("project"));
+        Path site = work.resolve("site");
+        String expected = expectedCode(fixture);
+
+        CheckStep.Result checked = CheckStep.run(project, site);
+        Set<String> codes = new TreeSet<>();
+        for (Finding f : checked.findings().list()) {
+            if (f.severity() != Severity.NOTE) {
+                codes.add(f.code());
+            }
+        }
+        Set<String> wanted = expected.equals("none") ? Set.of() : Set.of(expected);
+        assertEquals(wanted, codes, () -> "errors and warnings of " + fixture.getFileName() + ": " + checked.findings().list());
+
+        Run audit = Run.of("audit", project.toString(), "--out", site.toString());
+        Run publish = Run.of("publish", project.toString(), "--out", site.toString());
+        assertEquals(audit.code, publish.code, () -> "exit codes differ:\naudit: " + audit.err + "\npublish: " + publish.err);
+        assertEquals(audit.errorsAndWarnings(), publish.errorsAndWarnings(), "printed findings differ");
+        assertEquals(expected.equals("none") || checked.findings().count(Severity.ERROR) == 0,
+                publish.code == ExitCode.OK.code, publish.err);
+        assertEquals(publish.code == ExitCode.OK.code, Files.isRegularFile(site.resolve("index.html")),
+                "a site is written exactly when publish succeeds");
+    }
+
+    /** The starter project with the fixture's files copied over it and the paths of its remove.txt deleted. */
+    static Path build(Path fixture, Path project) throws IOException {
+        Files.createDirectories(project.getParent());
+        StringWriter ignored = new StringWriter();
+        assertEquals(0, Main.run(new String[] {"scaffold", project.toString()}, new PrintWriter(ignored), new PrintWriter(ignored)));
+        try (Stream<Path> files = Files.walk(fixture)) {
+            for (Path file : files.filter(Files::isRegularFile).sorted(Comparator.naturalOrder()).toList()) {
+                String relative = fixture.relativize(file).toString();
+                if (relative.equals("expected-finding.txt") || relative.equals("remove.txt")) {
+                    continue;
+                }
+                Path target = project.resolve(relative);
+                Files.createDirectories(target.getParent());
+                Files.copy(file, target, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+            }
+        }
+        Path remove = fixture.resolve("remove.txt");
+        if (Files.isRegularFile(remove)) {
+            for (String line : Files.readAllLines(remove, StandardCharsets.UTF_8)) {
+                if (!line.isBlank()) {
+                    assertTrue(Files.deleteIfExists(project.resolve(line.trim())), "remove.txt names a starter file: " + line);
+                }
+            }
+        }
+        return project;
+    }
+
+    /** One command's exit code and what it printed for the user. */
+    private record Run(int code, String err) {
+
+        static Run of(String... args) {
+            StringWriter out = new StringWriter();
+            StringWriter err = new StringWriter();
+            int code = Main.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+            return new Run(code, err.toString());
+        }
+
+        /** The error and warning lines, in order (audit also prints notes; publish also prints its outcome). */
+        List<String> errorsAndWarnings() {
+            List<String> lines = err.lines().filter(l -> l.startsWith("error: ") || l.startsWith("warning: ")).toList();
+            assertFalse(lines.stream().anyMatch(l -> l.contains("more finding")), "a fixture stays below the per-kind limit");
+            return lines;
+        }
+    }
+}
