@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 import aequa.classes.Classification;
 import aequa.classes.Classified;
 import aequa.classes.Classifier;
@@ -35,7 +35,7 @@ record ClassedFigures(Classification classification, ColourRamp ramp) {
         double[] pooled = figures.byRegion().values().stream().flatMap(List::stream)
                 .filter(f -> f.status() == FigureStatus.REPORTED && Double.isFinite(f.normalisedValue()))
                 .mapToDouble(RegionFigure::normalisedValue).toArray();
-        ClassesSpec spec = circles ? new ClassesSpec(ClassMethod.UNCLASSED.configName(), 2, List.of(), null) : map.classes();
+        ClassesSpec spec = circles ? new ClassesSpec(ClassMethod.UNCLASSED, 2, List.of(), null) : map.classes();
         String place = "map \"" + map.id() + "\"";
         Optional<Classification> classes = classify(pooled, spec, place, findings);
         if (classes.isEmpty()) {
@@ -45,10 +45,7 @@ record ClassedFigures(Classification classification, ColourRamp ramp) {
         RampOutcome outcome = ColourRamps.generate(map.colours(), classCount, background,
                 ProjectFile.FILE_NAME, place);
         outcome.findings().forEach(findings::add);
-        if (outcome.ramp().isEmpty()) {
-            return Optional.empty();
-        }
-        ColourRamp ramp = outcome.ramp().get();
+        ColourRamp ramp = outcome.ramp();
         Classification classification = classes.get();
         if (!circles && ramp.fills().size() < classification.classCount()) {
             ClassesSpec fewer = new ClassesSpec(spec.method(), ramp.fills().size(), spec.breaks(), spec.midpoint());

@@ -16,6 +16,7 @@ import aequa.inputs.figures.FigureReaders;
 import aequa.inputs.figures.FigureTable;
 import aequa.inputs.regions.Region;
 import aequa.project.LoadedProject;
+import aequa.project.MapDisplay;
 import aequa.project.MapSpec;
 import aequa.project.ProjectFile;
 import aequa.composite.CompositePlanner;
@@ -95,7 +96,7 @@ final class MapAssembler {
                             map.id(), planar.audit().maxRelativeError(), planar.audit().tolerance()),
                     "This region's outline is probably broken (see findings above); the threshold is 'checks: area-tolerance'."));
         }
-        boolean circles = "circles".equals(map.display());
+        boolean circles = map.display() == MapDisplay.CIRCLES;
         Optional<ClassedFigures> classed = ClassedFigures.of(map, "/maps/" + mapIndex, figures, options.pageBackground(),
                 circles, findings);
         if (classed.isEmpty()) {

@@ -2,6 +2,8 @@ package aequa.classes;
 
 import java.util.List;
 
+import aequa.project.ClassMethod;
+
 /**
  * The classes of a map.
  *

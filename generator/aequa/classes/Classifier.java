@@ -8,6 +8,7 @@ import java.util.Optional;
 import java.util.stream.Collectors;
 
 import aequa.findings.Finding;
+import aequa.project.ClassMethod;
 import aequa.project.ClassesSpec;
 
 /**
@@ -19,9 +20,9 @@ import aequa.project.ClassesSpec;
  * <ul>
  *   <li>NaN means "not classified" (no data, suppressed, not applicable) and is skipped silently; an
  *       infinite value is skipped with a warning (it usually means a division by zero upstream).</li>
- *   <li>Errors in the spec (unknown method, fewer than 2 classes, manual breaks missing or not strictly
+ *   <li>Errors in the spec (fewer than 2 classes, manual breaks missing or not strictly
  *       ascending, diverging without a midpoint) are returned as ERROR findings, never thrown; the
- *       classification is then empty. Codes: {@code classes-unknown-method}, {@code classes-count-too-small},
+ *       classification is then empty. Codes: {@code classes-count-too-small},
  *       {@code classes-manual-breaks-missing}, {@code classes-manual-breaks-not-ascending},
  *       {@code classes-midpoint-missing}.</li>
  *   <li>When fewer classes than asked for are made (all values equal, fewer distinct values than classes,
@@ -46,15 +47,8 @@ public final class Classifier {
      */
     public static Classified classify(double[] values, ClassesSpec spec, String file, String place) {
         List<Finding> findings = new ArrayList<>();
-        Optional<ClassMethod> method = ClassMethod.fromConfigName(spec.method());
-        if (method.isEmpty()) {
-            String known = Arrays.stream(ClassMethod.values()).map(ClassMethod::configName)
-                    .collect(Collectors.joining(", "));
-            findings.add(Finding.error("classes-unknown-method", file, place,
-                    "Unknown classification method \"" + spec.method() + "\".", "Use one of: " + known + "."));
-            return new Classified(Optional.empty(), findings);
-        }
-        checkSpec(method.get(), spec, file, place, findings);
+        ClassMethod method = spec.method();
+        checkSpec(method, spec, file, place, findings);
         if (!findings.isEmpty()) {
             return new Classified(Optional.empty(), findings);
         }
@@ -64,8 +58,8 @@ public final class Classifier {
                     "There is no value to classify.", "Check the join report: no region has a figure."));
             return new Classified(Optional.empty(), findings);
         }
-        Drafted drafted = draft(method.get(), spec, sorted);
-        Classification classification = new Classification(method.get(), boxed(drafted.limits),
+        Drafted drafted = draft(method, spec, sorted);
+        Classification classification = new Classification(method, boxed(drafted.limits),
                 counts(sorted, drafted.limits));
         if (drafted.reduction != null) {
             findings.add(Finding.note("classes-fewer-than-requested", file, place,

@@ -7,6 +7,7 @@ import java.util.Optional;
 import java.util.stream.Collectors;
 
 import aequa.findings.Finding;
+import aequa.project.ColourScheme;
 import aequa.project.ColoursSpec;
 
 /**
@@ -29,7 +30,7 @@ import aequa.project.ColoursSpec;
  * Qualitative sets try equal lightness, then alternating lightness, then a search over lightness, chroma
  * and hue ({@link QualitativeSearch}); their count is never reduced (each fill is a category), and their
  * fills also keep 3:1 against dark lines. A ramp that still fails is returned with its failed checks and
- * the WARNING {@code colours-ramp-fails-checks}. An unknown scheme is the ERROR {@code colours-unknown-scheme}.
+ * the WARNING {@code colours-ramp-fails-checks}.
  */
 public final class ColourRamps {
 
@@ -62,22 +63,17 @@ public final class ColourRamps {
         }
         NonTextColours nonText = NonTextColours.forBackground(background);
         List<Finding> findings = new ArrayList<>();
-        String scheme = spec.scheme();
-        if (!List.of("sequential", "diverging", "qualitative").contains(scheme)) {
-            findings.add(Finding.error("colours-unknown-scheme", file, place,
-                    "Unknown colour scheme \"" + scheme + "\".", "Use sequential, diverging or qualitative."));
-            return new RampOutcome(Optional.empty(), nonText, findings);
-        }
+        ColourScheme scheme = spec.scheme();
         boolean lightPage = NonTextColours.isLight(background);
         double hue = normalHue(spec.hue());
         double hueLow = normalHue(spec.hueLow());
-        ColourRamp ramp = "qualitative".equals(scheme)
+        ColourRamp ramp = scheme == ColourScheme.QUALITATIVE
                 ? qualitative(hue, classCount, lightPage, nonText, file, place, findings)
                 : ordered(scheme, hue, hueLow, classCount, lightPage, nonText, file, place, findings);
         if (ramp.fills().size() < classCount) {
             findings.add(Finding.warning("colours-fewer-classes", file, place,
                     String.format(Locale.ROOT, "Only %d %s classes can be told apart by every reader; %d were asked for.",
-                            ramp.fills().size(), scheme, classCount),
+                            ramp.fills().size(), scheme.configName(), classCount),
                     "The map uses " + ramp.fills().size() + " classes; ask for that many to silence this."));
         }
         if (!ramp.passes()) {
@@ -87,16 +83,16 @@ public final class ColourRamps {
                     "The colours fail these checks: " + failed + ".",
                     "Try other hues, fewer classes or another scheme."));
         }
-        return new RampOutcome(Optional.of(ramp), nonText, findings);
+        return new RampOutcome(ramp, nonText, findings);
     }
 
-    private static ColourRamp ordered(String scheme, double hue, double hueLow, int classCount, boolean lightPage,
+    private static ColourRamp ordered(ColourScheme scheme, double hue, double hueLow, int classCount, boolean lightPage,
                                       NonTextColours nonText, String file, String place, List<Finding> findings) {
         RampShapes.Shape shape = lightPage
                 ? new RampShapes.Shape(QUIET_ON_LIGHT, LOUD_ON_LIGHT, MAX_CHROMA)
                 : new RampShapes.Shape(QUIET_ON_DARK, LOUD_ON_DARK, MAX_CHROMA);
         ColourRamp ramp = build(scheme, hue, hueLow, classCount, shape, nonText);
-        int minimum = "diverging".equals(scheme) ? 3 : 2;
+        int minimum = scheme == ColourScheme.DIVERGING ? 3 : 2;
         for (int count = classCount - 1; !ramp.passes() && count >= minimum; count--) {
             findings.add(adjusted(file, place, "Tried " + count + " classes instead of " + classCount + "."));
             ramp = build(scheme, hue, hueLow, count, shape, nonText);
@@ -108,21 +104,21 @@ public final class ColourRamps {
                                           String file, String place, List<Finding> findings) {
         double lightness = lightPage ? 0.74 : 0.40;
         double other = lightPage ? 0.60 : 0.52;
-        ColourRamp ramp = withChecks("qualitative",
+        ColourRamp ramp = withChecks(ColourScheme.QUALITATIVE,
                 RampShapes.qualitative(hue, classCount, lightness, other, QUALITATIVE_CHROMA, false), nonText);
         if (ramp.passes()) {
             return ramp;
         }
         findings.add(adjusted(file, place, String.format(Locale.ROOT,
                 "Alternated lightness %.2f and %.2f (OKLab L) so categories stay apart without hue.", lightness, other)));
-        ramp = withChecks("qualitative",
+        ramp = withChecks(ColourScheme.QUALITATIVE,
                 RampShapes.qualitative(hue, classCount, lightness, other, QUALITATIVE_CHROMA, true), nonText);
         if (ramp.passes()) {
             return ramp;
         }
         double low = lightPage ? QUALITATIVE_LOWEST_ON_LIGHT : QUALITATIVE_LOWEST_ON_DARK;
         double high = lightPage ? QUALITATIVE_HIGHEST_ON_LIGHT : QUALITATIVE_HIGHEST_ON_DARK;
-        ColourRamp searched = withChecks("qualitative", new QualitativeSearch(nonText, low, high)
+        ColourRamp searched = withChecks(ColourScheme.QUALITATIVE, new QualitativeSearch(nonText, low, high)
                 .search(RampShapes.qualitativePoints(hue, classCount, lightness, other, QUALITATIVE_CHROMA)), nonText);
         if (smallestCheckedDifference(searched) <= smallestCheckedDifference(ramp)) {
             return ramp;
@@ -138,15 +134,15 @@ public final class ColourRamps {
                 .mapToDouble(ColourRamp.RampCheck::measured).min().orElse(0);
     }
 
-    private static ColourRamp build(String scheme, double hue, double hueLow, int count, RampShapes.Shape shape,
+    private static ColourRamp build(ColourScheme scheme, double hue, double hueLow, int count, RampShapes.Shape shape,
                                     NonTextColours nonText) {
-        List<Rgb> fills = "diverging".equals(scheme)
+        List<Rgb> fills = scheme == ColourScheme.DIVERGING
                 ? RampShapes.diverging(hueLow, hue, count, shape)
                 : RampShapes.sequential(hue, count, shape);
         return withChecks(scheme, fills, nonText);
     }
 
-    private static ColourRamp withChecks(String scheme, List<Rgb> fills, NonTextColours nonText) {
+    private static ColourRamp withChecks(ColourScheme scheme, List<Rgb> fills, NonTextColours nonText) {
         List<Rgb> labels = fills.stream().map(WcagContrast::labelColour).collect(Collectors.toList());
         return new ColourRamp(scheme, fills, labels, RampChecks.run(scheme, fills, labels, nonText));
     }

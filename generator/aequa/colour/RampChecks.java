@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import aequa.colour.ColourRamp.RampCheck;
+import aequa.project.ColourScheme;
 
 /**
  * The checks every generated ramp carries in {@link ColourRamp#checks()}.
@@ -42,8 +43,8 @@ final class RampChecks {
     private RampChecks() {
     }
 
-    static List<RampCheck> run(String scheme, List<Rgb> fills, List<Rgb> labels, NonTextColours nonText) {
-        boolean qualitative = "qualitative".equals(scheme);
+    static List<RampCheck> run(ColourScheme scheme, List<Rgb> fills, List<Rgb> labels, NonTextColours nonText) {
+        boolean qualitative = scheme == ColourScheme.QUALITATIVE;
         List<RampCheck> checks = new ArrayList<>();
         for (ColourVision vision : ColourVision.values()) {
             double smallest = qualitative ? smallestPairwise(fills, vision) : smallestAdjacent(fills, vision);
@@ -51,7 +52,7 @@ final class RampChecks {
             checks.add(atLeast(name, smallest, DISTINGUISHABLE_DELTA_E));
         }
         if (!qualitative) {
-            double step = smallestLightnessStep(fills, "diverging".equals(scheme), NonTextColours.isLight(nonText.background()));
+            double step = smallestLightnessStep(fills, scheme == ColourScheme.DIVERGING, NonTextColours.isLight(nonText.background()));
             checks.add(atLeast("lightness-step", step, MINIMUM_LIGHTNESS_STEP));
         }
         double label = Double.POSITIVE_INFINITY;

@@ -1,19 +1,17 @@
 package aequa.colour;
 
 import java.util.List;
-import java.util.Optional;
 
 import aequa.findings.Finding;
 
 /**
  * What {@link ColourRamps#generate} produced.
  *
- * @param ramp     the fills with their label colours and checks; empty only for an unknown scheme. It may
- *                 hold fewer fills than classes were asked for (see {@code colours-fewer-classes})
+ * @param ramp     the fills with their label colours and checks. It may hold fewer fills than classes were asked for (see {@code colours-fewer-classes})
  * @param nonText  the border and no-data hatch colours the ramp was checked against
- * @param findings adjustments made (NOTE), fewer classes or failed checks (WARNING), spec errors (ERROR)
+ * @param findings adjustments made (NOTE), fewer classes or failed checks (WARNING)
  */
-public record RampOutcome(Optional<ColourRamp> ramp, NonTextColours nonText, List<Finding> findings) {
+public record RampOutcome(ColourRamp ramp, NonTextColours nonText, List<Finding> findings) {
 
     public RampOutcome {
         findings = List.copyOf(findings);

@@ -3,7 +3,8 @@ package aequa.drawing;
 import java.util.List;
 
 import aequa.atlas.MapModel;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
+import aequa.project.MapDisplay;
 
 /** The text alternative of a map: what it shows, how many regions, classes and periods, which projection. */
 final class Descriptions {
@@ -12,7 +13,7 @@ final class Descriptions {
     }
 
     static String of(MapModel model) {
-        boolean circles = "circles".equals(model.spec().display());
+        boolean circles = model.spec().display() == MapDisplay.CIRCLES;
         StringBuilder text = new StringBuilder();
         text.append(circles ? "Proportional-circle map of " : "Choropleth map of ").append(model.spec().title());
         if (!model.spec().unit().isBlank()) {

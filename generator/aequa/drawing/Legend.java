@@ -13,7 +13,7 @@ import org.locationtech.jts.geom.GeometryFactory;
 import aequa.atlas.MapModel;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 import aequa.classes.Classification;
 import aequa.classes.FigureText;
 import aequa.colour.Rgb;

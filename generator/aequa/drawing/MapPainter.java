@@ -12,6 +12,7 @@ import aequa.atlas.MapModel;
 import aequa.atlas.MapPart;
 import aequa.atlas.MapRegion;
 import aequa.colour.Rgb;
+import aequa.project.MapDisplay;
 
 /**
  * Paints one {@link MapModel} onto a {@link Canvas}: the single drawing path behind SVG, PNG and PDF.
@@ -39,7 +40,7 @@ final class MapPainter {
         this.model = model;
         this.theme = theme;
         this.options = options;
-        this.circles = "circles".equals(model.spec().display());
+        this.circles = model.spec().display() == MapDisplay.CIRCLES;
         this.wholeGlobe = GlobeLines.wholeGlobe(model.projection().projection());
         // the graticule of a composite map's main projection would be false in its framed parts
         this.graticule = !model.composite() && (options.graticule() == DrawOptions.Graticule.ALWAYS

@@ -4,7 +4,7 @@ import java.util.List;
 
 import aequa.atlas.MapModel;
 import aequa.atlas.RegionValue;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 import aequa.colour.Rgb;
 import aequa.statistics.FigureStatus;
 

@@ -11,7 +11,7 @@ package aequa.project;
  *                          the join has half failed (keys that lost leading zeros, another key column) and the
  *                          build stops (0 = off)
  */
-public record ChecksSpec(Double areaTolerance, String missingFigures, Double unreliableBelow, Double marginAbove,
+public record ChecksSpec(Double areaTolerance, MissingFigures missingFigures, Double unreliableBelow, Double marginAbove,
                          Double minMatchedPercent) {
 
     static final ChecksSpec DEFAULT = new ChecksSpec(null, null, null, null, null);
@@ -25,7 +25,7 @@ public record ChecksSpec(Double areaTolerance, String missingFigures, Double unr
 
     public ChecksSpec {
         areaTolerance = areaTolerance == null ? 1e-4 : areaTolerance;
-        missingFigures = missingFigures == null ? "warning" : missingFigures;
+        missingFigures = missingFigures == null ? MissingFigures.WARNING : missingFigures;
         unreliableBelow = unreliableBelow == null ? 0.0 : unreliableBelow;
         marginAbove = marginAbove == null ? 0.0 : marginAbove;
         minMatchedPercent = minMatchedPercent == null ? DEFAULT_MIN_MATCHED_PERCENT : minMatchedPercent;

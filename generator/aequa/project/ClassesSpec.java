@@ -9,12 +9,12 @@ import java.util.List;
  * @param breaks   the inner class limits, for {@code manual}
  * @param midpoint the value diverging classes are centred on
  */
-public record ClassesSpec(String method, Integer count, List<Double> breaks, Double midpoint) {
+public record ClassesSpec(ClassMethod method, Integer count, List<Double> breaks, Double midpoint) {
 
     static final ClassesSpec DEFAULT = new ClassesSpec(null, null, null, null);
 
     public ClassesSpec {
-        method = method == null ? "quantile" : method;
+        method = method == null ? ClassMethod.QUANTILE : method;
         count = count == null ? 5 : count;
         breaks = breaks == null ? List.of() : List.copyOf(breaks);
     }

@@ -23,15 +23,15 @@ import java.util.List;
  * @param headerRow       workbooks: the row (counted from 1, as the spreadsheet shows it) holding the column names;
  *                        null to find it (the first row naming the key column, and the columns the layout needs)
  */
-public record FigureSourceSpec(String file, String table, String key, String layout, String indicatorColumn,
+public record FigureSourceSpec(String file, String table, String key, TableLayout layout, String indicatorColumn,
                                String periodColumn, String valueColumn, String delimiter, String decimal,
                                String thousands, List<String> missing, List<String> suppressed,
-                               List<String> notApplicable, String keyMatching, String sheet, Integer headerRow) {
+                               List<String> notApplicable, KeyMatching keyMatching, String sheet, Integer headerRow) {
 
     public FigureSourceSpec {
         table = table == null ? "" : table;
         key = key == null ? "key" : key;
-        layout = layout == null ? "wide" : layout;
+        layout = layout == null ? TableLayout.WIDE : layout;
         indicatorColumn = indicatorColumn == null ? "indicator" : indicatorColumn;
         periodColumn = periodColumn == null ? "" : periodColumn;
         valueColumn = valueColumn == null ? "value" : valueColumn;
@@ -41,15 +41,15 @@ public record FigureSourceSpec(String file, String table, String key, String lay
         missing = missing == null ? List.of("", "NA", "..") : List.copyOf(missing);
         suppressed = suppressed == null ? List.of() : List.copyOf(suppressed);
         notApplicable = notApplicable == null ? List.of() : List.copyOf(notApplicable);
-        keyMatching = keyMatching == null ? "exact" : keyMatching;
+        keyMatching = keyMatching == null ? KeyMatching.EXACT : keyMatching;
         sheet = sheet == null ? "" : sheet;
     }
 
     /** A source that is not a workbook. */
-    public FigureSourceSpec(String file, String table, String key, String layout, String indicatorColumn,
+    public FigureSourceSpec(String file, String table, String key, TableLayout layout, String indicatorColumn,
                             String periodColumn, String valueColumn, String delimiter, String decimal,
                             String thousands, List<String> missing, List<String> suppressed,
-                            List<String> notApplicable, String keyMatching) {
+                            List<String> notApplicable, KeyMatching keyMatching) {
         this(file, table, key, layout, indicatorColumn, periodColumn, valueColumn, delimiter, decimal, thousands,
                 missing, suppressed, notApplicable, keyMatching, "", null);
     }

@@ -11,13 +11,13 @@ import java.util.List;
  * @param figures     id of a statistics source
  * @param indicator   the indicator (wide layout: its column) to map
  * @param periods     the periods to show; empty for the latest; several make small multiples with shared classes
- * @param measure     {@code rate} (already a rate or share), {@code count} (a number of things or people), or
- *                    empty (undeclared: taken as a rate unless the values look like counts)
- * @param normalise   {@code none}, {@code area} (per km2 of geodesic area) or {@code column} (per {@code per})
+ * @param measure     rate (already a rate or share), count (a number of things or people), or undeclared
+ *                    (taken as a rate unless the values look like counts)
+ * @param normalise   none, area (per km2 of geodesic area) or column (per {@code per})
  * @param per         the denominator column when normalising by column
  * @param multiplier  what the normalised value is multiplied by (for example 1000 for "per 1,000 people")
  * @param unit        the unit readers see, for example "clinics per 1,000 km2"
- * @param display     {@code choropleth} or {@code circles} (proportional symbols, for counts)
+ * @param display     choropleth or circles (proportional symbols, for counts)
  * @param classes     the classification
  * @param colours     the colour ramp
  * @param projection  projection settings overriding the project-wide ones
@@ -31,20 +31,20 @@ import java.util.List;
  * @param insets      how detached parts are drawn; null to follow the region source's setting
  */
 public record MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
-                      String measure, String normalise, String per, Double multiplier, String unit, String display,
-                      ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
+                      Measure measure, Normalisation normalise, String per, Double multiplier, String unit,
+                      MapDisplay display, ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
                       String marginColumn, String notes, String source, String asOf, List<Double> range,
                       InsetsSpec insets) {
 
     public MapSpec {
         title = title == null ? id : title;
         periods = periods == null ? List.of() : List.copyOf(periods);
-        measure = measure == null ? "" : measure;
-        normalise = normalise == null ? "none" : normalise;
+        measure = measure == null ? Measure.UNDECLARED : measure;
+        normalise = normalise == null ? Normalisation.NONE : normalise;
         per = per == null ? "" : per;
         multiplier = multiplier == null ? 1.0 : multiplier;
         unit = unit == null ? "" : unit;
-        display = display == null ? "choropleth" : display;
+        display = display == null ? MapDisplay.CHOROPLETH : display;
         classes = classes == null ? ClassesSpec.DEFAULT : classes;
         colours = colours == null ? ColoursSpec.DEFAULT : colours;
         eventsColumn = eventsColumn == null ? "" : eventsColumn;
@@ -57,7 +57,7 @@ public record MapSpec(String id, String title, String regions, String figures, S
 
     /** A map that follows its region source's {@code insets} setting (the record's shape before insets). */
     public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
-                   String measure, String normalise, String per, Double multiplier, String unit, String display,
+                   Measure measure, Normalisation normalise, String per, Double multiplier, String unit, MapDisplay display,
                    ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
                    String marginColumn, String notes, String source, String asOf, List<Double> range) {
         this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
@@ -66,7 +66,7 @@ public record MapSpec(String id, String title, String regions, String figures, S
 
     /** A map without a declared range (the record's shape before {@code range} was added). */
     public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
-                   String measure, String normalise, String per, Double multiplier, String unit, String display,
+                   Measure measure, Normalisation normalise, String per, Double multiplier, String unit, MapDisplay display,
                    ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
                    String marginColumn, String notes, String source, String asOf) {
         this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,

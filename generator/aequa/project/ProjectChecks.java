@@ -69,10 +69,8 @@ final class ProjectChecks {
         onlyFor(at + "/sheet", source.sheet(), source.file(), List.of(".xlsx", ".xlsm"), "sheet", "a sheet of a workbook");
         onlyFor(at + "/header-row", source.headerRow() == null ? "" : source.headerRow().toString(), source.file(),
                 List.of(".xlsx", ".xlsm"), "header-row", "the header row of a workbook sheet");
-        oneOf(at + "/layout", source.layout(), List.of("wide", "long"));
         oneOf(at + "/decimal", source.decimal(), List.of(".", ","));
         oneOf(at + "/delimiter", source.delimiter(), List.of("", ",", ";", "\t", "|"));
-        oneOf(at + "/key-matching", source.keyMatching(), List.of("exact", "relaxed"));
     }
 
     private void checkChecks() {
@@ -81,7 +79,6 @@ final class ProjectChecks {
             error("project-bad-value", "/checks/area-tolerance", "'area-tolerance' must be a positive number.",
                     "The default, 1e-4, allows 0.01 % between a region's drawn and true area.");
         }
-        oneOf("/checks/missing-figures", checks.missingFigures(), List.of("warning", "error"));
         if (!(checks.minMatchedPercent() >= 0 && checks.minMatchedPercent() <= 100)) {
             error("project-bad-value", "/checks/min-matched-percent",
                     "'min-matched-percent' must be a number from 0 to 100.",
@@ -103,18 +100,14 @@ final class ProjectChecks {
             error("project-missing-key", at + "/indicator", "Map '" + map.id() + "' names no indicator.",
                     "Set 'indicator' to the column (wide layout) or indicator name (long layout) to map.");
         }
-        oneOf(at + "/measure", map.measure(), List.of("", "rate", "count"));
-        oneOf(at + "/normalise", map.normalise(), List.of("none", "area", "column"));
-        if ("column".equals(map.normalise()) && map.per().isBlank()) {
+        if (map.normalise() == Normalisation.COLUMN && map.per().isBlank()) {
             error("project-missing-key", at + "/per", "Map '" + map.id() + "' normalises by a column but names none.",
                     "Set 'per' to the denominator column, for example 'population'.");
         }
-        oneOf(at + "/display", map.display(), List.of("choropleth", "circles"));
         checkClasses(at + "/classes", map.classes());
         if (map.insets() != null) {
             InsetsChecks.check(at + "/insets", map.insets(), this::error);
         }
-        oneOf(at + "/colours/scheme", map.colours().scheme(), List.of("sequential", "diverging", "qualitative"));
         if (map.colours().hue() < 0 || map.colours().hue() > 360) {
             error("project-bad-value", at + "/colours/hue", "'hue' must be between 0 and 360 degrees.", "");
         }
@@ -125,7 +118,7 @@ final class ProjectChecks {
             error("project-bad-value", at + "/count", "'count' must be between 2 and 9 classes.",
                     "Readers tell apart at most about seven shades of one hue (common practice).");
         }
-        if ("manual".equals(classes.method())) {
+        if (classes.method() == ClassMethod.MANUAL) {
             List<Double> breaks = classes.breaks();
             boolean ascending = !breaks.isEmpty();
             for (int i = 1; i < breaks.size(); i++) {

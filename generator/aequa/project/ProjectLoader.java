@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Optional;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
@@ -21,8 +22,8 @@ import aequa.findings.Finding;
 import aequa.findings.Findings;
 
 /**
- * Reads and checks {@value ProjectFile#FILE_NAME}. Syntax errors, unknown keys and wrong types are reported
- * with line and column; then {@link ProjectChecks} checks references between sections and that every named
+ * Reads and checks {@value ProjectFile#FILE_NAME}. Syntax errors, unknown keys, unknown words of a mode
+ * ({@link ConfigWord}) and wrong types are reported with line and column; then {@link ProjectChecks} checks references between sections and that every named
  * file exists. Returns empty when the file cannot be used at all; all problems go to {@code findings}.
  */
 public final class ProjectLoader {
@@ -33,6 +34,7 @@ public final class ProjectLoader {
             .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
             .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
+            .addModule(ConfigWordReader.module())
             .build();
 
     private ProjectLoader() {
@@ -58,11 +60,16 @@ public final class ProjectLoader {
                     "The project file cannot be read: " + e.getMessage(), "Check the file's permissions and encoding (UTF-8)."));
             return Optional.empty();
         }
+        if (yaml.lines().allMatch(line -> line.isBlank() || line.strip().startsWith("#") || line.strip().equals("---"))) {
+            // Jackson reports a file without content as a type mismatch at line 1; say what it is
+            return empty(findings);
+        }
         ProjectFile project;
         YamlLocations locations = null;
+        List<ConfigWordReader.UnknownWord> unknownWords = ConfigWordReader.newList();
         try {
             locations = YamlLocations.scan(yaml);
-            project = YAML.readValue(yaml, ProjectFile.class);
+            project = YAML.readerFor(ProjectFile.class).withAttribute(ConfigWordReader.UNKNOWN_WORDS, unknownWords).readValue(yaml);
         } catch (JsonProcessingException e) {
             findings.add(describe(e, locations));
             return Optional.empty();
@@ -71,15 +78,23 @@ public final class ProjectLoader {
             return Optional.empty();
         }
         if (project == null) {
-            findings.add(Finding.error("project-file-empty", ProjectFile.FILE_NAME, "",
-                    "The project file is empty.", "Run 'aequa scaffold' in a new folder to see a minimal project file."));
-            return Optional.empty();
+            return empty(findings);
         }
         int before = findings.list().size();
+        for (ConfigWordReader.UnknownWord unknown : unknownWords) {
+            findings.add(Finding.error("project-unknown-value", ProjectFile.FILE_NAME, YamlLocations.describe(unknown.location()),
+                    "'" + unknown.word() + "' is not a known value here.", "Use one of: " + unknown.choices() + "."));
+        }
         new ProjectChecks(dir, project, locations, findings).run();
         boolean broken = findings.list().subList(before, findings.list().size()).stream()
                 .anyMatch(f -> f.severity() == aequa.findings.Severity.ERROR);
         return broken ? Optional.empty() : Optional.of(new LoadedProject(dir, project, locations));
+    }
+
+    private static Optional<LoadedProject> empty(Findings findings) {
+        findings.add(Finding.error("project-file-empty", ProjectFile.FILE_NAME, "",
+                "The project file is empty.", "Run 'aequa scaffold' in a new folder to see a minimal project file."));
+        return Optional.empty();
     }
 
     private static Finding describe(JsonProcessingException e, YamlLocations locations) {

@@ -10,13 +10,14 @@ import aequa.atlas.MapModel;
 import aequa.atlas.MapPart;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 import aequa.classes.Classification;
 import aequa.classes.FigureText;
 import aequa.pages.FiguresView;
 import aequa.pages.IndexView;
 import aequa.pages.MapPageView;
 import aequa.pages.NumberText;
+import aequa.project.MapDisplay;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionParameter;
 import aequa.statistics.FigureStatus;
@@ -152,7 +153,7 @@ final class MapViews {
     }
 
     private static boolean circles(MapModel map) {
-        return "circles".equals(map.spec().display());
+        return map.spec().display() == MapDisplay.CIRCLES;
     }
 
     /** What the circles of a proportional-symbol map show, and what the largest stands for; empty otherwise. */

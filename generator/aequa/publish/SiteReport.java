@@ -20,7 +20,7 @@ import aequa.atlas.MapPart;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
 import aequa.findings.Finding;
-import aequa.inputs.figures.SpecWords;
+import aequa.project.ConfigWord;
 import aequa.projection.DistortionSpread;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionParameter;
@@ -150,7 +150,7 @@ final class SiteReport {
         map.classification().limits().forEach(classes.putArray("breaks")::add);
         map.classification().counts().forEach(classes.putArray("counts")::add);
         ObjectNode colours = node.putObject("colours");
-        colours.put("scheme", map.ramp().scheme());
+        colours.put("scheme", map.ramp().scheme().configName());
         map.ramp().fills().forEach(fill -> colours.withArray("fills").add(fill.hex()));
         colours.put("checksPassed", map.ramp().passes());
         map.notices().forEach(node.putArray("notices")::add);
@@ -249,7 +249,7 @@ final class SiteReport {
 
     private static void figure(ObjectNode node, String period, RegionValue v) {
         node.put("period", period);
-        node.put("status", SpecWords.of(v.status()));
+        node.put("status", ConfigWord.kebab(v.status()));
         number(node, "value", v.value());
         number(node, "normalisedValue", v.normalisedValue());
         if (v.classIndex() < 0) {

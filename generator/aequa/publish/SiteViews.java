@@ -8,13 +8,16 @@ import com.fasterxml.jackson.databind.JsonNode;
 
 import aequa.atlas.Atlas;
 import aequa.atlas.MapModel;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 import aequa.pages.ChangesView;
 import aequa.pages.IndexView;
 import aequa.pages.MethodView;
 import aequa.pages.NumberText;
 import aequa.pages.SiteView;
+import aequa.project.MapDisplay;
 import aequa.project.MapSpec;
+import aequa.project.Measure;
+import aequa.project.Normalisation;
 import aequa.project.SiteSpec;
 import aequa.projection.ProjectionChoice;
 
@@ -74,11 +77,11 @@ final class SiteViews {
     static String normalisation(MapSpec spec) {
         String times = spec.multiplier() == 1.0 ? "" : ", multiplied by " + NumberText.of(spec.multiplier());
         String sentence = switch (spec.normalise()) {
-            case "area" -> "Each figure is divided by the region's area on the ellipsoid in km²" + times + ".";
-            case "column" -> "Each figure is divided by " + spec.per() + times + ".";
-            default -> "The figures are mapped as given" + times + ".";
+            case AREA -> "Each figure is divided by the region's area on the ellipsoid in km²" + times + ".";
+            case COLUMN -> "Each figure is divided by " + spec.per() + times + ".";
+            case NONE -> "The figures are mapped as given" + times + ".";
         };
-        if ("count".equals(spec.measure()) && "none".equals(spec.normalise()) && "choropleth".equals(spec.display())) {
+        if (spec.measure() == Measure.COUNT && spec.normalise() == Normalisation.NONE && spec.display() == MapDisplay.CHOROPLETH) {
             sentence += " They are counts: larger regions tend to have larger counts, so compare with care.";
         }
         return sentence;

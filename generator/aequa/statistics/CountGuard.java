@@ -6,6 +6,9 @@ import java.util.Locale;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
+import aequa.project.MapDisplay;
+import aequa.project.Measure;
+import aequa.project.Normalisation;
 import aequa.project.ProjectFile;
 
 /**

@@ -18,7 +18,8 @@ import aequa.findings.Severity;
 import aequa.inputs.figures.CellStatus;
 import aequa.inputs.figures.FigureCell;
 import aequa.inputs.figures.FigureTable;
-import aequa.inputs.figures.KeyMatching;
+import aequa.project.KeyMatching;
+import aequa.project.MissingFigures;
 
 /**
  * Joins the cells a map uses (its indicator, and the denominator, events and margin indicators when set)

@@ -7,7 +7,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
-import aequa.inputs.figures.KeyMatching;
+import aequa.project.KeyMatching;
 
 /**
  * Finds the geometry region a statistics key belongs to: an exact match first; under

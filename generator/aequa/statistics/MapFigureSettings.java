@@ -4,14 +4,17 @@ import java.util.List;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
-import aequa.inputs.figures.SpecWords;
 import aequa.project.ChecksSpec;
+import aequa.project.MapDisplay;
 import aequa.project.MapSpec;
+import aequa.project.Measure;
+import aequa.project.MissingFigures;
+import aequa.project.Normalisation;
 import aequa.project.ProjectFile;
 
 /**
- * The parts of a {@link MapSpec} and {@link ChecksSpec} the statistics stage uses, parsed once into enums
- * and numbers, with contradictions reported as error findings on the project file.
+ * The parts of a {@link MapSpec} and {@link ChecksSpec} the statistics stage uses (their modes are enums
+ * already, read where the project file is read), with contradictions reported as error findings on the project file.
  *
  * @param mapId                the map's id
  * @param indicator            the indicator mapped
@@ -42,14 +45,10 @@ public record MapFigureSettings(String mapId, String indicator, List<String> per
 
     public static MapFigureSettings parse(MapSpec map, ChecksSpec checks, Findings findings) {
         String where = "map \"" + map.id() + "\", ";
-        Measure measure = map.measure().isBlank() ? Measure.UNDECLARED
-                : SpecWords.parse(Measure.class, map.measure(), Measure.UNDECLARED, where + "measure", findings);
-        Normalisation normalisation = SpecWords.parse(Normalisation.class, map.normalise(), Normalisation.NONE,
-                where + "normalise", findings);
-        MapDisplay display = SpecWords.parse(MapDisplay.class, map.display(), MapDisplay.CHOROPLETH,
-                where + "display", findings);
-        MissingFigures missing = SpecWords.parse(MissingFigures.class, checks.missingFigures(),
-                MissingFigures.WARNING, "checks, missing-figures", findings);
+        Measure measure = map.measure();
+        Normalisation normalisation = map.normalise();
+        MapDisplay display = map.display();
+        MissingFigures missing = checks.missingFigures();
         if (normalisation == Normalisation.COLUMN && map.per().isBlank()) {
             findings.add(Finding.error("project-missing-setting", ProjectFile.FILE_NAME, where + "per",
                     "normalise: column needs the denominator column.",

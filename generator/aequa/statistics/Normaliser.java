@@ -7,6 +7,7 @@ import aequa.findings.Findings;
 import aequa.inputs.figures.CellStatus;
 import aequa.inputs.figures.FigureCell;
 import aequa.inputs.figures.FigureTable;
+import aequa.project.Normalisation;
 
 /**
  * Builds the {@link RegionFigure} of one region and period from its joined cells: the status, the value as

@@ -7,8 +7,11 @@ import java.util.Set;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
+import aequa.project.ConfigWord;
 import aequa.project.FigureSourceSpec;
+import aequa.project.KeyMatching;
 import aequa.project.ProjectFile;
+import aequa.project.TableLayout;
 
 /**
  * A {@link FigureSourceSpec} with its words parsed once into enums and checked for contradictions.
@@ -47,10 +50,8 @@ public record FigureSourceSettings(String file, String table, String keyColumn, 
      */
     public static FigureSourceSettings parse(FigureSourceSpec spec, Findings findings) {
         String where = "figures \"" + spec.file() + "\", ";
-        TableLayout layout = SpecWords.parse(TableLayout.class, spec.layout(), TableLayout.WIDE, where + "layout",
-                findings);
-        KeyMatching keyMatching = SpecWords.parse(KeyMatching.class, spec.keyMatching(), KeyMatching.EXACT,
-                where + "key-matching", findings);
+        TableLayout layout = spec.layout();
+        KeyMatching keyMatching = spec.keyMatching();
         FieldSeparator separator = parseSeparator(spec.delimiter(), where + "delimiter", findings);
         DecimalMark decimal = parseDecimal(spec.decimal(), where + "decimal", findings);
         String thousands = spec.thousands();
@@ -138,7 +139,7 @@ public record FigureSourceSettings(String file, String table, String keyColumn, 
     }
 
     private static String specKey(CellStatus status) {
-        return status == CellStatus.NO_DATA ? "missing" : SpecWords.of(status);
+        return status == CellStatus.NO_DATA ? "missing" : ConfigWord.kebab(status);
     }
 
     static String describe(CellStatus status) {

@@ -9,6 +9,8 @@ import java.util.SortedSet;
 import java.util.TreeMap;
 import java.util.TreeSet;
 
+import aequa.project.KeyMatching;
+
 /**
  * The figures of one statistics source, as cells keyed by region key, indicator and period, in source
  * order. Immutable. Duplicate keys are kept (the join reports them), and so are malformed cells.

@@ -10,6 +10,7 @@ import java.util.stream.IntStream;
 import aequa.findings.Excerpt;
 import aequa.findings.Finding;
 import aequa.findings.Findings;
+import aequa.project.TableLayout;
 
 /**
  * Turns the rows of a source (CSV records or database result rows) into {@link FigureCell}s, for either

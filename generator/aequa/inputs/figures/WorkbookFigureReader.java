@@ -22,6 +22,7 @@ import org.dhatim.fastexcel.reader.Sheet;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
+import aequa.project.TableLayout;
 
 /**
  * Reads one sheet of a spreadsheet workbook (.xlsx, ECMA-376 Office Open XML) as a figures table, streaming its

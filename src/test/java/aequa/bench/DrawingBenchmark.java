@@ -15,7 +15,7 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 import aequa.atlas.MapModel;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 import aequa.drawing.DrawnMap;
 import aequa.drawing.MapDrawings;
 import aequa.drawing.MapFixtures;

@@ -18,6 +18,7 @@ import org.openjdk.jmh.annotations.Warmup;
 
 import aequa.classes.Classified;
 import aequa.classes.Classifier;
+import aequa.project.ClassMethod;
 import aequa.project.ClassesSpec;
 
 /**
@@ -36,7 +37,7 @@ public class NaturalBreaksBenchmark {
     public int size;
 
     private double[] values;
-    private final ClassesSpec spec = new ClassesSpec("natural-breaks", 7, List.of(), null);
+    private final ClassesSpec spec = new ClassesSpec(ClassMethod.NATURAL_BREAKS, 7, List.of(), null);
 
     @Setup
     public void makeValues() {

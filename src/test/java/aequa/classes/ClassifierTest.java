@@ -12,7 +12,9 @@ import org.junit.jupiter.api.Test;
 
 import aequa.findings.Finding;
 import aequa.findings.Severity;
+import aequa.project.ClassMethod;
 import aequa.project.ClassesSpec;
+import aequa.project.Words;
 
 /** The classifier front door: methods, spec errors as findings, ties, NaN policy. */
 class ClassifierTest {
@@ -20,7 +22,7 @@ class ClassifierTest {
     private static final double[] ONE_TO_TEN = {1, 2, 3, 4, 5, 6, 7, 8, 9, 10};
 
     private static Classified run(double[] values, String method, Integer count, List<Double> breaks, Double midpoint) {
-        return Classifier.classify(values, new ClassesSpec(method, count, breaks, midpoint), "aequa.yaml", "map \"m\"");
+        return Classifier.classify(values, new ClassesSpec(Words.of(ClassMethod.class, method), count, breaks, midpoint), "aequa.yaml", "map \"m\"");
     }
 
     private static Classification classes(double[] values, String method, Integer count) {
@@ -31,7 +33,6 @@ class ClassifierTest {
     void specErrorsAreFindingsNotExceptions() {
         // each invalid spec and the one problem it must produce
         Object[][] table = {
-                {"jenks", 5, null, null, "classes-unknown-method"},
                 {"quantile", 1, null, null, "classes-count-too-small"},
                 {"natural-breaks", 0, null, null, "classes-count-too-small"},
                 {"manual", 3, List.of(), null, "classes-manual-breaks-missing"},

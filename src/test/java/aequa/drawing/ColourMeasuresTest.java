@@ -57,8 +57,8 @@ class ColourMeasuresTest {
             for (int count = 3; count <= 9; count++) {
                 for (String scheme : new String[] {"sequential", "diverging"}) {
                     java.util.List<Rgb> fills = aequa.colour.ColourRamps.generate(
-                            new aequa.project.ColoursSpec(scheme, hue, (hue + 180) % 360), count, WHITE, "aequa.yaml", "m")
-                            .ramp().orElseThrow().fills();
+                            new aequa.project.ColoursSpec(aequa.project.Words.of(aequa.project.ColourScheme.class, scheme), hue, (hue + 180) % 360), count, WHITE, "aequa.yaml", "m")
+                            .ramp().fills();
                     for (Rgb fill : fills) {
                         double ink = ColourMeasures.naiveTotalInkPercent(fill);
                         org.junit.jupiter.api.Assertions.assertTrue(ink <= 240,

@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 import org.w3c.dom.Element;
 
 import aequa.atlas.MapModel;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 
 /** PDF structure, proportional symbols, the graticule and globe, and the size goal of web SVGs. */
 class FormatsTest {

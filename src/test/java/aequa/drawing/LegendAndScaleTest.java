@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 import org.w3c.dom.Element;
 
 import aequa.atlas.MapModel;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 
 /** The legend's counts and the area scale, read back from the drawn SVG. */
 class LegendAndScaleTest {

@@ -12,13 +12,18 @@ import org.locationtech.jts.geom.Polygon;
 import aequa.atlas.MapModel;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 import aequa.classes.Classification;
 import aequa.colour.ColourRamp;
 import aequa.colour.Rgb;
 import aequa.colour.WcagContrast;
 import aequa.planar.AreaAudit;
+import aequa.project.ColourScheme;
+import aequa.project.MapDisplay;
 import aequa.project.MapSpec;
+import aequa.project.Measure;
+import aequa.project.Normalisation;
+import aequa.project.Words;
 import aequa.projection.EqualAreaProjection;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.Projections;
@@ -101,8 +106,8 @@ public final class MapFixtures {
     static MapModel model(String display, List<String> periods, List<MapRegion> regions, Classification classes, ColourRamp ramp,
                           EqualAreaProjection projection) {
         MapSpec spec = new MapSpec("clinics", "Clinics within reach, per 1,000 km\u00b2", "r", "f", "clinics", periods,
-                display.equals("circles") ? "count" : "rate", "none", null, null,
-                display.equals("circles") ? "clinics" : "per 1,000 km\u00b2", display, null, null, null, null, null,
+                display.equals("circles") ? Measure.COUNT : Measure.RATE, Normalisation.NONE, null, null,
+                display.equals("circles") ? "clinics" : "per 1,000 km\u00b2", Words.of(MapDisplay.class, display), null, null, null, null, null,
                 "", "Invented survey of the Ostmark health office", periods.get(periods.size() - 1));
         ProjectionChoice choice = new ProjectionChoice(projection, 2.4, 0.9, 12, 58, List.of(), "fixture");
         return new MapModel(spec, periods, choice, regions, classes, ramp, new AreaAudit(2e-9, "K001", 1e-6),
@@ -113,7 +118,7 @@ public final class MapFixtures {
     static ColourRamp ramp(int n) {
         Rgb light = new Rgb(232, 243, 238);
         Rgb dark = new Rgb(18, 72, 96);
-        ColourRamp ends = new ColourRamp("sequential", List.of(light, dark), List.of(dark, light), List.of());
+        ColourRamp ends = new ColourRamp(ColourScheme.SEQUENTIAL, List.of(light, dark), List.of(dark, light), List.of());
         List<Rgb> fills = new ArrayList<>();
         List<Rgb> labels = new ArrayList<>();
         for (int k = 0; k < n; k++) {
@@ -121,7 +126,7 @@ public final class MapFixtures {
             fills.add(fill);
             labels.add(WcagContrast.ratio(fill, new Rgb(255, 255, 255)) >= 4.5 ? new Rgb(255, 255, 255) : new Rgb(30, 36, 48));
         }
-        return new ColourRamp("sequential", fills, labels, List.of());
+        return new ColourRamp(ColourScheme.SEQUENTIAL, fills, labels, List.of());
     }
 
     /** Region indices that carry a special status: 3 no data, 5 withheld, 8 not applicable, 11 and 12 unreliable. */

@@ -16,7 +16,7 @@ import javax.imageio.ImageIO;
 import org.junit.jupiter.api.Test;
 
 import aequa.atlas.MapModel;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 
 /**
  * Renders the fixture maps in every format, checks each decodes at the expected size, and keeps the files

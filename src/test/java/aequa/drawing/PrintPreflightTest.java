@@ -15,6 +15,7 @@ import aequa.colour.ColourRamp;
 import aequa.colour.Rgb;
 import aequa.colour.WcagContrast;
 import aequa.findings.Finding;
+import aequa.project.ColourScheme;
 
 /** The print preflight against crafted themes and ramps, each with the one problem it must report. */
 class PrintPreflightTest {
@@ -88,7 +89,7 @@ class PrintPreflightTest {
         assertEquals(276.47, ColourMeasures.naiveTotalInkPercent(new Rgb(60, 0, 0)), 0.01);
         List<Rgb> fills = new ArrayList<>(MODEL.ramp().fills());
         fills.set(fills.size() - 1, new Rgb(60, 0, 0));
-        MapModel heavy = withRamp(new ColourRamp("sequential", fills, MODEL.ramp().labelColours(), List.of()));
+        MapModel heavy = withRamp(new ColourRamp(ColourScheme.SEQUENTIAL, fills, MODEL.ramp().labelColours(), List.of()));
         assertEquals(Set.of("print-ink-too-heavy"), codes(heavy, NEWSPRINT));
     }
 
@@ -100,7 +101,7 @@ class PrintPreflightTest {
         fills.set(2, new Rgb(95, 160, 95));
         double delta = Math.abs(ColourMeasures.greyLightness(fills.get(1)) - ColourMeasures.greyLightness(fills.get(2)));
         assertTrue(delta < 6, "crafted pair differs by " + delta + " L*");
-        MapModel grey = withRamp(new ColourRamp("sequential", fills, MODEL.ramp().labelColours(), List.of()));
+        MapModel grey = withRamp(new ColourRamp(ColourScheme.SEQUENTIAL, fills, MODEL.ramp().labelColours(), List.of()));
         List<Finding> findings = PrintPreflight.check(grey, NEWSPRINT, MapDrawings.printSvg(grey, NEWSPRINT, SIZE), "map.svg");
         assertTrue(findings.stream().anyMatch(f -> f.code().equals("print-classes-grey") && f.place().equals("classes 2 and 3")),
                 findings.toString());

@@ -9,7 +9,7 @@ import org.locationtech.jts.geom.Polygon;
 import aequa.atlas.MapModel;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 import aequa.classes.Classification;
 import aequa.projection.EqualAreaProjection;
 import aequa.projection.ProjectionFamily;

@@ -7,6 +7,8 @@ import com.code_intelligence.jazzer.junit.FuzzTest;
 import aequa.findings.Findings;
 import aequa.inputs.figures.FigureReaders;
 import aequa.project.FigureSourceSpec;
+import aequa.project.KeyMatching;
+import aequa.project.TableLayout;
 
 /**
  * Any bytes as a statistics file, each read under two settings: CSV in the wide layout (separator
@@ -19,17 +21,17 @@ class FigureFilesFuzzTest {
 
     @FuzzTest(maxDuration = FuzzLimits.CAMPAIGN)
     void csv(byte[] input) {
-        read(input, new FigureSourceSpec("figures.csv", null, "code", "wide", null, "year", null, null, null, null,
+        read(input, new FigureSourceSpec("figures.csv", null, "code", TableLayout.WIDE, null, "year", null, null, null, null,
                         null, null, null, null),
-                new FigureSourceSpec("figures.csv", null, "code", "long", "indicator", "period", "value", ",", ".", null,
-                        null, null, null, "relaxed"));
+                new FigureSourceSpec("figures.csv", null, "code", TableLayout.LONG, "indicator", "period", "value", ",", ".", null,
+                        null, null, null, KeyMatching.RELAXED));
     }
 
     @FuzzTest(maxDuration = FuzzLimits.CAMPAIGN)
     void sqlite(byte[] input) {
-        read(input, new FigureSourceSpec("figures.sqlite", "rates", "code", "wide", null, null, null, null, null, null,
+        read(input, new FigureSourceSpec("figures.sqlite", "rates", "code", TableLayout.WIDE, null, null, null, null, null, null,
                         null, null, null, null),
-                new FigureSourceSpec("figures.sqlite", null, "code", "long", "indicator", "period", "value", null, null,
+                new FigureSourceSpec("figures.sqlite", null, "code", TableLayout.LONG, "indicator", "period", "value", null, null,
                         null, null, null, null, null));
     }
 

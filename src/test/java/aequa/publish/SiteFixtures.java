@@ -12,14 +12,19 @@ import aequa.atlas.Atlas;
 import aequa.atlas.MapModel;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
-import aequa.classes.ClassMethod;
+import aequa.project.ClassMethod;
 import aequa.classes.Classification;
 import aequa.colour.ColourRamp;
 import aequa.colour.Rgb;
 import aequa.planar.AreaAudit;
+import aequa.project.ColourScheme;
+import aequa.project.MapDisplay;
 import aequa.project.MapSpec;
+import aequa.project.Measure;
+import aequa.project.Normalisation;
 import aequa.project.ProjectFile;
 import aequa.project.SiteSpec;
+import aequa.project.Words;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.Projections;
 import aequa.statistics.FigureStatus;
@@ -81,7 +86,7 @@ final class SiteFixtures {
     /** As {@link #map(String, Texts, int, double)}, drawn as {@code display} (choropleth or circles). */
     static MapModel map(String id, Texts texts, int regionCount, double shift, String display) {
         MapSpec spec = new MapSpec(id, texts.mapTitle() + " " + id, "units", "figures", "clinics", List.of("2031"),
-                "rate", "column", "people", 1000.0, "clinics per 1,000 people", display, null, null, null,
+                Measure.RATE, Normalisation.COLUMN, "people", 1000.0, "clinics per 1,000 people", Words.of(MapDisplay.class, display), null, null, null,
                 null, null, texts.notes(), texts.source(), "March 2031");
         List<MapRegion> regions = new ArrayList<>();
         List<Double> reported = new ArrayList<>();
@@ -107,7 +112,7 @@ final class SiteFixtures {
                 (int) reported.stream().filter(v -> v >= mid).count());
         Classification classes = new Classification(ClassMethod.QUANTILE, List.of(min, mid, max), counts);
         List<MapRegion> classified = regions.stream().map(r -> withClass(r, classes)).toList();
-        ColourRamp ramp = new ColourRamp("sequential", List.of(Rgb.fromHex("#dfe9f5"), Rgb.fromHex("#2a5a8c")),
+        ColourRamp ramp = new ColourRamp(ColourScheme.SEQUENTIAL, List.of(Rgb.fromHex("#dfe9f5"), Rgb.fromHex("#2a5a8c")),
                 List.of(Rgb.fromHex("#000000"), Rgb.fromHex("#ffffff")), List.of());
         ProjectionChoice choice = new ProjectionChoice(Projections.lambertAzimuthal(10, 52), 1.25, 0.5, 12, 55,
                 List.of(), "The regions are compact, so an azimuthal projection centred on them keeps angles closest.");

@@ -14,6 +14,7 @@ import aequa.findings.Finding;
 import aequa.findings.Severity;
 import aequa.inputs.figures.SourceSpecBuilder;
 import aequa.project.ChecksSpec;
+import aequa.project.MissingFigures;
 
 /**
  * The join report, one small example project per case, each with the one finding it must produce (the
@@ -60,7 +61,7 @@ class JoinReportTest {
     @Test
     void regionWithoutFigureIsAnErrorWhenTheProjectSaysSo() {
         StatisticsFixture project = threeRegions().csv("key,rate\nA,1\nB,2\n")
-                .checks(new ChecksSpec(null, "error", null, null, null));
+                .checks(new ChecksSpec(null, MissingFigures.ERROR, null, null, null));
         project.compute(mapOf("rate").build());
         assertEquals(Severity.ERROR, project.only("join-missing-figure").severity());
     }

@@ -2,7 +2,11 @@ package aequa.statistics;
 
 import java.util.List;
 
+import aequa.project.MapDisplay;
 import aequa.project.MapSpec;
+import aequa.project.Measure;
+import aequa.project.Normalisation;
+import aequa.project.Words;
 
 /** Builds {@link MapSpec}s for tests; null fields take the record's defaults. */
 final class MapSpecBuilder {
@@ -37,7 +41,7 @@ final class MapSpecBuilder {
     MapSpecBuilder range(double min, double max) { range = List.of(min, max); return this; }
 
     MapSpec build() {
-        return new MapSpec("m", null, "regions", "figures", indicator, periods, measure, normalise, per, multiplier,
-                null, display, null, null, null, eventsColumn, marginColumn, null, null, null, range);
+        return new MapSpec("m", null, "regions", "figures", indicator, periods, Words.of(Measure.class, measure),
+                Words.of(Normalisation.class, normalise), per, multiplier, null, Words.of(MapDisplay.class, display), null, null, null, eventsColumn, marginColumn, null, null, null, range);
     }
 }

@@ -12,6 +12,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 import aequa.inputs.figures.SourceSpecBuilder;
 import aequa.project.ChecksSpec;
+import aequa.project.Normalisation;
 
 /** Normalisation as given, per km2 and per column, with numbers checkable by hand. */
 class NormalisationTest {
@@ -100,14 +101,5 @@ class NormalisationTest {
         MapFigures figures = project.compute(mapOf("n").normalise("area").build());
         assertEquals(FigureStatus.NO_DATA, figures.figures("E").get(0).status());
         assertEquals(List.of("normalise-impossible"), project.codes());
-    }
-
-    @Test
-    void unknownWordsAreReportedOnTheProjectFile() {
-        StatisticsFixture project = new StatisticsFixture(dir).region("A", 1).csv("key,n\nA,3\n");
-        project.compute(mapOf("n").normalise("per-area").display("bars").build());
-        assertEquals(List.of("project-unknown-value", "project-unknown-value"), project.codes());
-        assertEquals("aequa.yaml", project.findings.list().get(0).file());
-        assertEquals("map \"m\", normalise", project.findings.list().get(0).place());
     }
 }

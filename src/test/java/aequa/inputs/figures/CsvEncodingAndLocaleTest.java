@@ -149,11 +149,11 @@ class CsvEncodingAndLocaleTest {
     @Test
     void unknownSettingsAreReportedOnTheProjectFile() throws IOException {
         Findings findings = new Findings();
-        read(utf8("key,rate\nA,1\n"), SourceSpecBuilder.file("s.csv").layout("tall").delimiter("/")
+        read(utf8("key,rate\nA,1\n"), SourceSpecBuilder.file("s.csv").delimiter("/")
                 .decimal(",").thousands(",").build(), findings);
         List<String> codes = findings.list().stream().map(f -> f.code() + "@" + f.file() + ":" + f.place()).toList();
-        assertEquals(List.of("project-unknown-value@aequa.yaml:figures \"s.csv\", layout",
-                "project-unknown-value@aequa.yaml:figures \"s.csv\", delimiter",
+        // the layout's words are read with the project file (aequa.project.ConfigWordsTest)
+        assertEquals(List.of("project-unknown-value@aequa.yaml:figures \"s.csv\", delimiter",
                 "project-conflicting-setting@aequa.yaml:figures \"s.csv\", thousands"), codes);
     }
 

@@ -3,6 +3,9 @@ package aequa.inputs.figures;
 import java.util.List;
 
 import aequa.project.FigureSourceSpec;
+import aequa.project.KeyMatching;
+import aequa.project.TableLayout;
+import aequa.project.Words;
 
 /** Builds {@link FigureSourceSpec}s for tests; null fields take the record's defaults. */
 public final class SourceSpecBuilder {
@@ -49,7 +52,7 @@ public final class SourceSpecBuilder {
     public SourceSpecBuilder headerRow(int value) { headerRow = value; return this; }
 
     public FigureSourceSpec build() {
-        return new FigureSourceSpec(file, table, key, layout, indicatorColumn, periodColumn, valueColumn, delimiter,
-                decimal, thousands, missing, suppressed, notApplicable, keyMatching, sheet, headerRow);
+        return new FigureSourceSpec(file, table, key, Words.of(TableLayout.class, layout), indicatorColumn, periodColumn, valueColumn, delimiter,
+                decimal, thousands, missing, suppressed, notApplicable, Words.of(KeyMatching.class, keyMatching), sheet, headerRow);
     }
 }

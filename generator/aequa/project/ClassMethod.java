@@ -1,10 +1,10 @@
-package aequa.classes;
+package aequa.project;
 
 import java.util.Arrays;
 import java.util.Optional;
 
 /** The classification methods aequa offers; {@link #configName()} is the project-file spelling. */
-public enum ClassMethod {
+public enum ClassMethod implements ConfigWord {
     QUANTILE("quantile"),
     EQUAL_INTERVAL("equal-interval"),
     NATURAL_BREAKS("natural-breaks"),
@@ -19,6 +19,7 @@ public enum ClassMethod {
         this.configName = configName;
     }
 
+    @Override
     public String configName() {
         return configName;
     }
