@@ -1,0 +1,209 @@
+package aequa.findings;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.net.URISyntaxException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
+import java.util.TreeSet;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.Test;
+
+/**
+ * Every finding code in the code base has a fixture project ({@code src/test/resources/aequa/fixtures},
+ * run by {@code aequa.cli.FixtureProjectsTest}) that produces it, or stands in {@link #WITHOUT_FIXTURE}
+ * with the reason. That list only shrinks: an entry whose code has gone, or has got a fixture, fails.
+ */
+class FindingCatalogueTest {
+
+    /**
+     * Codes without a fixture yet, each with why and where else it is tested. Remove an entry when its
+     * fixture is added.
+     */
+    private static final Map<String, String> WITHOUT_FIXTURE = Map.ofEntries(
+            Map.entry("antimeridian-cut",
+                    "needs regions across the 180-degree line; RegionValidatorTest"),
+            Map.entry("pole-ring-closed",
+                    "needs a region around a pole; RegionValidatorTest"),
+            Map.entry("part-degenerate",
+                    "needs a polygon part that collapses when repaired; no test names it yet"),
+            Map.entry("coverage-check-bounded",
+                    "needs a coverage above the check's size bound; CoverageChecksTest"),
+            Map.entry("input-limit-exceeded",
+                    "needs a read limit lowered by a system property; ReadLimitsTest"),
+            Map.entry("classes-count-too-small",
+                    "unreachable from a project file: ProjectChecks reports project-bad-value for a count outside 2..9 first; ClassifierTest"),
+            Map.entry("classes-manual-breaks-missing",
+                    "unreachable from a project file: ProjectChecks reports project-bad-value for missing manual breaks first; ClassifierTest"),
+            Map.entry("classes-manual-breaks-not-ascending",
+                    "unreachable from a project file: ProjectChecks reports project-bad-value first; ClassifierTest"),
+            Map.entry("classes-infinite-value",
+                    "unreachable from a project file: ClassedFigures pools finite values only; ClassifierTest"),
+            Map.entry("project-missing-setting",
+                    "unreachable from a project file: ProjectChecks reports project-missing-key for normalise: column without per first"),
+            Map.entry("figures-file-missing",
+                    "unreachable from a project file: ProjectChecks reports project-file-not-found first; CsvEncodingAndLocaleTest"),
+            Map.entry("figures-file-unknown-type",
+                    "unreachable from a project file: ProjectChecks reports project-file-type first; CsvEncodingAndLocaleTest"),
+            Map.entry("file-missing",
+                    "unreachable from a project file: ProjectChecks reports project-file-not-found first; GeoJsonRegionReaderTest"),
+            Map.entry("file-type-unknown",
+                    "unreachable from a project file: ProjectChecks reports project-file-type first; no test names it"),
+            Map.entry("file-unreadable",
+                    "needs a file the test user cannot read, which root (CI) always can; no test names it"),
+            Map.entry("project-file-unreadable",
+                    "needs a project file the test user cannot read, which root (CI) always can; no test names it"),
+            Map.entry("colours-fewer-classes",
+                    "needs more distinct values than the starter's four districts; ColourRampsTest"),
+            Map.entry("colours-ramp-adjusted",
+                    "needs a ramp that fails its first checks; ColourRampsTest"),
+            Map.entry("colours-ramp-fails-checks",
+                    "needs a ramp that fails every adjustment; ColourRampsTest"),
+            Map.entry("print-classes-grey",
+                    "step 2: the print preflight of a drawing, which audit does not draw; PrintPreflightTest"),
+            Map.entry("print-ink-too-heavy",
+                    "step 2: the print preflight of a drawing; PrintPreflightTest"),
+            Map.entry("print-line-too-thin",
+                    "step 2: the print preflight of a drawing; PrintPreflightTest"),
+            Map.entry("print-type-too-small",
+                    "step 2: the print preflight of a drawing; PrintPreflightTest"),
+            Map.entry("crs-assumed",
+                    "needs a binary input the text fixtures do not hold yet; a Shapefile without .prj; ShapefileRegionReaderTest"),
+            Map.entry("crs-missing",
+                    "needs a binary input the text fixtures do not hold yet; a projected Shapefile without .prj; no test names it"),
+            Map.entry("crs-undefined",
+                    "needs a binary input the text fixtures do not hold yet; a GeoPackage layer with srs_id 0; no test names it"),
+            Map.entry("geopackage-geometry-malformed",
+                    "needs a binary input the text fixtures do not hold yet; a GeoPackage with a broken geometry blob; no test names it"),
+            Map.entry("geopackage-layer-missing",
+                    "needs a binary input the text fixtures do not hold yet; a GeoPackage; GeoPackageRegionReaderTest"),
+            Map.entry("topojson-object-missing",
+                    "needs a TopoJSON topology written by a TopoJSON writer; TopoJsonRegionReaderTest"),
+            Map.entry("figures-database-unreadable",
+                    "needs a binary input the text fixtures do not hold yet; a SQLite file that opens but cannot be queried; no test names it"),
+            Map.entry("figures-table-ambiguous",
+                    "needs a binary input the text fixtures do not hold yet; a SQLite file; SqliteFigureReaderTest"),
+            Map.entry("figures-table-missing",
+                    "needs a binary input the text fixtures do not hold yet; a SQLite file; SqliteFigureReaderTest"),
+            Map.entry("figures-header-missing",
+                    "needs a binary input the text fixtures do not hold yet; a workbook; WorkbookFigureReaderTest"),
+            Map.entry("figures-notes-skipped",
+                    "needs a binary input the text fixtures do not hold yet; a workbook with notes under the table; no test names it"),
+            Map.entry("figures-sheet-missing",
+                    "needs a binary input the text fixtures do not hold yet; a workbook; WorkbookFigureReaderTest"),
+            Map.entry("figures-title-rows-skipped",
+                    "needs a binary input the text fixtures do not hold yet; a workbook with title rows; no test names it"),
+            Map.entry("shapefile-code-page-assumed",
+                    "needs a binary input the text fixtures do not hold yet; a Shapefile; ShapefileRegionReaderTest"),
+            Map.entry("shapefile-code-page-unknown",
+                    "needs a binary input the text fixtures do not hold yet; a Shapefile with an unknown .cpg; no test names it"),
+            Map.entry("shapefile-dbf-long",
+                    "needs a binary input the text fixtures do not hold yet; a Shapefile whose .dbf has more records; no test names it"),
+            Map.entry("shapefile-dbf-malformed",
+                    "needs a binary input the text fixtures do not hold yet; a Shapefile with a broken .dbf; no test names it"),
+            Map.entry("shapefile-dbf-short",
+                    "needs a binary input the text fixtures do not hold yet; a Shapefile; ShapefileRegionReaderTest"),
+            Map.entry("shapefile-field-missing",
+                    "needs a binary input the text fixtures do not hold yet; a Shapefile; ShapefileRegionReaderTest"),
+            Map.entry("shapefile-layer-missing",
+                    "needs a binary input the text fixtures do not hold yet; a zipped Shapefile; ShapefileRegionReaderTest"),
+            Map.entry("shapefile-null-shape",
+                    "needs a binary input the text fixtures do not hold yet; a Shapefile; ShapefileRegionReaderTest"),
+            Map.entry("shapefile-ring-orientation",
+                    "needs a binary input the text fixtures do not hold yet; a Shapefile with a hole outside every outer ring; no test names it"),
+            Map.entry("shapefile-shp-malformed",
+                    "needs a binary input the text fixtures do not hold yet; a Shapefile; ShapefileRegionReaderTest"));
+
+    /**
+     * A code given to a finding: the first text argument (after at most two plain names) of
+     * Finding.error/warning/note, of new Finding, or of a helper that makes one ({@code error(findings, place, "code", ...)}).
+     */
+    private static final Pattern CODE_ARGUMENT = Pattern.compile(
+            "\\b(?:error|warning|note|problem|keyTooLongFinding)\\((?:\\s*\\w+\\s*,){0,2}\\s*\"([a-z0-9]+(?:-[a-z0-9]+)+)\""
+                    + "|new Finding\\([\\w.]+,\\s*\"([a-z0-9]+(?:-[a-z0-9]+)+)\"");
+    /** A code chosen by a condition inside a Finding call: {@code Finding.error(x ? "a-b" : "c-d", ...)}. */
+    private static final Pattern CODE_CHOICE = Pattern.compile(
+            "Finding\\.(?:error|warning|note)\\([^,;]*\\?\\s*\"([a-z0-9]+(?:-[a-z0-9]+)+)\"\\s*:\\s*\"([a-z0-9]+(?:-[a-z0-9]+)+)\"");
+
+    /** Every finding code written in the main code. */
+    static Set<String> codesInCode() throws IOException {
+        Set<String> codes = new TreeSet<>();
+        try (Stream<Path> files = Files.walk(Path.of("generator/aequa"))) {
+            for (Path file : files.filter(f -> f.toString().endsWith(".java")).toList()) {
+                String source = Files.readString(file, StandardCharsets.UTF_8);
+                for (Pattern pattern : new Pattern[] {CODE_ARGUMENT, CODE_CHOICE}) {
+                    Matcher m = pattern.matcher(source);
+                    while (m.find()) {
+                        for (int g = 1; g <= m.groupCount(); g++) {
+                            if (m.group(g) != null) {
+                                codes.add(m.group(g));
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        return codes;
+    }
+
+    /** The code each fixture project must produce, by fixture name ("none" for a clean one). */
+    static Map<String, String> fixtureCodes() throws IOException, URISyntaxException {
+        Path folder = Path.of(FindingCatalogueTest.class.getResource("/aequa/fixtures").toURI());
+        Map<String, String> codes = new TreeMap<>();
+        try (Stream<Path> children = Files.list(folder)) {
+            for (Path fixture : children.filter(Files::isDirectory).toList()) {
+                codes.put(fixture.getFileName().toString(),
+                        Files.readAllLines(fixture.resolve("expected-finding.txt"), StandardCharsets.UTF_8).get(0).trim());
+            }
+        }
+        return codes;
+    }
+
+    @Test
+    void theScanFindsCodesOfEveryForm() throws IOException {
+        Set<String> codes = codesInCode();
+        // one of each form the scan reads, checked by hand in the sources named
+        assertTrue(codes.contains("project-file-missing"), "Finding.error (ProjectLoader)");
+        assertTrue(codes.contains("join-missing-figure"), "new Finding(severity, ...) (FigureJoin)");
+        assertTrue(codes.contains("region-key-wrong-type"), "a conditional code (GeoJsonRegionReader)");
+        assertTrue(codes.contains("geojson-wrong-type"), "a helper, feature.problem (GeoJsonRegionReader)");
+        assertTrue(codes.contains("project-unknown-reference"), "a helper, error(code...) (ProjectChecks)");
+        assertTrue(codes.contains("insets-unknown-key"), "a helper, error(findings, place, code...) (CompositePlanner)");
+        assertTrue(codes.size() > 100, "the scan reads the whole code base: " + codes.size());
+    }
+
+    @Test
+    void everyCodeHasAFixtureOrAReasonWhyNot() throws IOException, URISyntaxException {
+        Set<String> withFixture = new TreeSet<>(fixtureCodes().values());
+        Set<String> missing = new TreeSet<>(codesInCode());
+        missing.removeAll(withFixture);
+        missing.removeAll(WITHOUT_FIXTURE.keySet());
+        assertEquals(Set.of(), missing, "codes without a fixture project and without a reason");
+    }
+
+    @Test
+    void theListWithoutFixturesOnlyShrinks() throws IOException, URISyntaxException {
+        Set<String> inCode = codesInCode();
+        Set<String> withFixture = new TreeSet<>(fixtureCodes().values());
+        for (String code : WITHOUT_FIXTURE.keySet()) {
+            assertTrue(inCode.contains(code), "no longer in the code, remove it from the list: " + code);
+            assertTrue(!withFixture.contains(code), "has a fixture now, remove it from the list: " + code);
+        }
+    }
+
+    @Test
+    void everyFixtureNamesACodeOfTheCodeBase() throws IOException, URISyntaxException {
+        Set<String> inCode = codesInCode();
+        fixtureCodes().forEach((fixture, code) ->
+                assertTrue(code.equals("none") || inCode.contains(code), fixture + " expects an unknown code " + code));
+    }
+}
