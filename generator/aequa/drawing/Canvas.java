@@ -21,7 +21,7 @@ import aequa.colour.Rgb;
  * The one surface every layer paints on: a {@link Graphics2D} in page units, plus named groups (written as
  * {@code <g id=...>} when the target is SVG, ignored otherwise) and an {@link Inventory} of what was drawn.
  *
- * <p>Type: JFreeSVG writes font sizes as whole numbers (shared/LIBRARIES.md, section 4), so text is set
+ * <p>Type: JFreeSVG 5.0.7 writes font sizes as whole numbers ({@code Font.getSize()}: 3.5 becomes 4), so text is set
  * in a font {@link Typesetter#TEXT_SCALE} times larger under the inverse scale; sizes are therefore exact
  * to 1/100 of a page unit in every output. Not thread-safe; one canvas per render.
  */

@@ -29,7 +29,8 @@ final class Hatching {
     /**
      * Lines rising to the right on the page (slope +1), falling (slope -1) or level, {@code spacingU} apart
      * measured perpendicular to the lines, intersected with {@code area} (page units). Uses OverlayNGRobust,
-     * which does not fail on slightly invalid input (shared/LIBRARIES.md, section 2).
+     * which does not fail on slightly invalid input where {@code Geometry.intersection} may throw a topology
+     * exception (JTS 1.20); it is several times slower on large polygons, which hatching never meets.
      */
     static Geometry lines(Geometry area, double spacingU, Direction direction) {
         Envelope e = area.getEnvelopeInternal();

@@ -3,7 +3,8 @@ package aequa.drawing;
 import java.nio.charset.StandardCharsets;
 
 /**
- * Element ids for SVG. JFreeSVG writes ids without XML escaping (shared/LIBRARIES.md, section 4), so
+ * Element ids for SVG. JFreeSVG 5.0.7 writes ids without XML escaping (an id {@code bad'id} gives the malformed
+ * {@code <g id='bad'id'>}, while other attribute values are escaped), so
  * every id passes through here. The mapping is injective, so two different keys never share an id and
  * an id stays the same from one build to the next.
  */

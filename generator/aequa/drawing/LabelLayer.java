@@ -59,7 +59,7 @@ final class LabelLayer {
         canvas.begin(period == 0 ? "labels" : "labels-" + period);
         for (Candidate c : candidates) {
             MapRegion region = model.regions().get(c.index());
-            RegionValue value = RegionLayer.valueOf(region, period);
+            RegionValue value = RegionFillLayer.valueOf(region, period);
             boolean reversed = WcagContrast.relativeLuminance(fills.text(value)) > WcagContrast.relativeLuminance(fills.fill(value));
             double size = reversed ? reversedSize : plainSize;
             double padU = 0.25 * size * type.unitsPerPt();

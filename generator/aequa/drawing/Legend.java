@@ -192,7 +192,7 @@ final class Legend {
 
     private void paintSwatch(Canvas canvas, Rectangle2D swatch, Entry e) {
         canvas.fill(swatch, e.fill());
-        double spacing = RegionLayer.hatchSpacing(canvas);
+        double spacing = RegionFillLayer.hatchSpacing(canvas);
         if (e.hatch() != RegionFills.Hatch.NONE || e.unreliable()) {
             var area = FACTORY.toGeometry(new org.locationtech.jts.geom.Envelope(
                     swatch.getMinX(), swatch.getMaxX(), swatch.getMinY(), swatch.getMaxY()));

@@ -103,12 +103,12 @@ final class MapPainter {
             canvas.begin("regions" + suffix);
             if (model.composite()) {
                 PartFrames.paintRegionsByPart(canvas, model, pages, suffix,
-                        partPages -> RegionLayer.paint(canvas, model, theme, fills, partPages, panel.period(), regionPrefix, web, precision, circles));
+                        partPages -> RegionFillLayer.paint(canvas, model, theme, fills, partPages, panel.period(), regionPrefix, web, precision, circles));
             } else {
-                RegionLayer.paint(canvas, model, theme, fills, pages, panel.period(), regionPrefix, web, precision, circles);
+                RegionFillLayer.paint(canvas, model, theme, fills, pages, panel.period(), regionPrefix, web, precision, circles);
             }
             canvas.end();
-            RegionLayer.paintBorders(canvas, theme, pages, precision, suffix, !web);
+            RegionFillLayer.paintBorders(canvas, theme, pages, precision, suffix, !web);
             if (model.composite()) {
                 PartFrames.paint(canvas, model, theme, panel.fit(), suffix);
             }

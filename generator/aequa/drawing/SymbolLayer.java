@@ -31,7 +31,7 @@ final class SymbolLayer {
                       int period, String idPrefix) {
         List<Circle> circles = new ArrayList<>();
         for (int i = 0; i < pageGeometries.size(); i++) {
-            RegionValue value = RegionLayer.valueOf(model.regions().get(i), period);
+            RegionValue value = RegionFillLayer.valueOf(model.regions().get(i), period);
             Geometry page = pageGeometries.get(i);
             if (!Symbols.drawn(value) || page.isEmpty()) {
                 continue;

@@ -19,7 +19,10 @@ import static aequa.projection.FamilyDefinitions.STANDARD_PARALLEL_2;
  * {@link #ROUNDING_COST} of the score, polishing on that step's lattice. Forced parameters stay as given.
  *
  * <p>Starting values (common practice in the trade): azimuthal centre at the data's spherical centre (the
- * pole when the data contain it); Albers standard parallels at 1/6 and 5/6 of the latitude range; for the
+ * pole when the data contain it); Albers standard parallels at 1/6 and 5/6 of the latitude range (the rule
+ * for conic projections that Snyder 1987, "Map Projections: A Working Manual", USGS Professional Paper 1395,
+ * gives after Deetz and Adams 1934, "Elements of Map Projection"; cited from memory, page not checked here;
+ * only a starting point, the search then moves both parallels); for the
  * cylindrical aspects, lines of true scale at distance s from the central line with cos s =
  * sqrt(cos d_min cos d_max), which balances the scale error k = cos s / cos d (Snyder 1987, eq. 10-2) between
  * the nearest and farthest data (d_min, d_max: the data's angular distances from the central line).

@@ -24,8 +24,8 @@ import aequa.projection.EqualAreaProjection;
  * map is recognised without drawing it. Doubles enter as their exact bits, geometry as WKB (OGC Simple
  * Features well-known binary, exact to the bit), text as length-prefixed UTF-8; all through one buffered
  * stream, because a map of thousands of regions must hash in milliseconds for the no-change rebuild to stay
- * cheap. Small nested records (spec, classification, ramp, audit) enter through their {@code toString},
- * which prints doubles exactly ({@link Double#toString(double)} round-trips).
+ * cheap. Small nested records (spec, classification, ramp, audit, parts) enter as {@link CanonicalBytes},
+ * never through {@code toString}.
  */
 final class MapFingerprint {
 
@@ -41,23 +41,23 @@ final class MapFingerprint {
         }
         try (DataOutputStream out = new DataOutputStream(new BufferedOutputStream(
                 new DigestOutputStream(OutputStream.nullOutputStream(), sha), 1 << 16))) {
-            text(out, map.spec().toString());
-            text(out, map.periods().toString());
+            canonical(out, map.spec());
+            canonical(out, map.periods());
             EqualAreaProjection projection = map.projection().projection();
             text(out, projection.family().configName());
-            text(out, projection.parameters().toString());
+            canonical(out, projection.parameters());
             text(out, projection.wkt2());
             out.writeDouble(map.projection().omegaMaxDeg());
             out.writeDouble(map.projection().omegaMeanDeg());
-            text(out, map.projection().runnersUp().toString());
+            canonical(out, map.projection().runnersUp());
             text(out, map.projection().reason());
-            text(out, map.classification().toString());
-            text(out, map.ramp().toString());
-            text(out, map.areaAudit().toString());
-            text(out, map.notices().toString());
+            canonical(out, map.classification());
+            canonical(out, map.ramp());
+            canonical(out, map.areaAudit());
+            canonical(out, map.notices());
             for (MapPart part : map.parts()) {
-                text(out, part.id() + "|" + part.name() + "|" + part.keys() + "|" + part.areaScale() + "|" + part.frame()
-                        + "|" + part.nameBandM() + "|" + part.areaAudit());
+                canonical(out, java.util.Arrays.asList(part.id(), part.name(), part.keys(), part.areaScale(), part.frame(),
+                        part.nameBandM(), part.areaAudit()));
                 text(out, part.projection().projection().wkt2());
                 out.writeDouble(part.projection().omegaMaxDeg());
                 out.writeDouble(part.projection().omegaMeanDeg());
@@ -86,7 +86,14 @@ final class MapFingerprint {
     }
 
     private static void text(DataOutputStream out, String s) throws IOException {
-        byte[] bytes = s.getBytes(StandardCharsets.UTF_8);
+        bytes(out, s.getBytes(StandardCharsets.UTF_8));
+    }
+
+    private static void canonical(DataOutputStream out, Object value) throws IOException {
+        bytes(out, CanonicalBytes.of(value));
+    }
+
+    private static void bytes(DataOutputStream out, byte[] bytes) throws IOException {
         out.writeInt(bytes.length);
         out.write(bytes);
     }

@@ -105,7 +105,7 @@ final class SiteBuild {
 
             progress.step(Stage.REPORT, 0, 1);
             String digest = edition.hex();
-            String pagesHash = new Sha256().add(siteHash).add(digest).add(findings.toString()).hex();
+            String pagesHash = new Sha256().add(siteHash).add(digest).add(CanonicalBytes.of(findings)).hex();
             List<String> sitePages = List.of(SiteReport.FILE_NAME, "index.html", "method.html", "changes.html");
             int changedMaps;
             if (reusable(sitePages, pagesHash)) {
@@ -242,7 +242,7 @@ final class SiteBuild {
     }
 
     private String siteHash(Map<String, byte[]> sources, byte[] themeCss) {
-        Sha256 sha = new Sha256().add(atlas.project().site().toString());
+        Sha256 sha = new Sha256().add(CanonicalBytes.of(atlas.project().site()));
         sources.forEach((name, bytes) -> sha.add(name).add(bytes));
         return sha.add(themeCss).hex();
     }

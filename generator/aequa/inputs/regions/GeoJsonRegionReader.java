@@ -36,8 +36,9 @@ import aequa.project.RegionSourceSpec;
 final class GeoJsonRegionReader {
 
     /**
-     * Jackson's fast double parser: about 3x faster on coordinate-heavy files (measured in LIBRARIES.md,
-     * section 6); nesting and text length bounded by {@link ReadLimit}, read when the reader is made.
+     * Jackson's fast double parser (StreamReadFeature.USE_FAST_DOUBLE_PARSER): measured about 3 times faster
+     * than the default on coordinate-heavy GeoJSON with Jackson 2.23 when this reader was written; nesting and
+     * text length bounded by {@link ReadLimit}, read when the reader is made.
      */
     private final JsonFactory json = JsonFactory.builder()
             .enable(StreamReadFeature.USE_FAST_DOUBLE_PARSER)

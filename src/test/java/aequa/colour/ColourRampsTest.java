@@ -1,6 +1,7 @@
 package aequa.colour;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -9,9 +10,11 @@ import java.util.stream.Collectors;
 import org.junit.jupiter.api.Test;
 
 import aequa.findings.Finding;
+import aequa.findings.Severity;
 import aequa.project.ColourScheme;
 import aequa.project.ColoursSpec;
 import aequa.project.Words;
+import aequa.testing.ForkedJvm;
 
 /** Generated ramps: shape, checks, adjustments and findings. */
 class ColourRampsTest {
@@ -144,11 +147,15 @@ class ColourRampsTest {
                         assertTrue(vision.seen(fill).deltaE(vision.seen(page)) >= 0.06, fill.hex() + " too close to the page");
                     }
                 }
-                assertEquals(generate("qualitative", 0, 0, count, page), outcome, "the search is repeatable");
             }
         }
+        // nine categories need the search: the adjustments are reported, as notes only
         RampOutcome nine = generate("qualitative", 0, 0, 9, WHITE);
-        assertEquals(List.of("colours-ramp-adjusted", "colours-ramp-adjusted"), codes(nine)); // alternated, then searched
+        assertFalse(nine.findings().isEmpty());
+        for (Finding f : nine.findings()) {
+            assertEquals("colours-ramp-adjusted", f.code());
+            assertEquals(Severity.NOTE, f.severity());
+        }
     }
 
     @Test
@@ -161,10 +168,41 @@ class ColourRampsTest {
         assertEquals(List.of("colours-ramp-adjusted", "colours-ramp-adjusted", "colours-ramp-fails-checks"), codes(outcome));
     }
 
+    /**
+     * Ramps, the qualitative search included, depend on their inputs only: made in a JVM that differs in
+     * pool size, locale and time zone ({@link ForkedJvm}), every fill and every finding is the same.
+     */
     @Test
-    void sameInputSameColours() {
-        assertEquals(generate("diverging", 300, 120, 7, WHITE), generate("diverging", 300, 120, 7, WHITE));
-        // hues are read modulo 360
+    void sameColoursInAnotherJvm() throws Exception {
+        assertEquals(RampsInAnotherJvm.describe(), ForkedJvm.output(RampsInAnotherJvm.class));
+    }
+
+    /** Prints the fills and findings of a diverging ramp and of searched qualitative sets on two pages. */
+    static final class RampsInAnotherJvm {
+        public static void main(String[] args) {
+            ForkedJvm.print(describe());
+        }
+
+        static String describe() {
+            StringBuilder text = new StringBuilder();
+            List<RampOutcome> outcomes = new java.util.ArrayList<>(List.of(generate("diverging", 300, 120, 7, WHITE)));
+            for (Rgb page : List.of(WHITE, Rgb.fromHex("#1b1f24"))) {
+                for (int count : new int[] {9, 12}) {
+                    outcomes.add(generate("qualitative", 0, 0, count, page));
+                }
+            }
+            for (RampOutcome outcome : outcomes) {
+                outcome.ramp().fills().forEach(fill -> text.append(fill.hex()).append(' '));
+                outcome.findings().forEach(f -> text.append('\n').append(f.toLine()));
+                text.append('\n');
+            }
+            return text.toString();
+        }
+    }
+
+    @Test
+    void huesAreReadModulo360() {
+        // a hue is an angle on the OKLCh circle (Ottosson 2020): 370 degrees is 10 degrees
         assertEquals(generate("sequential", 10, 0, 5, WHITE).ramp(), generate("sequential", 370, 0, 5, WHITE).ramp());
     }
 

@@ -16,6 +16,7 @@ import org.w3c.dom.Element;
 
 import aequa.atlas.MapModel;
 import aequa.atlas.MapRegion;
+import aequa.atlas.RegionValue;
 import aequa.colour.Rgb;
 
 /** Structure of the web and print SVGs, checked with a real XML parser (javax.xml). */
@@ -33,6 +34,8 @@ class SvgDrawingTest {
         List<Element> groups = SvgDoc.children(regions);
         assertEquals(MODEL.regions().size(), groups.size(), "one group per region");
         Set<String> keys = new HashSet<>();
+        int classed = 0;
+        int unclassed = 0;
         for (int i = 0; i < groups.size(); i++) {
             Element g = groups.get(i);
             MapRegion region = MODEL.regions().get(i);
@@ -40,10 +43,22 @@ class SvgDrawingTest {
             assertEquals(region.key(), g.getAttribute("data-key"));
             assertEquals(region.name(), g.getAttribute("data-name"));
             assertFalse(g.getAttribute("data-class").isEmpty());
-            assertTrue(g.getAttribute("data-value") != null);
+            // the value readers hover over: the figure itself for a classed region, nothing for no data,
+            // withheld or not applicable ones (the fixture has each: MapFixtures, special statuses)
+            RegionValue value = region.values().get(0);
+            String dataValue = g.getAttribute("data-value");
+            if (RegionFills.classed(value)) {
+                assertEquals(value.normalisedValue(), Double.parseDouble(dataValue),
+                        1e-6 * Math.max(1, Math.abs(value.normalisedValue())), region.key());
+                classed++;
+            } else {
+                assertEquals("", dataValue, region.key());
+                unclassed++;
+            }
             assertEquals(1, SvgDoc.elements(g, "title").size(), "a title for hover and screen readers");
             assertTrue(keys.add(g.getAttribute("data-key")));
         }
+        assertTrue(classed > 0 && unclassed >= 3, "both kinds of region were checked: " + classed + ", " + unclassed);
     }
 
     @Test

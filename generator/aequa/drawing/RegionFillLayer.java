@@ -19,12 +19,12 @@ import aequa.statistics.FigureStatus;
  * title), its fill, the hatching of no-data and withheld regions, and the hatched overlay of unreliable
  * values. Then the border network: inner borders once each, and the outer edge.
  */
-final class RegionLayer {
+final class RegionFillLayer {
 
     /** Hatch spacing, points: about 1.2 mm, open enough to survive newsprint dot gain (chosen by eye). */
     static final double HATCH_SPACING_PT = 3.4;
 
-    private RegionLayer() {
+    private RegionFillLayer() {
     }
 
     static double hatchSpacing(Canvas canvas) {
