@@ -34,6 +34,14 @@ import aequa.project.ColoursSpec;
  */
 public final class ColourRamps {
 
+    /*
+     * Where the values below come from. The light-page ends follow the common practice stated in the class
+     * comment; ColourRampsTest re-derives them from the 8-bit fills. The dark-page ends, the chroma targets and
+     * the qualitative band are tuned, not taken from a published table: set by hand so that every hue passes
+     * RampChecks (WCAG 2.2 contrast, a CIEDE-style difference in OKLab under four colour visions); what keeps
+     * them honest is ColourRampsTest (every hue, 2 to 9 classes, on light and dark pages; qualitative sets of
+     * 5 to 12 on both), which fails when a change breaks a check.
+     */
     static final double QUIET_ON_LIGHT = 0.97;
     static final double LOUD_ON_LIGHT = 0.30;
     static final double QUIET_ON_DARK = 0.27;

@@ -26,6 +26,13 @@ import org.locationtech.jts.geom.impl.PackedCoordinateSequence;
  * so the ring stays a polygon. Of the edges joining the same two nodes at most one may shrink to a single
  * straight segment, so two borders never fall onto each other.
  *
+ * <p>Why not JTS's {@code CoverageSimplifier}, which does the same job: it keeps the same vertices here but
+ * takes several times as long on a large coverage, the hot loop of a large map. Measured with
+ * {@code GeometryBenchmark.main stages 20000 3} (20,000 synthetic Voronoi cells, about 0.96 million vertices
+ * as read; 2-core shared machine, JTS 1.20): JTS 1.00 to 3.90 s per run against 0.19 to 0.50 s here, 5.2
+ * to 7.9 times, both keeping 139,517 vertices. The benchmark keeps that baseline, so a change here can be
+ * weighed against it.
+ *
  * <p>Limits: the vertex order and so the orientation of every ring is kept; the result depends on the order
  * of edges (first seen, first simplified), which is deterministic for a given input.
  */

@@ -37,16 +37,29 @@ import java.util.Objects;
  */
 public final class ProjectionChooser {
 
-    /** A new choice replaces the previous one only when its score is this fraction lower. */
+    /**
+     * A new choice replaces the previous one only when its score is this fraction lower. Tuned, no published
+     * source: large enough that a monthly update of the same regions keeps its projection (re-derived by
+     * ProjectionChooserTest, which grows a footprint and checks the previous parameters stay).
+     */
     static final double STABILITY_MARGIN = 0.10;
 
     /** Relative margin within which a more conventional aspect is preferred (see the class comment). */
     static final double CONVENTIONAL_MARGIN = 0.10;
 
-    /** Samples used while searching parameters; the final figures use all of the footprint's samples. */
+    /**
+     * Samples used while searching parameters; the final figures use all of the footprint's samples. Tuned for
+     * speed, no published source: ProjectionTailTest checks that the choices made with it come within 5 % of a
+     * brute-force search on Natural Earth countries, and ChooserBenchmark times it.
+     */
     static final int SEARCH_SAMPLES = 240;
 
-    /** Elongation from which the transverse and oblique cylindrical aspects are tried. */
+    /**
+     * Elongation (long over short axis of the footprint) from which the transverse and oblique cylindrical
+     * aspects are tried. A rule of thumb of this chooser (no published source, and no test re-derives it):
+     * a footprint less elongated than this is left to the azimuthal and conic candidates, which saves the
+     * time of searching the cylinders; ProjectionTailTest checks the resulting choices against a brute force.
+     */
     static final double ELONGATED = 1.5;
 
     /**

@@ -10,6 +10,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.TimeUnit;
 
+import org.locationtech.jts.coverage.CoverageSimplifier;
 import org.locationtech.jts.geom.Geometry;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -49,7 +50,9 @@ import aequa.projection.Projections;
  * Peak heap, in a fresh JVM (run {@link #main} with {@code heap CELLS}), is the sum of the heap pools' peak
  * usage over one run, reported against the GeoJSON file's size; the figure that matters is the smallest
  * {@code -Xmx} with which that run completes. {@code stages CELLS RUNS} times each stage separately, for
- * finding where the time goes.
+ * finding where the time goes, and keeps the baseline our coverage simplifier replaced: JTS's
+ * {@code CoverageSimplifier} on the same projected coverage at the same tolerance, with its time and the
+ * vertices each keeps.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SingleShotTime)
@@ -140,6 +143,10 @@ public class GeometryBenchmark {
         Files.delete(dir);
     }
 
+    private static long vertexCount(List<Geometry> coverage) {
+        return coverage.stream().mapToLong(Geometry::getNumPoints).sum();
+    }
+
     private static void stages(int cells, int runs) throws Exception {
         Path dir = Files.createTempDirectory("aequa-stages");
         long vertices = SyntheticCoverage.write(dir.resolve("cells.geojson"), cells, 20261202L);
@@ -165,10 +172,16 @@ public class GeometryBenchmark {
             }
             long t3 = System.nanoTime();
             double toleranceM = CoverageSimplification.screenToleranceM(mapWidthM, OUTPUT_WIDTH_PX);
-            CoverageSimplification.simplify(keys, planar, toleranceM, CoverageSimplification.islandThresholdM2(toleranceM));
+            List<Geometry> ours = CoverageSimplification.simplify(keys, planar, toleranceM,
+                    CoverageSimplification.islandThresholdM2(toleranceM)).planarM();
             long t4 = System.nanoTime();
-            System.out.printf(Locale.ROOT, "read %.2f s, densify %.2f s, project %.2f s, simplify %.2f s: %.2f s (%.2f M vertices/s)%n",
-                    (t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9, (t4 - t3) / 1e9, (t4 - t0) / 1e9, vertices / ((t4 - t0) / 1e3));
+            // the baseline: JTS's own coverage simplifier (VW on a shared-edge coverage) at the same tolerance
+            Geometry[] jts = CoverageSimplifier.simplify(planar.toArray(new Geometry[0]), toleranceM);
+            long t5 = System.nanoTime();
+            System.out.printf(Locale.ROOT, "read %.2f s, densify %.2f s, project %.2f s, simplify %.2f s: %.2f s (%.2f M vertices/s);"
+                            + " JTS CoverageSimplifier %.2f s (%.1f times ours), vertices kept: ours %d, JTS %d%n",
+                    (t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9, (t4 - t3) / 1e9, (t4 - t0) / 1e9, vertices / ((t4 - t0) / 1e3),
+                    (t5 - t4) / 1e9, (double) (t5 - t4) / (t4 - t3), vertexCount(ours), vertexCount(java.util.Arrays.asList(jts)));
         }
         Files.delete(dir.resolve("cells.geojson"));
         Files.delete(dir);
