@@ -79,15 +79,7 @@ class FindingCatalogueTest {
             Map.entry("topojson-object-missing",
                     "needs a TopoJSON topology written by a TopoJSON writer; TopoJsonRegionReaderTest"),
             Map.entry("figures-database-unreadable",
-                    "needs a binary input the text fixtures do not hold yet; a SQLite file that opens but cannot be queried; no test names it"),
-            Map.entry("figures-header-missing",
-                    "needs a binary input the text fixtures do not hold yet; a workbook; WorkbookFigureReaderTest"),
-            Map.entry("figures-notes-skipped",
-                    "needs a binary input the text fixtures do not hold yet; a workbook with notes under the table; no test names it"),
-            Map.entry("figures-sheet-missing",
-                    "needs a binary input the text fixtures do not hold yet; a workbook; WorkbookFigureReaderTest"),
-            Map.entry("figures-title-rows-skipped",
-                    "needs a binary input the text fixtures do not hold yet; a workbook with title rows; no test names it"));
+                    "needs a binary input the text fixtures do not hold yet; a SQLite file that opens but cannot be queried; no test names it"));
 
     /**
      * A code given to a finding: the first text argument (after at most two plain names) of
