@@ -5,7 +5,6 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
@@ -13,7 +12,6 @@ import org.locationtech.jts.geom.util.AffineTransformation;
 
 import aequa.composite.PartLayout;
 import aequa.composite.PartPlan;
-import aequa.inputs.regions.Region;
 import aequa.planar.AreaAudit;
 import aequa.planar.CoverageSimplification;
 import aequa.projection.Footprint;
@@ -48,7 +46,7 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
             double minWidthM = plan.main() ? 0 : mainWidthM / Math.sqrt(plan.areaScale());
             // a part drawn no larger than the main part is densified for the main part's drawing; an enlarged one for its own
             Footprint drawn = plan.areaScale() > 1 ? plan.footprint() : mainPlan.footprint();
-            planar.add(planarLayers.of(subset(layer, plan), plan, drawn, minWidthM));
+            planar.add(planarLayers.of(layer.subset(plan.keys()), plan, drawn, minWidthM));
         }
         Envelope mainExtent = extent(planar.get(0).simplifiedM().values());
         List<PartLayout.Inset> insets = new ArrayList<>();
@@ -81,15 +79,6 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
                     i == 0 ? 0 : placements.get(i - 1).nameBandM()));
         }
         return new CompositeLayers(parts, geometry, ratios, worst, dropped);
-    }
-
-    /** The regions of one part, as a layer of their own (its id names the part, for caches keyed by id). */
-    static RegionLayer subset(RegionLayer layer, PartPlan plan) {
-        Set<String> keys = Set.copyOf(plan.keys());
-        List<Region> regions = layer.regions().stream().filter(r -> keys.contains(r.key())).toList();
-        Map<String, Double> areas = new HashMap<>();
-        regions.forEach(r -> areas.put(r.key(), layer.areaKm2ByKey().get(r.key())));
-        return new RegionLayer(layer.sourceId() + "#" + plan.id() + "#" + plan.keys().hashCode(), layer.file(), regions, areas);
     }
 
     private static Envelope extent(java.util.Collection<Geometry> geometries) {

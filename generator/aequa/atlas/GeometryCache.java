@@ -14,11 +14,13 @@ import java.util.TreeMap;
 import java.util.function.Supplier;
 import java.util.stream.Stream;
 
+import aequa.composite.PartPlan;
 import aequa.findings.Findings;
 import aequa.inputs.CacheFile;
 import aequa.inputs.CodeStamp;
 import aequa.inputs.FileStamp;
 import aequa.inputs.regions.Region;
+import aequa.project.InsetsSpec;
 import aequa.project.RegionSourceSpec;
 import aequa.projection.EqualAreaProjection;
 import aequa.projection.ProjectionChoice;
@@ -39,7 +41,9 @@ import aequa.projection.Projections;
  * <li>a {@link ProjectionChoice}: that layer key, the keys of the regions in the layer and the projection
  *     request;</li>
  * <li>a {@link PlanarLayer}: that layer key, the projection (WKT 2), the keys of the regions projected (so a
- *     layer of part of a source, such as an inset, has its own entry) and the area tolerance.</li>
+ *     layer of part of a source, such as an inset, has its own entry) and the area tolerance;</li>
+ * <li>a map's parts ({@link PartPlan}s: the detached-part search and each part's projection choice): that
+ *     layer key, the keys of the regions, the insets setting and the projection request.</li>
  * </ul>
  * Every file is a {@link CacheFile} (versioned, checksummed); a missing, damaged or stale entry is computed
  * again, never trusted and never fatal. Entries of a source whose geometry changed are deleted when the new
@@ -47,7 +51,7 @@ import aequa.projection.Projections;
  */
 final class GeometryCache {
 
-    private static final int FORMAT = 2;
+    private static final int FORMAT = 3;
 
     private final Optional<Path> folder;
     private final boolean writable;
@@ -110,17 +114,41 @@ final class GeometryCache {
             // parameters, so the answer is then the one made without a previous choice, which the first
             // publish stored: the monthly rebuild after it need not choose again
             ProjectionRequest.Previous previous = request.previous().get();
-            Optional<ProjectionChoice> first = lookup(layer, "choice", "choice\n" + regionsHash(layer) + "\n" + requestText(
-                    new ProjectionRequest(request.family(), request.forcedParameters(), Optional.empty())),
-                    in -> rebuild(GeometryCodec.readChoice(in)));
-            if (first.isPresent() && first.get().projection().family() == previous.family()
-                    && first.get().projection().parameters().equals(
-                            Projections.create(previous.family(), previous.parameters()).parameters())) {
+            Optional<ProjectionChoice> first = lookup(layer, "choice", "choice\n" + regionsHash(layer) + "\n"
+                    + requestText(withoutPrevious(request)), in -> rebuild(GeometryCodec.readChoice(in)));
+            if (first.isPresent() && sameProjection(first.get(), previous)) {
                 return first.get();
             }
         }
         return entry(layer, "choice", "choice\n" + regionsHash(layer) + "\n" + requestText(request),
                 in -> rebuild(GeometryCodec.readChoice(in)), GeometryCodec::writeChoice, compute);
+    }
+
+    /**
+     * The parts of a map of {@code layer} with these insets and request, from the cache or from {@code plan};
+     * an empty plan (the setting had errors, reported as findings by {@code plan}) is never stored.
+     */
+    List<PartPlan> parts(RegionLayer layer, InsetsSpec insets, ProjectionRequest request, Supplier<List<PartPlan>> plan) {
+        String what = "parts\n" + regionsHash(layer) + "\n" + insets;
+        if (request.previous().isPresent()) {
+            // as for a choice: the main part keeps the plan made without a previous choice when it is the same
+            ProjectionRequest.Previous previous = request.previous().get();
+            Optional<List<PartPlan>> first = lookup(layer, "parts", what + "\n" + requestText(withoutPrevious(request)),
+                    in -> PartPlanCodec.readParts(in, this::rebuild));
+            if (first.isPresent() && sameProjection(first.get().get(0).choice(), previous)) {
+                return first.get();
+            }
+        }
+        String key = what + "\n" + requestText(request);
+        Optional<List<PartPlan>> cached = lookup(layer, "parts", key, in -> PartPlanCodec.readParts(in, this::rebuild));
+        if (cached.isPresent()) {
+            return cached.get();
+        }
+        List<PartPlan> planned = plan.get();
+        if (!planned.isEmpty()) {
+            store(layer, "parts", key, PartPlanCodec::writeParts, planned);
+        }
+        return planned;
     }
 
     /** The planar layer of {@code layer} in {@code projection}, from the cache or from {@code compute}. */
@@ -132,6 +160,15 @@ final class GeometryCache {
                         + Double.doubleToLongBits(minDrawnWidthM),
                 in -> Optional.of(GeometryCodec.readPlanar(in)).filter(p -> List.copyOf(p.simplifiedM().keySet()).equals(keys)),
                 GeometryCodec::writePlanar, compute);
+    }
+
+    private static ProjectionRequest withoutPrevious(ProjectionRequest request) {
+        return new ProjectionRequest(request.family(), request.forcedParameters(), Optional.empty());
+    }
+
+    private static boolean sameProjection(ProjectionChoice choice, ProjectionRequest.Previous previous) {
+        return choice.projection().family() == previous.family() && choice.projection().parameters().equals(
+                Projections.create(previous.family(), previous.parameters()).parameters());
     }
 
     /** The keys of the regions a layer holds: a layer of part of a source (an inset) has entries of its own. */
@@ -160,15 +197,20 @@ final class GeometryCache {
         if (cached.isPresent()) {
             return cached.get();
         }
-        Path file = entryFile(layer, kind, key.get());
         T computed = compute.get();
-        if (writable) {
-            CacheFile.write(file, kind, FORMAT, out -> {
+        store(layer, kind, what, write, computed);
+        return computed;
+    }
+
+    /** Stores {@code value} as the entry {@code what} derived from {@code layer}, when the cache is writable. */
+    private <T> void store(RegionLayer layer, String kind, String what, EntryWriter<T> write, T value) {
+        Optional<String> key = entryKey(layer, what);
+        if (writable && key.isPresent()) {
+            CacheFile.write(entryFile(layer, kind, key.get()), kind, FORMAT, out -> {
                 CacheFile.writeText(out, key.get());
-                write.write(out, computed);
+                write.write(out, value);
             });
         }
-        return computed;
     }
 
     /** The entry derived from {@code layer}, when its file holds the same key and {@code read} accepts it. */

@@ -128,10 +128,10 @@ final class MapAssembler {
             return Optional.of(plans.get(key));
         }
         try {
-            List<PartPlan> planned = CompositePlanner.plan(layer.regions(), layer.areaKm2ByKey(), insets, request,
-                    new CompositePlanner.SettingPlace(project.places(), pointer), findings,
-                    (keys, footprint, partRequest) -> cache.choice(subset(layer, keys), partRequest,
-                            () -> ProjectionChooser.choose(footprint, partRequest)));
+            List<PartPlan> planned = cache.parts(layer, insets, request, () -> CompositePlanner.plan(layer.regions(),
+                    layer.areaKm2ByKey(), insets, request, new CompositePlanner.SettingPlace(project.places(), pointer), findings,
+                    (keys, footprint, partRequest) -> cache.choice(layer.subset(keys), partRequest,
+                            () -> ProjectionChooser.choose(footprint, partRequest))));
             if (planned.isEmpty()) {
                 return Optional.empty();
             }
@@ -149,22 +149,10 @@ final class MapAssembler {
     /** One part's planar layer, shared by every map drawing the same regions on the same projection and scale. */
     private PlanarLayer partLayer(RegionLayer subset, PartPlan plan, Footprint drawnFootprint, double minDrawnWidthM) {
         double tolerance = project.file().checks().areaTolerance();
-        return planarLayers.computeIfAbsent(subset.sourceId() + "|" + plan.choice().projection().wkt2() + "|" + plan.areaScale(),
+        return planarLayers.computeIfAbsent(subset.sourceId() + "|" + plan.keys() + "|" + plan.choice().projection().wkt2() + "|" + plan.areaScale(),
                 key -> cache.planar(subset, plan.choice().projection(), tolerance, plan.areaScale(), minDrawnWidthM,
                         () -> PlanarLayer.of(subset, plan.choice().projection(), drawnFootprint, tolerance,
                                 plan.areaScale(), minDrawnWidthM)));
-    }
-
-    /** The regions of {@code layer} with these keys, in the layer's order (a part's own layer, for the cache). */
-    private static RegionLayer subset(RegionLayer layer, List<String> keys) {
-        if (keys.size() == layer.regions().size()) {
-            return layer;
-        }
-        java.util.Set<String> wanted = new java.util.HashSet<>(keys);
-        List<Region> members = layer.regions().stream().filter(r -> wanted.contains(r.key())).toList();
-        Map<String, Double> areas = new java.util.LinkedHashMap<>();
-        members.forEach(r -> areas.put(r.key(), layer.areaKm2ByKey().get(r.key())));
-        return new RegionLayer(layer.sourceId(), layer.file(), members, areas);
     }
 
     /** Readers see at most this many notices of one kind; report.json keeps every finding. */

@@ -1,7 +1,9 @@
 package aequa.atlas;
 
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 import aequa.inputs.regions.Region;
 
@@ -19,5 +21,21 @@ record RegionLayer(String sourceId, String file, List<Region> regions, Map<Strin
     RegionLayer {
         regions = List.copyOf(regions);
         areaKm2ByKey = Map.copyOf(areaKm2ByKey);
+    }
+
+    /**
+     * The regions with these keys, in this layer's order, as a layer of their own under the same source id
+     * (the geometry cache finds a source's entries by its id and tells parts of it apart by their regions);
+     * this layer itself when the keys name all of its regions.
+     */
+    RegionLayer subset(List<String> keys) {
+        if (keys.size() == regions.size()) {
+            return this;
+        }
+        Set<String> wanted = Set.copyOf(keys);
+        List<Region> members = regions.stream().filter(r -> wanted.contains(r.key())).toList();
+        Map<String, Double> areas = new HashMap<>();
+        members.forEach(r -> areas.put(r.key(), areaKm2ByKey.get(r.key())));
+        return new RegionLayer(sourceId, file, members, areas);
     }
 }

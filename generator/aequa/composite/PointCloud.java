@@ -25,10 +25,30 @@ final class PointCloud {
 
     private final double[] xyz;
     private final double[] lonLat;
+    /** Point indices sorted by geocentric x, and their x in that order, for the sweep in {@link #gapKm}. */
+    private final int[] byX;
+    private final double[] sortedX;
+    /** The geocentric bounding box: min x, y, z, then max x, y, z. */
+    private final double[] box = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY,
+            Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
 
     private PointCloud(double[] xyz, double[] lonLat) {
         this.xyz = xyz;
         this.lonLat = lonLat;
+        int n = lonLat.length / 2;
+        this.byX = java.util.stream.IntStream.range(0, n).boxed()
+                .sorted(java.util.Comparator.comparingDouble((Integer i) -> xyz[3 * i]).thenComparingInt(i -> i))
+                .mapToInt(Integer::intValue).toArray();
+        this.sortedX = new double[n];
+        for (int k = 0; k < n; k++) {
+            sortedX[k] = xyz[3 * byX[k]];
+        }
+        for (int i = 0; i < n; i++) {
+            for (int axis = 0; axis < 3; axis++) {
+                box[axis] = Math.min(box[axis], xyz[3 * i + axis]);
+                box[3 + axis] = Math.max(box[3 + axis], xyz[3 * i + axis]);
+            }
+        }
     }
 
     static PointCloud of(Collection<? extends Geometry> lonLatGeometries) {
@@ -58,7 +78,12 @@ final class PointCloud {
 
     /**
      * The geodesic distance in km between the nearest pair of points of the two clouds: the pair nearest in
-     * straight-line (chord) distance, measured along the ellipsoid. Infinite when either cloud is empty.
+     * straight-line (chord) distance, measured along the ellipsoid; of pairs equally near, the first in this
+     * cloud's order and then the other's. Infinite when either cloud is empty.
+     *
+     * <p>Exact, as comparing every pair would be, but pruned: a point of this cloud farther from the other's
+     * bounding box than the nearest pair so far is skipped, and the other's points are swept outwards in
+     * order of x from the point's own x until the x difference alone exceeds the nearest pair so far.
      */
     double gapKm(PointCloud other) {
         double best = Double.POSITIVE_INFINITY;
@@ -68,15 +93,25 @@ final class PointCloud {
             double x = xyz[3 * i];
             double y = xyz[3 * i + 1];
             double z = xyz[3 * i + 2];
-            for (int j = 0; j < other.size(); j++) {
-                double dx = x - other.xyz[3 * j];
-                double dy = y - other.xyz[3 * j + 1];
-                double dz = z - other.xyz[3 * j + 2];
-                double d2 = dx * dx + dy * dy + dz * dz;
-                if (d2 < best) {
-                    best = d2;
-                    bestA = i;
-                    bestB = j;
+            if (other.boxDistance2(x, y, z) > best) {
+                continue;
+            }
+            int start = lowerBound(other.sortedX, x);
+            for (int direction = -1; direction <= 1; direction += 2) {
+                for (int k = direction < 0 ? start - 1 : start; k >= 0 && k < other.size(); k += direction) {
+                    double dx = x - other.sortedX[k];
+                    if (dx * dx > best) {
+                        break;
+                    }
+                    int j = other.byX[k];
+                    double dy = y - other.xyz[3 * j + 1];
+                    double dz = z - other.xyz[3 * j + 2];
+                    double d2 = dx * dx + dy * dy + dz * dz;
+                    if (d2 < best || d2 == best && i == bestA && j < bestB) {
+                        best = d2;
+                        bestA = i;
+                        bestB = j;
+                    }
                 }
             }
         }
@@ -85,5 +120,31 @@ final class PointCloud {
         }
         return GeodesicDistance.metres(lonLat[2 * bestA], lonLat[2 * bestA + 1],
                 other.lonLat[2 * bestB], other.lonLat[2 * bestB + 1]) / 1000;
+    }
+
+    /** The squared straight-line distance from (x, y, z) to this cloud's bounding box (0 inside it). */
+    private double boxDistance2(double x, double y, double z) {
+        double[] p = {x, y, z};
+        double d2 = 0;
+        for (int axis = 0; axis < 3; axis++) {
+            double outside = Math.max(0, Math.max(box[axis] - p[axis], p[axis] - box[3 + axis]));
+            d2 += outside * outside;
+        }
+        return d2;
+    }
+
+    /** The first index whose value is not below {@code x} in the ascending {@code values}. */
+    private static int lowerBound(double[] values, double x) {
+        int low = 0;
+        int high = values.length;
+        while (low < high) {
+            int mid = (low + high) >>> 1;
+            if (values[mid] < x) {
+                low = mid + 1;
+            } else {
+                high = mid;
+            }
+        }
+        return low;
     }
 }

@@ -3,10 +3,12 @@ package aequa.drawing;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
+import java.awt.image.DataBufferInt;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import java.util.List;
 
 import javax.imageio.ImageIO;
 
@@ -94,6 +96,30 @@ public final class MapDrawings {
         if (scale < 1 || scale > 4) {
             throw new IllegalArgumentException("scale must be 1..4: " + scale);
         }
+        Raster raster = raster(model, theme, widthPx, scale, options);
+        return drawn(DrawnMap.Format.PNG, encode(raster.image()), raster.layout(), "px", raster.canvas());
+    }
+
+    /**
+     * The PNG at 2 device pixels per CSS pixel, and the one at 1 made from it rather than painted again: each
+     * of its pixels is the mean of a 2 x 2 block of the larger image, per channel, rounded to nearest
+     * (box-filter downsampling, that is supersampled anti-aliasing on top of the renderer's own). Default web
+     * options with a title, as {@link #png(MapModel, Theme, int, int)}.
+     *
+     * @return {@code [1x, 2x]}
+     */
+    public static List<DrawnMap> pngPair(MapModel model, Theme theme, int widthPx) {
+        Raster raster = raster(model, theme, widthPx, 2, DrawOptions.web().withTitle(true));
+        DrawnMap single = drawn(DrawnMap.Format.PNG, encode(halved(raster.image())), raster.layout(), "px", raster.canvas());
+        DrawnMap twice = drawn(DrawnMap.Format.PNG, encode(raster.image()), raster.layout(), "px", raster.canvas());
+        return List.of(single, twice);
+    }
+
+    /** A painted image with the layout and canvas it was painted with. */
+    private record Raster(BufferedImage image, Layout layout, Canvas canvas) {
+    }
+
+    private static Raster raster(MapModel model, Theme theme, int widthPx, int scale, DrawOptions options) {
         Medium medium = Medium.SCREEN;
         WebSize size = new WebSize(widthPx);
         Typesetter type = new Typesetter(medium.unitsPerPt(size.widthPx()), Typesetter.installedFamily(theme.fonts().family()));
@@ -111,13 +137,45 @@ public final class MapDrawings {
             g.scale(scale, scale);
             Canvas canvas = new Canvas(g, type);
             painter.paint(canvas, layout, new FixedDecimal(3), false);
-            ByteArrayOutputStream out = new ByteArrayOutputStream();
-            ImageIO.write(image, "png", out);
-            return drawn(DrawnMap.Format.PNG, out.toByteArray(), layout, "px", canvas);
-        } catch (IOException e) {
-            throw new UncheckedIOException("PNG encoding failed in memory", e);
+            return new Raster(image, layout, canvas);
         } finally {
             g.dispose();
+        }
+    }
+
+    /** Half the width and height of an RGB image of even size: each pixel the rounded mean of a 2 x 2 block. */
+    static BufferedImage halved(BufferedImage image) {
+        int width = image.getWidth() / 2;
+        int height = image.getHeight() / 2;
+        int[] from = ((DataBufferInt) image.getRaster().getDataBuffer()).getData();
+        BufferedImage half = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
+        int[] to = ((DataBufferInt) half.getRaster().getDataBuffer()).getData();
+        int stride = image.getWidth();
+        for (int y = 0; y < height; y++) {
+            for (int x = 0; x < width; x++) {
+                int top = 2 * y * stride + 2 * x;
+                int a = from[top];
+                int b = from[top + 1];
+                int c = from[top + stride];
+                int d = from[top + stride + 1];
+                int rgb = 0;
+                for (int shift = 0; shift <= 16; shift += 8) {
+                    int sum = (a >> shift & 0xff) + (b >> shift & 0xff) + (c >> shift & 0xff) + (d >> shift & 0xff);
+                    rgb |= (sum + 2) / 4 << shift;
+                }
+                to[y * width + x] = rgb;
+            }
+        }
+        return half;
+    }
+
+    private static byte[] encode(BufferedImage image) {
+        try {
+            ByteArrayOutputStream out = new ByteArrayOutputStream();
+            ImageIO.write(image, "png", out);
+            return out.toByteArray();
+        } catch (IOException e) {
+            throw new UncheckedIOException("PNG encoding failed in memory", e);
         }
     }
 

@@ -1,14 +1,14 @@
 package aequa.drawing;
 
 import java.awt.geom.Path2D;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.Polygon;
+
+import aequa.planar.LongIntTable;
 
 /**
  * Turns page-unit geometry into {@link Path2D}s rounded to the output precision, and extracts the border
@@ -91,19 +91,25 @@ final class PagePaths {
         for (Geometry g : pageGeometries) {
             vertices += g.getNumPoints();
         }
-        // sized for every segment up front: rehashing was a visible share of the time on 3,000-region maps
-        Map<Segment, Integer> uses = new HashMap<>(vertices * 2);
-        forEachSegment(pageGeometries, quantum, (s, ax, ay, bx, by) -> uses.merge(s, 1, Integer::sum));
+        // every distinct rounded point gets a number, every segment the pair of its points' numbers, and a
+        // segment's uses are counted on primitive arrays: boxed keys in a HashMap were most of the time
+        LongIntTable pointNumbers = new LongIntTable(vertices);
+        LongIntTable segmentUses = new LongIntTable(vertices);
+        forEachSegment(pageGeometries, quantum, pointNumbers, (segment, ax, ay, bx, by) -> {
+            int uses = segmentUses.get(segment);
+            segmentUses.put(segment, uses < 0 ? 1 : uses + 1);
+        });
         Path2D.Double inner = new Path2D.Double();
         Path2D.Double outer = new Path2D.Double();
-        Map<Segment, Boolean> emitted = new HashMap<>(vertices * 2);
         double[] innerEnd = {Double.NaN, Double.NaN};
         double[] outerEnd = {Double.NaN, Double.NaN};
-        forEachSegment(pageGeometries, quantum, (s, ax, ay, bx, by) -> {
-            boolean shared = uses.get(s) > 1;
-            if (emitted.putIfAbsent(s, Boolean.TRUE) != null) {
+        forEachSegment(pageGeometries, quantum, pointNumbers, (segment, ax, ay, bx, by) -> {
+            int uses = segmentUses.get(segment);
+            if (uses == DRAWN) {
                 return;
             }
+            segmentUses.put(segment, DRAWN);
+            boolean shared = uses > 1;
             Path2D.Double target = shared ? inner : outer;
             double[] end = shared ? innerEnd : outerEnd;
             if (ax != end[0] || ay != end[1]) {
@@ -116,18 +122,16 @@ final class PagePaths {
         return new Path2D.Double[]{inner, outer};
     }
 
+    /** The uses recorded for a segment once it is drawn (no segment has so many rings). */
+    private static final int DRAWN = Integer.MAX_VALUE;
+
     private interface SegmentVisitor {
-        void visit(Segment key, double ax, double ay, double bx, double by);
+        /** {@code segment}: the numbers of its two points, smaller first, packed in one long (direction-free). */
+        void visit(long segment, double ax, double ay, double bx, double by);
     }
 
-    /** A segment between two quantised points, direction-free. */
-    private record Segment(long from, long to) {
-        static Segment of(long a, long b) {
-            return a < b ? new Segment(a, b) : new Segment(b, a);
-        }
-    }
-
-    private static void forEachSegment(List<Geometry> geometries, double quantum, SegmentVisitor visitor) {
+    private static void forEachSegment(List<Geometry> geometries, double quantum, LongIntTable pointNumbers,
+                                       SegmentVisitor visitor) {
         for (Geometry geometry : geometries) {
             for (int i = 0; i < geometry.getNumGeometries(); i++) {
                 Geometry part = geometry.getGeometryN(i);
@@ -135,32 +139,46 @@ final class PagePaths {
                     continue;
                 }
                 Polygon polygon = (Polygon) part;
-                ringSegments(polygon.getExteriorRing(), quantum, visitor);
+                ringSegments(polygon.getExteriorRing(), quantum, pointNumbers, visitor);
                 for (int h = 0; h < polygon.getNumInteriorRing(); h++) {
-                    ringSegments(polygon.getInteriorRingN(h), quantum, visitor);
+                    ringSegments(polygon.getInteriorRingN(h), quantum, pointNumbers, visitor);
                 }
             }
         }
     }
 
-    private static void ringSegments(LineString ring, double quantum, SegmentVisitor visitor) {
+    private static void ringSegments(LineString ring, double quantum, LongIntTable pointNumbers, SegmentVisitor visitor) {
         Coordinate[] cs = ring.getCoordinates();
         if (cs.length < 2) {
             return;
         }
         long previousX = Math.round(cs[0].x / quantum);
         long previousY = Math.round(cs[0].y / quantum);
+        int previous = pointNumber(pointNumbers, previousX, previousY);
         for (int i = 1; i < cs.length; i++) {
             long x = Math.round(cs[i].x / quantum);
             long y = Math.round(cs[i].y / quantum);
             if (x == previousX && y == previousY) {
                 continue;
             }
-            Segment key = Segment.of(pack(previousX, previousY), pack(x, y));
-            visitor.visit(key, previousX * quantum, previousY * quantum, x * quantum, y * quantum);
+            int point = pointNumber(pointNumbers, x, y);
+            long segment = previous < point ? (long) previous << 32 | point : (long) point << 32 | previous;
+            visitor.visit(segment, previousX * quantum, previousY * quantum, x * quantum, y * quantum);
             previousX = x;
             previousY = y;
+            previous = point;
         }
+    }
+
+    /** The number of the rounded point (x, y) in page quanta, a new one the first time it is met. */
+    private static int pointNumber(LongIntTable pointNumbers, long x, long y) {
+        long key = pack(x, y);
+        int number = pointNumbers.get(key);
+        if (number < 0) {
+            number = pointNumbers.size();
+            pointNumbers.put(key, number);
+        }
+        return number;
     }
 
     private static long pack(long x, long y) {

@@ -4,12 +4,12 @@ import java.util.Arrays;
 
 /**
  * A map from {@code long} keys to non-negative {@code int} values: open addressing with linear probing on
- * primitive arrays. Ours because the coverage structures look up millions of packed vertex-number pairs,
- * and {@code HashMap<Long, Integer>} boxes every key and value and hashes a pair (a, b) packed as
+ * primitive arrays. Ours because the coverage structures and the drawing's border network look up millions
+ * of packed vertex-number pairs, and {@code HashMap<Long, Integer>} boxes every key and value and hashes a pair (a, b) packed as
  * {@code a << 32 | b} to {@code a ^ b}, which collides for whole families of pairs. Keys are mixed with a
  * 64-bit finaliser (MurmurHash3's fmix64, Appleby 2011) before probing. No removal.
  */
-final class LongIntTable {
+public final class LongIntTable {
 
     private static final int ABSENT = -1;
 
@@ -18,7 +18,7 @@ final class LongIntTable {
     private int size;
 
     /** @param expected the number of entries expected; the table grows beyond it */
-    LongIntTable(int expected) {
+    public LongIntTable(int expected) {
         int capacity = Integer.highestOneBit(Math.max(8, expected * 2 - 1)) << 1;
         keys = new long[capacity];
         values = new int[capacity];
@@ -26,7 +26,7 @@ final class LongIntTable {
     }
 
     /** The value stored for {@code key}, or -1 when there is none. */
-    int get(long key) {
+    public int get(long key) {
         int mask = keys.length - 1;
         for (int slot = slot(key, mask); values[slot] != ABSENT; slot = (slot + 1) & mask) {
             if (keys[slot] == key) {
@@ -36,12 +36,17 @@ final class LongIntTable {
         return ABSENT;
     }
 
-    boolean containsKey(long key) {
+    /** How many keys are stored. */
+    public int size() {
+        return size;
+    }
+
+    public boolean containsKey(long key) {
         return get(key) != ABSENT;
     }
 
     /** Stores {@code value} (non-negative) for {@code key}, replacing any earlier value. */
-    void put(long key, int value) {
+    public void put(long key, int value) {
         if (value < 0) {
             throw new IllegalArgumentException("values are non-negative: " + value);
         }

@@ -15,7 +15,11 @@ public final class FootprintSamples {
     private final int interiorCount;
     private final int extremeCount;
 
-    FootprintSamples(double[] lonLatDeg, double[] weights, int interiorCount, int extremeCount) {
+    /**
+     * Samples as {@link FootprintAnalysis} makes them, or as a cache stored them ({@link #lonLatDeg()},
+     * {@link #weights()}, {@link #interiorCount()}, {@link #extremeCount()}): the arrays are copied.
+     */
+    public FootprintSamples(double[] lonLatDeg, double[] weights, int interiorCount, int extremeCount) {
         this.lonLatDeg = lonLatDeg.clone();
         this.weights = weights.clone();
         this.interiorCount = interiorCount;
@@ -30,6 +34,16 @@ public final class FootprintSamples {
     /** Number of interior (weighted) points; they come first. */
     public int interiorCount() {
         return interiorCount;
+    }
+
+    /** Number of extreme boundary points (north-, south-, east-, westernmost); they follow the interior points. */
+    public int extremeCount() {
+        return extremeCount;
+    }
+
+    /** A copy of the weights, in steradians of the unit sphere (0 for boundary points). */
+    public double[] weights() {
+        return weights.clone();
     }
 
     /** A copy of the interleaved (lon, lat) coordinates in degrees. */

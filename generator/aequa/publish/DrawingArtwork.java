@@ -66,6 +66,13 @@ public final class DrawingArtwork implements MapArtwork {
         return MapDrawings.png(map, theme, widthPx, scale).bytes();
     }
 
+    /** The 2x PNG, and the 1x made from it ({@link MapDrawings#pngPair}): the map is painted once for both. */
+    @Override
+    public byte[][] pngs(MapModel map, int widthPx) {
+        List<DrawnMap> pair = MapDrawings.pngPair(map, theme, widthPx);
+        return new byte[][] {pair.get(0).bytes(), pair.get(1).bytes()};
+    }
+
     @Override
     public String fingerprint() {
         if (fingerprint == null) {

@@ -32,6 +32,14 @@ public interface MapArtwork {
     byte[] png(MapModel map, int widthPx, int scale);
 
     /**
+     * Both PNGs of a map, {@code [scale 1, scale 2]}, as {@link #png} gives them; an implementation may make
+     * one from the other instead of painting the map twice.
+     */
+    default byte[][] pngs(MapModel map, int widthPx) {
+        return new byte[][] {png(map, widthPx, 1), png(map, widthPx, 2)};
+    }
+
+    /**
      * Identifies the drawing code and theme. When it changes every map is redrawn; return, for example, the
      * aequa version plus a hash of the theme file. The default (empty) means "depends on the model only".
      */

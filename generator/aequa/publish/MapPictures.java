@@ -8,8 +8,8 @@ import java.util.function.Supplier;
 import aequa.atlas.MapModel;
 
 /**
- * The five pictures of one map, drawn at the same time: web SVG, print SVG, PDF, PNG and 2x PNG are
- * independent, so each goes to its own task of the fork/join pool the publish runs in (the common pool
+ * The five pictures of one map, drawn at the same time: web SVG, print SVG, PDF and the two PNGs (one
+ * painting, {@link MapArtwork#pngs}) are independent, so each goes to its own task of the fork/join pool the publish runs in (the common pool
  * unless the caller runs it inside another). The result does not depend on how many run at once.
  *
  * @param webSvg    the web SVG, inlined in the map's page
@@ -22,10 +22,10 @@ record MapPictures(String webSvg, byte[] printSvg, byte[] pdf, byte[] png, byte[
 
     static MapPictures draw(MapArtwork artwork, MapModel map, int pngWidthPx) {
         List<Supplier<Object>> formats = List.of(() -> artwork.webSvg(map), () -> artwork.printSvg(map),
-                () -> artwork.pdf(map), () -> artwork.png(map, pngWidthPx, 1), () -> artwork.png(map, pngWidthPx, 2));
+                () -> artwork.pdf(map), () -> artwork.pngs(map, pngWidthPx));
         List<Object> drawn = formats.parallelStream().map(Supplier::get).toList();
-        return new MapPictures((String) drawn.get(0), (byte[]) drawn.get(1), (byte[]) drawn.get(2), (byte[]) drawn.get(3),
-                (byte[]) drawn.get(4));
+        byte[][] pngs = (byte[][]) drawn.get(3);
+        return new MapPictures((String) drawn.get(0), (byte[]) drawn.get(1), (byte[]) drawn.get(2), pngs[0], pngs[1]);
     }
 
     /**

@@ -1,5 +1,6 @@
 package aequa.drawing;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -39,6 +40,33 @@ class OutputFilesTest {
             assertEquals((int) Math.round(png.height()) * scale, image.getHeight());
             save("choropleth-" + scale + "x.png", png.bytes());
         }
+    }
+
+    @Test
+    void thePublishedPairIsOnePaintingAtTwiceTheWidthAndItsTwoByTwoMean() throws IOException {
+        MapModel model = MapFixtures.choropleth(14, 12);
+        Theme theme = Themes.bundled("daylight");
+        List<DrawnMap> pair = MapDrawings.pngPair(model, theme, 800);
+        // javax.imageio is the reference PNG decoder here (ISO/IEC 15948 reader in the JDK)
+        BufferedImage single = ImageIO.read(new ByteArrayInputStream(pair.get(0).bytes()));
+        BufferedImage twice = ImageIO.read(new ByteArrayInputStream(pair.get(1).bytes()));
+        assertArrayEquals(MapDrawings.png(model, theme, 800, 2).bytes(), pair.get(1).bytes(), "the 2x PNG is the usual one");
+        assertEquals(800, single.getWidth());
+        assertEquals(2 * single.getWidth(), twice.getWidth());
+        assertEquals(2 * single.getHeight(), twice.getHeight());
+        for (int y = 0; y < single.getHeight(); y++) {
+            for (int x = 0; x < single.getWidth(); x++) {
+                for (int shift = 0; shift <= 16; shift += 8) {
+                    int sum = 0;
+                    for (int k = 0; k < 4; k++) {
+                        sum += twice.getRGB(2 * x + k % 2, 2 * y + k / 2) >> shift & 0xff;
+                    }
+                    // box-filter downsampling: the mean of the block, rounded half up
+                    assertEquals((sum + 2) / 4, single.getRGB(x, y) >> shift & 0xff, "pixel " + x + "," + y);
+                }
+            }
+        }
+        save("choropleth-1x-from-2x.png", pair.get(0).bytes());
     }
 
     @Test
