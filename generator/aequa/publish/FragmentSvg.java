@@ -12,8 +12,8 @@ import java.util.regex.Pattern;
  * {@code <desc>} stay its first children, which also name and describe it: SVG Accessibility API Mappings,
  * section 5), and sized by a style attribute to the width of its container.
  *
- * <p>Works tag by tag on the web SVG as {@code aequa.drawing.MapDrawings#webSvg} writes it (attributes in
- * single quotes, text escaped, so a {@code <} only ever opens a tag); text is left as it is. Refuses, as a
+ * <p>Works tag by tag on well-formed SVG whose text is escaped (as {@code aequa.drawing.MapDrawings#webSvg}
+ * writes it), so a {@code <} only ever opens a tag; text is left as it is. Refuses, as a
  * programming error, an SVG that could load anything or refers to an id (a style, script, image or use
  * element, an {@code href} or {@code src}, a {@code url(...)} in a style), since the fragment must stand alone.
  */
@@ -22,8 +22,9 @@ final class FragmentSvg {
     /** The root's size: its container's width, height from the viewBox's proportions. */
     static final String ROOT_STYLE = "display:block;width:100%;max-width:100%;height:auto;margin:0";
 
-    private static final Pattern TAG = Pattern.compile("<([A-Za-z][A-Za-z0-9:-]*)((?:\\s+[A-Za-z][A-Za-z0-9:_.-]*='[^']*')*)\\s*(/?)>");
-    private static final Pattern ATTRIBUTE = Pattern.compile("\\s+([A-Za-z][A-Za-z0-9:_.-]*)='([^']*)'");
+    private static final Pattern TAG = Pattern.compile(
+            "<([A-Za-z][A-Za-z0-9:-]*)((?:\\s+[A-Za-z][A-Za-z0-9:_.-]*=(?:'[^']*'|\"[^\"]*\"))*)\\s*(/?)>");
+    private static final Pattern ATTRIBUTE = Pattern.compile("\\s+([A-Za-z][A-Za-z0-9:_.-]*)=('[^']*'|\"[^\"]*\")");
     private static final Pattern OPENING = Pattern.compile("<[A-Za-z]");
     private static final Pattern TITLE = Pattern.compile("<title[^>]*>([^<]*)</title>");
     private static final Set<String> LOADING_ELEMENTS = Set.of("style", "script", "image", "use", "foreignobject", "a",
@@ -43,7 +44,8 @@ final class FragmentSvg {
             throw new IllegalStateException("the web SVG must start with its root element");
         }
         Matcher title = TITLE.matcher(webSvg);
-        String label = title.find() ? title.group(1) : ""; // escaped for text and either quote (SvgOutput.escape)
+        // XML text: already escaped but for the apostrophe, which text may hold and a single-quoted attribute may not
+        String label = title.find() ? title.group(1).replace("'", "&apos;") : "";
         Matcher tags = TAG.matcher(webSvg);
         StringBuilder out = new StringBuilder(webSvg.length());
         boolean root = true;
@@ -61,7 +63,8 @@ final class FragmentSvg {
             Matcher attributes = ATTRIBUTE.matcher(tags.group(2));
             while (attributes.find()) {
                 String attribute = attributes.group(1);
-                String value = attributes.group(2);
+                String quoted = attributes.group(2);
+                String value = quoted.substring(1, quoted.length() - 1);
                 if (LOADING_ATTRIBUTES.contains(attribute.toLowerCase(Locale.ROOT))
                         || attribute.equals("style") && value.toLowerCase(Locale.ROOT).contains("url(")) {
                     throw new IllegalStateException("the web SVG has " + attribute + "='" + value + "'; a fragment cannot carry it");
@@ -69,7 +72,7 @@ final class FragmentSvg {
                 if (attribute.equals("id") || root && attribute.equals("aria-labelledby")) {
                     continue;
                 }
-                tag.append(' ').append(attribute).append("='").append(value).append('\'');
+                tag.append(' ').append(attribute).append('=').append(quoted);
             }
             tag.append(tags.group(3)).append('>');
             tags.appendReplacement(out, Matcher.quoteReplacement(tag.toString()));
@@ -77,7 +80,7 @@ final class FragmentSvg {
         }
         tags.appendTail(out);
         if (rewritten != OPENING.matcher(webSvg).results().count()) {
-            throw new IllegalStateException("the web SVG has a tag this rewriting does not read (attributes in double quotes?)");
+            throw new IllegalStateException("the web SVG has a tag this rewriting does not read");
         }
         return out.toString();
     }
