@@ -136,6 +136,10 @@ class EmbedBrowserTest {
                 }
             }
         }
+        // the fallback height of the frame code is estimated for a 640 px column; at 1280 px the test article's
+        // column is 672 px, so the estimate must be near the measured height (within a quarter, either way)
+        int fallbackPx = Integer.parseInt(driver.findElement(By.cssSelector("iframe[data-aequa-embed]")).getDomAttribute("height"));
+        assertEquals(heightsPx.get(2), fallbackPx, heightsPx.get(2) / 4.0, "fallback height against the measured one at 1280 px");
         // the map grows with the width and the key wraps less: the frame's height must have followed
         assertNotEquals(heightsPx.get(0), heightsPx.get(2), "heights at 320 and 1280 px: " + heightsPx);
     }
@@ -229,6 +233,20 @@ class EmbedBrowserTest {
         assertEquals(strokes.get(1), strokes.get(0), "the fill is stroked with the border colour");
         assertEquals(strokes.get(3), strokes.get(2), "the hatch lines keep the colour they were drawn with");
         assertNotEquals(strokes.get(0), strokes.get(2), "hatch lines are not border lines");
+
+        // the map page's hover rule (.map-frame .is-lit, set by hover.js) outlines the fill, not the hatch lines
+        driver.get(siteAddress + map.at("/files/page").asText());
+        @SuppressWarnings("unchecked")
+        List<String> lit = (List<String>) ((JavascriptExecutor) driver).executeScript(
+                "const r = document.querySelector(\".map-frame g[data-class='no-data']\");"
+                        + "const groups = r.querySelectorAll(':scope > g');"
+                        + "const fill = groups[0].querySelector('path'), hatch = groups[1].querySelector('path');"
+                        + "const before = getComputedStyle(fill).stroke; r.classList.add('is-lit');"
+                        + "const ink = getComputedStyle(document.body).color;"
+                        + "return [before, getComputedStyle(fill).stroke, ink, getComputedStyle(hatch).stroke, groups[1].style.stroke];");
+        assertEquals(lit.get(2), lit.get(1), "a lit region is outlined in the ink colour");
+        assertNotEquals(lit.get(0), lit.get(1), "lighting changes the outline");
+        assertEquals(lit.get(4), lit.get(3), "the hatch lines of a lit region keep their colour");
     }
 
     private static String pressCopy(WebElement way) {
