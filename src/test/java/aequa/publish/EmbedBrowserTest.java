@@ -144,6 +144,28 @@ class EmbedBrowserTest {
         assertNotEquals(heightsPx.get(0), heightsPx.get(2), "heights at 320 and 1280 px: " + heightsPx);
     }
 
+    /** Where the host page runs no script of ours, the frame keeps the height written in the code. */
+    @Test
+    void withoutTheHostScriptTheFrameKeepsItsFallbackHeight() throws Exception {
+        String code = frameCodeOf(twoMaps().get(0));
+        String frameOnly = code.substring(0, code.indexOf("<script"));
+        assertTrue(frameOnly.contains("</iframe>"), code);
+        article("frame-without-script.html", paragraphs() + frameOnly + paragraphs());
+        resize(768);
+        driver.get(articleAddress + "frame-without-script.html");
+        WebElement frame = driver.findElement(By.cssSelector("iframe[data-aequa-embed]"));
+        new WebDriverWait(driver, SETTLE).until(d -> {
+            d.switchTo().frame(frame);
+            try {
+                return "complete".equals(((JavascriptExecutor) d).executeScript("return document.readyState;"));
+            } finally {
+                d.switchTo().defaultContent();
+            }
+        });
+        assertEquals(Double.parseDouble(frame.getDomAttribute("height")), number(rect(frame).get("height")), 0.5);
+        assertNoHorizontalScroll("article with a frame and no host script");
+    }
+
     @Test
     void fragmentsFitTheColumnAtEachWidth() throws Exception {
         List<JsonNode> maps = twoMaps();
