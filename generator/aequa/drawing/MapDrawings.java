@@ -52,12 +52,8 @@ public final class MapDrawings {
         Canvas canvas = new Canvas(g, type);
         painter.paint(canvas, layout, precision, true);
         String rootId = Ids.of("map", model.id());
-        // region borders are drawn by this rule rather than as a second copy of every edge, which keeps large
-        // maps small; its specificity is lower than the page stylesheet's hover rule, so hovering still works
-        String borders = "svg.aequa-map g[data-key]>g>path{stroke:" + theme.colours().border().hex() + ";stroke-width:"
-                + new FixedDecimal(2).apply(theme.lines().border().pt() * type.unitsPerPt()) + "px;stroke-linejoin:round}";
         String svg = SvgOutput.tidy(SvgOutput.webRoot(g, rootId, width, layout.heightU(), model.spec().title(),
-                Descriptions.of(model), borders), precision.decimals());
+                Descriptions.of(model)), precision.decimals());
         return drawn(DrawnMap.Format.WEB_SVG, svg.getBytes(StandardCharsets.UTF_8), layout, "px", canvas);
     }
 

@@ -2,7 +2,9 @@ package aequa.drawing;
 
 import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
@@ -100,7 +102,10 @@ final class MapPainter {
             if (graticule && wholeGlobe) {
                 paintGlobe(canvas, panel.fit(), graticuleM, precision, suffix);
             }
-            canvas.begin("regions" + suffix);
+            // web: the inner borders are the stroke of the region fills, inherited from presentation attributes
+            // on this group, rather than a second copy of every edge (which keeps large maps small); hatch lines
+            // set their own stroke and the page's hover rule on a region overrides it (SVG 2, section 6.8)
+            canvas.begin("regions" + suffix, web ? borderPresentation(canvas) : Map.of(), null);
             if (model.composite()) {
                 PartFrames.paintRegionsByPart(canvas, model, pages, suffix,
                         partPages -> RegionFillLayer.paint(canvas, model, theme, fills, partPages, panel.period(), regionPrefix, web, precision, circles));
@@ -137,6 +142,15 @@ final class MapPainter {
         paintAreaScale(canvas, layout);
         paintParagraph(canvas, "caption", layout.captionLines(), layout.captionTopU(), layout.marginU(), c.textMuted());
         paintParagraph(canvas, "credits", layout.creditLines(), layout.creditsTopU(), layout.marginU(), c.textMuted());
+    }
+
+    /** The theme's inner-border colour and weight in page units, as SVG presentation attributes. */
+    private Map<String, String> borderPresentation(Canvas canvas) {
+        Map<String, String> attributes = new LinkedHashMap<>();
+        attributes.put("stroke", theme.colours().border().hex());
+        attributes.put("stroke-width", new FixedDecimal(2).apply(theme.lines().border().pt() * canvas.unitsPerPt()));
+        attributes.put("stroke-linejoin", "round");
+        return attributes;
     }
 
     private Geometry graticuleLines() {

@@ -69,8 +69,7 @@ final class SvgOutput {
      * {@code aria-labelledby} pointing at a {@code <title>} and {@code <desc>} written first inside it
      * (WAI-ARIA 1.2 "img" role; the pattern recommended for inline SVG by the W3C SVG Accessibility API Mappings).
      */
-    static String webRoot(SVGGraphics2D g, String rootId, double width, double height, String title, String description,
-                          String style) {
+    static String webRoot(SVGGraphics2D g, String rootId, double width, double height, String title, String description) {
         String element = g.getSVGElement(rootId, false, new ViewBox(0, 0, width, height), null, null);
         int rootEnd = element.indexOf('>');
         String open = element.substring(0, rootEnd);
@@ -78,7 +77,7 @@ final class SvgOutput {
         return open + " class='aequa-map' role='img' aria-labelledby='" + rootId + "-title " + rootId + "-desc'>"
                 + "<title id='" + rootId + "-title'>" + escape(title) + "</title>"
                 + "<desc id='" + rootId + "-desc'>" + escape(description) + "</desc>"
-                + "<style>" + style + "</style>" + rest;
+                + rest;
     }
 
     /** The print root: exact physical size in millimetres, one user unit per millimetre. */

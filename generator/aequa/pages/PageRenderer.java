@@ -46,10 +46,12 @@ public final class PageRenderer {
 
     /** Every template a site uses, also the set hashed for incremental builds. */
     public static final List<String> TEMPLATE_NAMES = List.of(
-            "layout.ftlh", "index.ftlh", "map.ftlh", "figures.ftlh", "method.ftlh", "changes.ftlh");
+            "layout.ftlh", "index.ftlh", "map.ftlh", "figures.ftlh", "method.ftlh", "changes.ftlh", "embed-words.ftlh",
+            "embed.ftlh", "fragment.ftlh");
 
     /** Files copied verbatim into the site's {@code assets/} folder; overridable like templates. */
-    public static final List<String> ASSET_NAMES = List.of("assets/site.css", "assets/hover.js");
+    public static final List<String> ASSET_NAMES = List.of("assets/site.css", "assets/hover.js", "assets/embed-frame.js",
+            "assets/embed-host.js", "assets/embed-copy.js");
 
     private static final Pattern NO_ESCAPE = Pattern.compile(
             "\\?\\s*no_esc\\b|<#\\s*noautoesc|auto_esc\\s*=\\s*false|<#\\s*outputformat");
@@ -97,14 +99,37 @@ public final class PageRenderer {
         return render("index.ftlh", site, "", page);
     }
 
+    /** A map page without the section that offers the map for other sites' pages. */
     public String renderMap(SiteView site, MapPageView page) {
-        TemplateHTMLOutputModel svg;
+        return render("map.ftlh", site, "../../", page, Map.of("mapSvg", markup(page.svg())));
+    }
+
+    /** A map page with its section "Use this map in your own page". */
+    public String renderMap(SiteView site, MapPageView page, EmbedView embed) {
+        return render("map.ftlh", site, "../../", page, Map.of("mapSvg", markup(page.svg()), "embed", embed));
+    }
+
+    /** The map's embed page, shown in other sites' frames. */
+    public String renderEmbed(SiteView site, MapPageView page, EmbedView embed) {
+        return render("embed.ftlh", site, "../../", page, Map.of("mapSvg", markup(page.svg()), "embed", embed));
+    }
+
+    /**
+     * The map as a self-contained HTML fragment.
+     *
+     * @param fragmentSvg the map's SVG without ids or anything it would load (see aequa.publish.FragmentSvg);
+     *                    inserted unescaped, like {@link MapPageView#svg()}
+     */
+    public String renderFragment(SiteView site, MapPageView page, EmbedView embed, String fragmentSvg) {
+        return render("fragment.ftlh", site, "../../", page, Map.of("mapSvg", markup(fragmentSvg), "embed", embed));
+    }
+
+    private static TemplateHTMLOutputModel markup(String trusted) {
         try {
-            svg = HTMLOutputFormat.INSTANCE.fromMarkup(page.svg());
+            return HTMLOutputFormat.INSTANCE.fromMarkup(trusted);
         } catch (TemplateModelException e) {
             throw new IllegalStateException("Freemarker refused markup", e);
         }
-        return render("map.ftlh", site, "../../", page, Map.of("mapSvg", svg));
     }
 
     public String renderFigures(SiteView site, FiguresView page) {

@@ -7,12 +7,13 @@ import java.util.List;
  * file-safe id ({@link SafePaths#fileSafeId}), never from raw user text.
  */
 record MapFiles(String fileId, String page, String figures, String printSvg, String pdf, String webSvg, String png,
-                String pngDouble, String csv) {
+                String pngDouble, String csv, String embed, String fragment) {
 
     static MapFiles of(String fileId) {
         String dir = "maps/" + fileId + "/";
         return new MapFiles(fileId, dir + "index.html", dir + "figures.html", dir + fileId + ".svg", dir + fileId + ".pdf",
-                dir + fileId + "-web.svg", dir + fileId + ".png", dir + fileId + "-2x.png", dir + fileId + ".csv");
+                dir + fileId + "-web.svg", dir + fileId + ".png", dir + fileId + "-2x.png", dir + fileId + ".csv",
+                dir + "embed.html", dir + fileId + "-fragment.html");
     }
 
     /** The files the drawing stage makes. */
@@ -22,6 +23,6 @@ record MapFiles(String fileId, String page, String figures, String printSvg, Str
 
     /** The files made from the model and templates, without drawing. */
     List<String> written() {
-        return List.of(page, figures, csv);
+        return List.of(page, figures, csv, embed, fragment);
     }
 }

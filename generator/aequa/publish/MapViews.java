@@ -13,6 +13,7 @@ import aequa.atlas.RegionValue;
 import aequa.project.ClassMethod;
 import aequa.classes.Classification;
 import aequa.classes.FigureText;
+import aequa.pages.EmbedView;
 import aequa.pages.FiguresView;
 import aequa.pages.IndexView;
 import aequa.pages.MapPageView;
@@ -43,6 +44,14 @@ final class MapViews {
         return new MapPageView(files.fileId(), map.spec().title(), map.spec().unit(), map.spec().asOf(), caption(map),
                 summary(map), webSvg, map.spec().notes(), map.spec().source(), circles(map) ? List.of() : legend(map), circleKey(map), downloads,
                 fileName(files.figures()));
+    }
+
+    /** What the map page offers for other sites' pages, and where the embed page and fragment link to. */
+    static EmbedView embed(MapModel map, MapFiles files, String webSvg) {
+        int keyRows = circles(map) ? 1 : map.classification().classCount();
+        String frame = FrameCode.of(map.spec().title(), fileName(files.embed()), "../../assets/embed-host.js",
+                FrameCode.fallbackHeightPx(webSvg, keyRows));
+        return new EmbedView(frame, fileName(files.fragment()), fileName(files.page()), "../../method.html#cautions");
     }
 
     static FiguresView figures(MapModel map, MapFiles files) {

@@ -22,6 +22,8 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import aequa.atlas.Atlas;
 import aequa.atlas.MapModel;
 import aequa.findings.Finding;
+import aequa.pages.EmbedView;
+import aequa.pages.MapPageView;
 import aequa.pages.PageRenderer;
 import aequa.pages.SiteView;
 import aequa.publish.PublishProgress.Stage;
@@ -182,7 +184,11 @@ final class SiteBuild {
         if (webSvg == null) {
             webSvg = Files.readString(out.resolve(files.webSvg()), StandardCharsets.UTF_8);
         }
-        write(files.page(), utf8(renderer.renderMap(site, MapViews.page(map, files, webSvg))), pageHash);
+        MapPageView page = MapViews.page(map, files, webSvg);
+        EmbedView embed = MapViews.embed(map, files, webSvg);
+        write(files.page(), utf8(renderer.renderMap(site, page, embed)), pageHash);
+        write(files.embed(), utf8(renderer.renderEmbed(site, page, embed)), pageHash);
+        write(files.fragment(), utf8(renderer.renderFragment(site, page, embed, FragmentSvg.of(webSvg))), pageHash);
         write(files.figures(), utf8(renderer.renderFigures(site, MapViews.figures(map, files))), pageHash);
         write(files.csv(), FiguresCsv.write(map), pageHash);
     }

@@ -131,6 +131,34 @@ class SvgDrawingTest {
         assertEquals(3, statuses, "the fixture has one no-data, one withheld and one not-applicable region");
     }
 
+    /**
+     * The web SVG's inner borders are the stroke its region fills inherit from presentation attributes on the
+     * regions group; hatch lines set their own stroke, so they keep their colour. (An earlier style rule aimed
+     * at every path of a region also turned the hatch lines into white borders.) Inheritance, and a property
+     * set on the element itself winning over it: SVG 2, section 6.8 and CSS Cascade 4, section 7. Chromium's
+     * computed strokes are checked in EmbedBrowserTest.
+     */
+    @Test
+    void bordersAreTheFillsStrokeAndHatchLinesKeepTheirOwn() {
+        SvgDoc svg = SvgDoc.parse(MapDrawings.webSvg(MODEL, DAYLIGHT, WebSize.STANDARD).bytes());
+        assertTrue(SvgDoc.elements(svg.root(), "style").isEmpty(), "no style sheet inside the SVG");
+        Element regions = svg.byId("regions");
+        assertEquals(DAYLIGHT.colours().border().hex(), regions.getAttribute("stroke"));
+        assertTrue(Double.parseDouble(regions.getAttribute("stroke-width")) > 0);
+        int hatches = 0;
+        for (Element region : SvgDoc.children(regions)) {
+            List<Element> parts = SvgDoc.children(region).stream().filter(e -> e.getLocalName().equals("g")).toList();
+            assertFalse(parts.get(0).getAttribute("style").contains("stroke"), "the fill inherits the border stroke");
+            for (Element hatch : parts.subList(1, parts.size())) {
+                String style = hatch.getAttribute("style");
+                assertTrue(style.contains("fill:none") && style.matches(".*(^|;)stroke:rgb\\(.*")
+                        && style.contains("stroke-width:"), "hatch lines set their own stroke: " + style);
+                hatches++;
+            }
+        }
+        assertTrue(hatches >= 3, "the fixture has hatched regions: " + hatches);
+    }
+
     @Test
     void rendersAreByteIdentical() {
         assertArrayEquals(MapDrawings.webSvg(MODEL, DAYLIGHT, WebSize.STANDARD).bytes(),
