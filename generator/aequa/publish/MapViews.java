@@ -71,7 +71,8 @@ final class MapViews {
         if (!params.isEmpty()) {
             text.append(" (").append(params).append(')');
         }
-        text.append(" on the WGS 84 ellipsoid; areas are true to within ")
+        text.append(map.areaAudit().passed() ? " on the WGS 84 ellipsoid; areas are true to within "
+                        : " on the WGS 84 ellipsoid; areas are not true, they differ by up to ")
                 .append(percent(map.areaAudit().maxRelativeError())).append(" %.");
         if (!map.spec().source().isEmpty()) {
             text.append(" Figures: ").append(map.spec().source());
