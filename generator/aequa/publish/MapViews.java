@@ -187,12 +187,8 @@ final class MapViews {
         Classification classes = map.classification();
         List<MapPageView.LegendRow> rows = new ArrayList<>();
         int fills = map.ramp().fills().size();
-        int decimals = FigureText.limitDecimals(classes.limits());
         for (int i = 0; i < classes.classCount() && fills > 0; i++) {
-            String from = FigureText.format(classes.limits().get(i), decimals);
-            String to = FigureText.format(classes.limits().get(i + 1), decimals);
-            boolean last = i == classes.classCount() - 1;
-            String range = from + (last ? " to " : " to under ") + to;
+            String range = FigureText.classRange(classes.limits(), i);
             int fillIndex = Math.min(i, fills - 1);
             rows.add(new MapPageView.LegendRow(map.ramp().fills().get(fillIndex).hex(), range, classes.counts().get(i)));
         }
