@@ -39,7 +39,7 @@ final class ChoiceReport {
         }
         s.append("  WKT 2:\n");
         choice.projection().wkt2().lines().forEach(line -> s.append("    ").append(line).append('\n'));
-        s.append("  PROJ string (for cct, cs2cs and software built on PROJ):\n    ").append(choice.projection().projString()).append('\n');
+        s.append("  PROJ string (for PROJ's cct and software built on PROJ):\n    ").append(choice.projection().projString()).append('\n');
         return s.toString();
     }
 

@@ -30,8 +30,7 @@ public interface EqualAreaProjection {
     String wkt2();
 
     /**
-     * The same projection as a PROJ string that PROJ's {@code cct} and {@code cs2cs} read (degrees in, metres
-     * out); for the families aequa computes on the authalic sphere, a pipeline that spells out the conversion
+     * The same projection as a PROJ string that PROJ's {@code cct} reads (degrees in, metres out); for the families aequa computes on the authalic sphere, a pipeline that spells out the conversion
      * to authalic latitude (see {@code ProjStrings}).
      */
     String projString();

@@ -5,8 +5,8 @@ import java.util.List;
 import java.util.Locale;
 
 /**
- * The projection as a PROJ string (PROJ 9 syntax, as {@code cct} and {@code cs2cs} read it), alongside the
- * WKT 2: input longitude and latitude in degrees on the ellipsoid, output easting and northing in metres.
+ * The projection as a PROJ string (PROJ 9 syntax, as {@code cct} reads it; {@code cs2cs} and {@code proj}
+ * read the single operations but no pipelines), alongside the WKT 2: input longitude and latitude in degrees on the ellipsoid, output easting and northing in metres.
  *
  * <ul>
  * <li>The families Apache SIS computes, and Equal Earth, are single PROJ operations with the same
