@@ -78,6 +78,9 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
                     new MapPart.Frame(frame.getMinX(), frame.getMinY(), frame.getMaxX(), frame.getMaxY()),
                     i == 0 ? 0 : placements.get(i - 1).nameBandM()));
         }
+        List<String> clipped = planar.stream().flatMap(p -> p.audit().clippedKeys().stream()).toList();
+        List<String> aroundPole = planar.stream().flatMap(p -> p.audit().aroundPoleKeys().stream()).toList();
+        worst = new AreaAudit(worst.maxRelativeError(), worst.worstKey(), worst.tolerance(), clipped, aroundPole);
         return new CompositeLayers(parts, geometry, ratios, worst, dropped);
     }
 

@@ -92,6 +92,8 @@ final class GeometryCodec {
         out.writeDouble(planar.audit().maxRelativeError());
         CacheFile.writeText(out, planar.audit().worstKey());
         out.writeDouble(planar.audit().tolerance());
+        writeTexts(out, planar.audit().clippedKeys());
+        writeTexts(out, planar.audit().aroundPoleKeys());
         out.writeInt(planar.dropped().size());
         for (CoverageSimplification.DroppedPart part : planar.dropped()) {
             CacheFile.writeText(out, part.key());
@@ -99,6 +101,22 @@ final class GeometryCodec {
             out.writeDouble(part.xM());
             out.writeDouble(part.yM());
         }
+    }
+
+    private static void writeTexts(DataOutputStream out, List<String> texts) throws IOException {
+        out.writeInt(texts.size());
+        for (String text : texts) {
+            CacheFile.writeText(out, text);
+        }
+    }
+
+    private static List<String> readTexts(DataInputStream in) throws IOException {
+        int count = in.readInt();
+        List<String> texts = new ArrayList<>();
+        for (int i = 0; i < count; i++) {
+            texts.add(CacheFile.readText(in));
+        }
+        return texts;
     }
 
     static PlanarLayer readPlanar(DataInputStream in) throws IOException {
@@ -111,7 +129,7 @@ final class GeometryCodec {
             simplified.put(key, geometry(in, wkb));
             ratios.put(key, in.readDouble());
         }
-        AreaAudit audit = new AreaAudit(in.readDouble(), CacheFile.readText(in), in.readDouble());
+        AreaAudit audit = new AreaAudit(in.readDouble(), CacheFile.readText(in), in.readDouble(), readTexts(in), readTexts(in));
         int droppedCount = in.readInt();
         List<CoverageSimplification.DroppedPart> dropped = new ArrayList<>();
         for (int i = 0; i < droppedCount; i++) {

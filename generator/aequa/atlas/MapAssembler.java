@@ -90,12 +90,7 @@ final class MapAssembler {
             planar = new PlanarLayer(composite.simplifiedM(), composite.mapAreaRatio(), composite.audit(), composite.dropped());
             parts = composite.parts();
         }
-        if (!planar.audit().passed()) {
-            findings.add(Finding.error("area-audit-failed", layer.file(), "feature \"" + planar.audit().worstKey() + "\"",
-                    String.format(java.util.Locale.ROOT, "On map '%s' the drawn area differs from the true area by %.2e, more than the allowed %.1e.",
-                            map.id(), planar.audit().maxRelativeError(), planar.audit().tolerance()),
-                    "This region's outline is probably broken (see findings above); the threshold is 'checks: area-tolerance'."));
-        }
+        AuditFindings.add(map.id(), layer, choice.projection(), planar.audit(), findings);
         boolean circles = map.display() == MapDisplay.CIRCLES;
         Optional<ClassedFigures> classed = ClassedFigures.of(map, "/maps/" + mapIndex, figures, options.pageBackground(),
                 circles, findings);

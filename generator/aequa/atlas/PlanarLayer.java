@@ -17,13 +17,14 @@ import aequa.planar.AreaAudit;
 import aequa.planar.AreaAuditor;
 import aequa.planar.CoverageSimplification;
 import aequa.planar.PolygonProjector;
+import aequa.planar.ProjectionDomain;
 import aequa.planar.RegionAreaCheck;
 import aequa.projection.EqualAreaProjection;
 import aequa.projection.Footprint;
 
 /**
- * A region layer on the map plane: densified in lon/lat, cut at the projection's seam, projected, audited
- * for area (before simplification) and simplified as one coverage for the finest output aequa draws.
+ * A region layer on the map plane: densified in lon/lat, checked against the projection's domain, cut at the
+ * projection's seam, projected, audited for area (before simplification) and simplified as one coverage for the finest output aequa draws.
  *
  * @param simplifiedM     the drawable geometry per key, metres
  * @param mapAreaRatio    planar / geodesic area per key (planar / (area scale x geodesic) for a scaled part)
@@ -63,22 +64,26 @@ record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAre
         double stepDeg = LonLatDensifier.stepDeg(roughWidthM(drawnFootprint), WEB_WIDTH_PX);
         AffineTransformation scaling = areaScale == 1 ? null : AffineTransformation.scaleInstance(Math.sqrt(areaScale), Math.sqrt(areaScale));
         PolygonProjector projector = new PolygonProjector(projection, stepDeg);
-        // thin and tiny regions get finer steps, so the drawn chords keep the true area (EdgeSteps)
+        // thin, tiny and strongly bent regions get finer steps, so the drawn chords keep the true area (EdgeSteps)
         EdgeSteps steps = EdgeSteps.forLayer(layer.regions().stream().map(Region::lonLat).toList(), stepDeg,
-                tolerance * FINER_STEP_MARGIN);
+                tolerance * FINER_STEP_MARGIN, (lonLat, xy, count) -> projection.forward(lonLat, 0, xy, 0, count));
         List<String> keys = layer.regions().stream().map(Region::key).toList();
-        // each region is densified, projected, scaled and measured alone, in parallel; the lists keep the
-        // layer's order (EdgeSteps and the transformation are only read)
-        List<Geometry> planar = layer.regions().parallelStream().map(region -> {
-            Geometry projected = projector.project(LonLatDensifier.densify(region.lonLat(), steps));
+        ProjectionDomain domain = new ProjectionDomain(projection);
+        // each region is densified, checked against the domain, projected, scaled and measured alone, in
+        // parallel; the lists keep the layer's order (EdgeSteps and the transformation are only read)
+        List<Geometry> densified = layer.regions().parallelStream().map(region -> LonLatDensifier.densify(region.lonLat(), steps)).toList();
+        List<ProjectionDomain.Limit> limits = densified.parallelStream().map(domain::of).toList();
+        List<Geometry> planar = densified.parallelStream().map(lonLat -> {
+            Geometry projected = projector.project(lonLat);
             return scaling == null ? projected : scaling.transform(projected);
         }).toList();
         List<RegionAreaCheck> checks = IntStream.range(0, keys.size()).parallel()
                 .mapToObj(i -> AreaAuditor.check(keys.get(i), areaScale * layer.areaKm2ByKey().get(keys.get(i)), planar.get(i)))
                 .toList();
+        AreaAudit audit = AreaAuditor.audit(checks, tolerance, keysWith(keys, limits, ProjectionDomain.Limit.BEYOND_DOMAIN),
+                keysWith(keys, limits, ProjectionDomain.Limit.AROUND_ASPECT_POLE));
         Envelope extent = new Envelope();
         planar.forEach(projected -> extent.expandToInclude(projected.getEnvelopeInternal()));
-        AreaAudit audit = AreaAuditor.audit(checks, tolerance);
         double widthM = Math.max(Math.max(extent.getWidth(), extent.getHeight()), minDrawnWidthM);
         double toleranceM = Math.min(CoverageSimplification.screenToleranceM(widthM, WEB_WIDTH_PX),
                 CoverageSimplification.printToleranceM(widthM, PRINT_WIDTH_MM));
@@ -109,6 +114,10 @@ record PlanarLayer(Map<String, Geometry> simplifiedM, Map<String, Double> mapAre
                         + "their figures are those of their regions.",
                 parts, regions, regions == 1 ? "region" : "regions", totalKm2, dropped.size() == 1 ? "is" : "are",
                 dropped.size() == 1 ? "was" : "were"));
+    }
+
+    private static List<String> keysWith(List<String> keys, List<ProjectionDomain.Limit> limits, ProjectionDomain.Limit limit) {
+        return IntStream.range(0, keys.size()).filter(i -> limits.get(i) == limit).mapToObj(keys::get).toList();
     }
 
     /** The footprint's width on the ground, roughly, to choose the densification step before projecting. */

@@ -51,6 +51,18 @@ public final class FigureText {
         return format(value, Math.min(decimals, exact));
     }
 
+    /**
+     * The range of class {@code i} in words, as every key of a map says it (the drawn legend, the page's key,
+     * the text alternative): "1 to under 2" for every class but the last, which holds its upper limit too
+     * ("9 to 10"), following {@link Classification#classOf}: a value equal to a break is in the upper class.
+     * Limits with {@link #limitDecimals}.
+     */
+    public static String classRange(List<Double> limits, int i) {
+        int decimals = limitDecimals(limits);
+        boolean last = i == limits.size() - 2;
+        return format(limits.get(i), decimals) + (last ? " to " : " to under ") + format(limits.get(i + 1), decimals);
+    }
+
     /** {@code value} with exactly {@code decimals} decimals, e.g. {@code 12,345.6}; NaN and infinities as "–". */
     public static String format(double value, int decimals) {
         if (!Double.isFinite(value)) {

@@ -39,6 +39,7 @@ final class ChoiceReport {
         }
         s.append("  WKT 2:\n");
         choice.projection().wkt2().lines().forEach(line -> s.append("    ").append(line).append('\n'));
+        s.append("  PROJ string (for PROJ's cct and software built on PROJ):\n    ").append(choice.projection().projString()).append('\n');
         return s.toString();
     }
 
@@ -70,6 +71,7 @@ final class ChoiceReport {
             return candidate;
         }).toList());
         root.put("wkt2", choice.projection().wkt2());
+        root.put("projString", choice.projection().projString());
         return root;
     }
 

@@ -67,6 +67,7 @@ final class PartsReport {
             part.put("omegaMaxDeg", p.choice().omegaMaxDeg());
             part.put("omegaMeanDeg", p.choice().omegaMeanDeg());
             part.put("wkt2", p.choice().projection().wkt2());
+            part.put("projString", p.choice().projection().projString());
             return part;
         }).toList();
     }

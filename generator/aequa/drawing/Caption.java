@@ -39,7 +39,9 @@ final class Caption {
         }
         if (model.areaAudit() != null) {
             double percent = model.areaAudit().maxRelativeError() * 100;
-            text.append(" Areas are true: largest difference from the ellipsoid ")
+            // "true" only for a passed audit: every region drawn whole and within the tolerance
+            text.append(model.areaAudit().passed() ? " Areas are true: largest difference from the ellipsoid "
+                            : " Areas are not true: largest difference from the ellipsoid ")
                     .append(percent < 1e-4 ? "below 0.0001" : Numbers.trim(percent, 4)).append(" %.");
         }
         if (scale != null) {

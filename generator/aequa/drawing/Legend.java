@@ -58,9 +58,8 @@ final class Legend {
         this.em = theme.typePt().legend() * type.unitsPerPt();
         Classification classes = model.classification();
         List<Double> limits = classes.limits();
-        int decimals = FigureText.limitDecimals(limits);
         for (int i = 0; i < classes.classCount() && i < model.ramp().fills().size(); i++) {
-            String range = Numbers.format(limits.get(i), decimals) + " \u2013 " + Numbers.format(limits.get(i + 1), decimals);
+            String range = FigureText.classRange(limits, i);
             classEntries.add(new Entry(model.ramp().fills().get(i), RegionFills.Hatch.NONE, false, range,
                     "(" + classes.counts().get(i) + ")"));
         }

@@ -7,7 +7,9 @@ import org.locationtech.jts.geom.Geometry;
  * Exact areas on the WGS 84 ellipsoid of polygons whose edges are straight in longitude and latitude, as
  * GeoJSON reads them (RFC 7946, section 3.1.1): an edge between two points of one parallel runs along that
  * parallel, not along the geodesic. This is the shape the map draws, so it is the truth the area audit
- * compares the map with. GeographicLib measures geodesic edges only ({@link GeodesicArea}); a geodesic
+ * compares the map with. No edge is read as a geodesic, however short: a length threshold (such as 0.05 deg)
+ * would read one edge of a border as a geodesic and the next as lon/lat-straight, a shape neither RFC 7946 nor
+ * the drawing has. GeographicLib measures geodesic edges only ({@link GeodesicArea}); a geodesic
  * between two points of a parallel bows towards the pole, by up to 2.9e-4 of a real US county's area
  * (county 22067, whose border follows the 33rd parallel), hence this class of our own.
  *

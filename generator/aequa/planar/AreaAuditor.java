@@ -26,6 +26,15 @@ public final class AreaAuditor {
      * @param tolerance the largest relative error the project allows (ChecksSpec.areaTolerance)
      */
     public static AreaAudit audit(List<RegionAreaCheck> checks, double tolerance) {
+        return audit(checks, tolerance, List.of(), List.of());
+    }
+
+    /**
+     * As {@link #audit(List, double)}, with the regions the projection could not draw whole
+     * ({@link ProjectionDomain}), which fail the audit whatever the tolerance.
+     */
+    public static AreaAudit audit(List<RegionAreaCheck> checks, double tolerance, List<String> clippedKeys,
+                                  List<String> aroundPoleKeys) {
         double worst = 0;
         String worstKey = "";
         for (RegionAreaCheck check : checks) {
@@ -36,6 +45,6 @@ public final class AreaAuditor {
                 worstKey = check.key();
             }
         }
-        return new AreaAudit(worst, worstKey, tolerance);
+        return new AreaAudit(worst, worstKey, tolerance, clippedKeys, aroundPoleKeys);
     }
 }

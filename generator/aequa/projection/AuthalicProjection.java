@@ -25,6 +25,7 @@ final class AuthalicProjection extends FixedProjection {
     private final double radiusM;
     private final double sinAzimuth;
     private final double cosAzimuth;
+    private final double azimuthDeg;
 
     private AuthalicProjection(ProjectionFamily family, EllipsoidAxes ellipsoid, List<ProjectionParameter> parameters,
                                AuthalicLatitude authalic, SphereRotation rotation, SphereKernel kernel, double azimuthDeg) {
@@ -35,6 +36,7 @@ final class AuthalicProjection extends FixedProjection {
         this.radiusM = authalic.radiusM();
         this.sinAzimuth = Math.sin(Math.toRadians(azimuthDeg));
         this.cosAzimuth = Math.cos(Math.toRadians(azimuthDeg));
+        this.azimuthDeg = azimuthDeg;
     }
 
     /**
@@ -110,6 +112,16 @@ final class AuthalicProjection extends FixedProjection {
             lonLatDeg[dst] = Math.toDegrees(scratch[0]);
             lonLatDeg[dst + 1] = Math.toDegrees(authalic.toGeodetic(scratch[1]));
         }
+    }
+
+    /** The rotation of the authalic sphere to the aspect's frame. */
+    SphereRotation rotation() {
+        return rotation;
+    }
+
+    /** The azimuth of the central line on the page, degrees (90 for the normal aspect). */
+    double azimuthDeg() {
+        return azimuthDeg;
     }
 
     @Override

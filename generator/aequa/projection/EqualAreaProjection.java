@@ -28,4 +28,10 @@ public interface EqualAreaProjection {
 
     /** ISO 19162:2019 (WKT 2) of the projected CRS, parseable by Apache SIS. */
     String wkt2();
+
+    /**
+     * The same projection as a PROJ string that PROJ's {@code cct} reads (degrees in, metres out); for the families aequa computes on the authalic sphere, a pipeline that spells out the conversion
+     * to authalic latitude (see {@code ProjStrings}).
+     */
+    String projString();
 }

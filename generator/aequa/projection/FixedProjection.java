@@ -46,6 +46,11 @@ abstract class FixedProjection implements EqualAreaProjection {
         return wkt2.text();
     }
 
+    @Override
+    public final String projString() {
+        return ProjStrings.of(this);
+    }
+
     /** The operation method its WKT 2 names (see {@link CrsDescription}). */
     abstract OperationMethod operationMethod() throws FactoryException;
 

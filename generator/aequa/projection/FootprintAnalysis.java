@@ -18,8 +18,16 @@ import org.locationtech.jts.geom.Polygon;
  */
 final class FootprintAnalysis {
 
-    /** Most boundary samples kept (the extremes plus an even stride through all vertices). */
-    static final int BOUNDARY_SAMPLES = 1000;
+    /**
+     * Most boundary samples kept: every vertex of the data up to this many (then the extremes plus an even
+     * stride through all vertices). The final omega figures are taken over all samples, so for data with up
+     * to this many vertices the stated largest omega is the maximum over every vertex (the figure of a polar
+     * cap's ring includes its points on the pole) rather than over a sample of the outline, which fell 3 %
+     * short for Africa in Natural Earth 1:110m (6.55 against 6.77 deg, FootprintVerticesTest). The search
+     * itself works on a thinned set, so this costs one pass per candidate family. Our choice: 100,000
+     * vertices (1.6 MB) covers national files at web detail, such as the 68,313 of the US Census 2017 counties.
+     */
+    static final int BOUNDARY_SAMPLES = 100_000;
 
     /** Longitude bins for finding the largest empty gap: 0.1 deg each. */
     private static final int BINS = 3600;

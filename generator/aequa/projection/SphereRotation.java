@@ -98,6 +98,14 @@ final class SphereRotation {
         out[1] = Math.atan2(z, Math.hypot(x, y));
     }
 
+    /**
+     * The rotation as a row-major 3x3 matrix on geographic unit vectors (frame = M x geographic), for writing
+     * it out ({@link ProjStrings}); the normal aspect's matrix is the turn by its central longitude.
+     */
+    double[] matrix() {
+        return m.clone();
+    }
+
     /** Wraps an angle into [-pi, pi]; values already inside are returned unchanged. */
     static double wrap(double rad) {
         if (rad >= -Math.PI && rad <= Math.PI) {

@@ -81,7 +81,8 @@ final class MapViews {
         if (!params.isEmpty()) {
             text.append(" (").append(params).append(')');
         }
-        text.append(" on the WGS 84 ellipsoid; areas are true to within ")
+        text.append(map.areaAudit().passed() ? " on the WGS 84 ellipsoid; areas are true to within "
+                        : " on the WGS 84 ellipsoid; areas are not true, they differ by up to ")
                 .append(percent(map.areaAudit().maxRelativeError())).append(" %.");
         if (!map.spec().source().isEmpty()) {
             text.append(" Figures: ").append(map.spec().source());
@@ -196,12 +197,8 @@ final class MapViews {
         Classification classes = map.classification();
         List<MapPageView.LegendRow> rows = new ArrayList<>();
         int fills = map.ramp().fills().size();
-        int decimals = FigureText.limitDecimals(classes.limits());
         for (int i = 0; i < classes.classCount() && fills > 0; i++) {
-            String from = FigureText.format(classes.limits().get(i), decimals);
-            String to = FigureText.format(classes.limits().get(i + 1), decimals);
-            boolean last = i == classes.classCount() - 1;
-            String range = from + (last ? " to " : " to under ") + to;
+            String range = FigureText.classRange(classes.limits(), i);
             int fillIndex = Math.min(i, fills - 1);
             rows.add(new MapPageView.LegendRow(map.ramp().fills().get(fillIndex).hex(), range, classes.counts().get(i)));
         }

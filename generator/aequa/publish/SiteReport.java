@@ -177,6 +177,7 @@ final class SiteReport {
             param.put("unit", p.unit());
         }
         node.put("wkt2", choice.projection().wkt2());
+        node.put("projString", choice.projection().projString());
         number(node, "omegaMaxDeg", choice.omegaMaxDeg());
         number(node, "omegaMeanDeg", choice.omegaMeanDeg());
         ObjectNode worst = node.putObject("omegaWorstPoint");
