@@ -30,6 +30,10 @@ class FindingCatalogueTest {
      * fixture is added.
      */
     private static final Map<String, String> WITHOUT_FIXTURE = Map.ofEntries(
+            Map.entry("projection-domain-clips-region",
+                    "needs a forced projection over world-wide regions; ForcedProjectionTest on Natural Earth countries"),
+            Map.entry("projection-pole-inside-region",
+                    "needs a forced oblique aspect over world-wide regions; ForcedProjectionTest on Natural Earth countries"),
             Map.entry("antimeridian-cut",
                     "needs regions across the 180-degree line; RegionValidatorTest"),
             Map.entry("pole-ring-closed",
