@@ -34,28 +34,12 @@ class FindingCatalogueTest {
                     "needs a forced projection over world-wide regions; ForcedProjectionTest on Natural Earth countries"),
             Map.entry("projection-pole-inside-region",
                     "needs a forced oblique aspect over world-wide regions; ForcedProjectionTest on Natural Earth countries"),
-            Map.entry("classes-count-too-small",
-                    "unreachable from a project file: ProjectChecks reports project-bad-value for a count outside 2..9 first; ClassifierTest"),
-            Map.entry("classes-manual-breaks-missing",
-                    "unreachable from a project file: ProjectChecks reports project-bad-value for missing manual breaks first; ClassifierTest"),
-            Map.entry("classes-manual-breaks-not-ascending",
-                    "unreachable from a project file: ProjectChecks reports project-bad-value first; ClassifierTest"),
-            Map.entry("classes-infinite-value",
-                    "unreachable from a project file: ClassedFigures pools finite values only; ClassifierTest"),
-            Map.entry("project-missing-setting",
-                    "unreachable from a project file: ProjectChecks reports project-missing-key for normalise: column without per first"),
-            Map.entry("figures-file-missing",
-                    "unreachable from a project file: ProjectChecks reports project-file-not-found first; CsvEncodingAndLocaleTest"),
-            Map.entry("figures-file-unknown-type",
-                    "unreachable from a project file: ProjectChecks reports project-file-type first; CsvEncodingAndLocaleTest"),
-            Map.entry("file-missing",
-                    "unreachable from a project file: ProjectChecks reports project-file-not-found first; GeoJsonRegionReaderTest"),
             Map.entry("file-type-unknown",
-                    "unreachable from a project file: ProjectChecks reports project-file-type first; no test names it"),
+                    "the region readers' guard for `aequa explain`, which hands them any file a user names; a project's"
+                            + " checks report project-file-type first; GeoJsonRegionReaderTest names it"),
             Map.entry("file-unreadable",
-                    "needs a file the test user cannot read, which root (CI) always can; no test names it"),
-            Map.entry("project-file-unreadable",
-                    "needs a project file the test user cannot read, which root (CI) always can; no test names it"));
+                    "needs a file that passed the project's checks and then cannot be read (a disk error, or gone since),"
+                            + " which no fixture makes root-proof; GeoJsonRegionReaderTest names it"));
 
     /**
      * A code given to a finding: the first text argument (after at most two plain names) of
