@@ -55,7 +55,7 @@ public final class MapDrawings {
         String borders = "svg.aequa-map g[data-key]>g>path{stroke:" + theme.colours().border().hex() + ";stroke-width:"
                 + new FixedDecimal(2).apply(theme.lines().border().pt() * type.unitsPerPt()) + "px;stroke-linejoin:round}";
         String svg = SvgOutput.tidy(SvgOutput.webRoot(g, rootId, width, layout.heightU(), model.spec().title(),
-                Descriptions.of(model), borders), precision.decimals());
+                Descriptions.of(model, options.wording()), borders), precision.decimals());
         return drawn(DrawnMap.Format.WEB_SVG, svg.getBytes(StandardCharsets.UTF_8), layout, "px", canvas);
     }
 

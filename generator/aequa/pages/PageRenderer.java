@@ -94,40 +94,40 @@ public final class PageRenderer {
     }
 
     public String renderIndex(SiteView site, IndexView page) {
-        return render("index.ftlh", site, "", page);
+        return render("index.ftlh", site, "", "index.html", page, Map.of());
     }
 
-    public String renderMap(SiteView site, MapPageView page) {
+    /** @param pagePath the page's path from the language's root, for the links to its other languages */
+    public String renderMap(SiteView site, MapPageView page, String pagePath) {
         TemplateHTMLOutputModel svg;
         try {
             svg = HTMLOutputFormat.INSTANCE.fromMarkup(page.svg());
         } catch (TemplateModelException e) {
             throw new IllegalStateException("Freemarker refused markup", e);
         }
-        return render("map.ftlh", site, "../../", page, Map.of("mapSvg", svg));
+        return render("map.ftlh", site, "../../", pagePath, page, Map.of("mapSvg", svg));
     }
 
-    public String renderFigures(SiteView site, FiguresView page) {
-        return render("figures.ftlh", site, "../../", page);
+    /** @param pagePath the page's path from the language's root, for the links to its other languages */
+    public String renderFigures(SiteView site, FiguresView page, String pagePath) {
+        return render("figures.ftlh", site, "../../", pagePath, page, Map.of());
     }
 
     public String renderMethod(SiteView site, MethodView page) {
-        return render("method.ftlh", site, "", page);
+        return render("method.ftlh", site, "", "method.html", page, Map.of());
     }
 
     public String renderChanges(SiteView site, ChangesView page) {
-        return render("changes.ftlh", site, "", page);
+        return render("changes.ftlh", site, "", "changes.html", page, Map.of());
     }
 
-    private String render(String name, SiteView site, String root, Object page) {
-        return render(name, site, root, page, Map.of());
-    }
-
-    private String render(String name, SiteView site, String root, Object page, Map<String, Object> extra) {
+    private String render(String name, SiteView site, String root, String pagePath, Object page, Map<String, Object> extra) {
         Map<String, Object> model = new java.util.HashMap<>(extra);
         model.put("site", site);
         model.put("root", root);
+        model.put("pagePath", pagePath);
         model.put("page", page);
+        model.put("t", new MessageMethod(site.wording()));
         StringWriter out = new StringWriter();
         try {
             Template template = config.getTemplate(name);

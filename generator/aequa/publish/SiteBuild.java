@@ -25,6 +25,8 @@ import aequa.findings.Finding;
 import aequa.pages.PageRenderer;
 import aequa.pages.SiteView;
 import aequa.publish.PublishProgress.Stage;
+import aequa.wording.Language;
+import aequa.wording.Wording;
 
 /** One run of {@link SitePublisher#publish}: holds the state of a single build; used once, under the lock. */
 final class SiteBuild {
@@ -76,8 +78,10 @@ final class SiteBuild {
         Map<String, byte[]> sources = new LinkedHashMap<>();
         Stream.concat(PageRenderer.TEMPLATE_NAMES.stream(), PageRenderer.ASSET_NAMES.stream())
                 .forEach(name -> sources.put(name, renderer.source(name)));
-        String siteHash = siteHash(sources, themeCss);
-        SiteView site = SiteViews.site(atlas.project().site());
+        Wording wording = Wording.of(Language.parse(atlas.project().site().language()).orElse(Language.ENGLISH));
+        String siteHash = new Sha256().add(siteHash(sources, themeCss)).add(wording.fingerprint()).hex();
+        SiteView site = SiteViews.site(atlas.project().site(), wording);
+        MapArtwork artwork = this.artwork.inLanguage(wording);
         progress.step(Stage.PREPARE, 1, 1);
 
         try (StagingFolder folder = StagingFolder.create(out, lock.runId())) {
@@ -86,7 +90,7 @@ final class SiteBuild {
             Sha256 edition = new Sha256();
             List<String> fingerprints = IntStream.range(0, count).parallel()
                     .mapToObj(i -> MapFingerprint.of(atlas.maps().get(i))).toList();
-            List<String> drawHashes = fingerprints.stream().map(this::drawHash).toList();
+            List<String> drawHashes = fingerprints.stream().map(f -> drawHash(f, artwork)).toList();
             int atOnce = MapPictures.mapsAtOnce();
             for (int first = 0; first < count; first += atOnce) {
                 // the maps of a batch are drawn at the same time; their files are written one map after another
@@ -120,9 +124,9 @@ final class SiteBuild {
                 put(SiteReport.FILE_NAME, SiteReport.write(atlas, maps, digest, findings, changes, json), pagesHash);
                 progress.step(Stage.REPORT, 1, 1);
                 progress.step(Stage.PAGES, 0, 1);
-                put("index.html", utf8(renderer.renderIndex(site, SiteViews.index(atlas, files))), pagesHash);
-                put("method.html", utf8(renderer.renderMethod(site, SiteViews.method(atlas, files))), pagesHash);
-                put("changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files))), pagesHash);
+                put("index.html", utf8(renderer.renderIndex(site, SiteViews.index(atlas, files, wording))), pagesHash);
+                put("method.html", utf8(renderer.renderMethod(site, SiteViews.method(atlas, files, wording))), pagesHash);
+                put("changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files, wording))), pagesHash);
             }
             for (String asset : PageRenderer.ASSET_NAMES) {
                 put(asset, sources.get(asset), siteHash);
@@ -151,7 +155,7 @@ final class SiteBuild {
         }
     }
 
-    private String drawHash(String fingerprint) {
+    private String drawHash(String fingerprint, MapArtwork artwork) {
         return new Sha256().add(fingerprint).add(artwork.fingerprint()).add(Integer.toString(options.pngWidthPx())).hex();
     }
 
@@ -182,8 +186,8 @@ final class SiteBuild {
         if (webSvg == null) {
             webSvg = Files.readString(out.resolve(files.webSvg()), StandardCharsets.UTF_8);
         }
-        write(files.page(), utf8(renderer.renderMap(site, MapViews.page(map, files, webSvg))), pageHash);
-        write(files.figures(), utf8(renderer.renderFigures(site, MapViews.figures(map, files))), pageHash);
+        write(files.page(), utf8(renderer.renderMap(site, MapViews.page(map, files, webSvg, site.wording()), files.page())), pageHash);
+        write(files.figures(), utf8(renderer.renderFigures(site, MapViews.figures(map, files, site.wording()), files.figures())), pageHash);
         write(files.csv(), FiguresCsv.write(map), pageHash);
     }
 
