@@ -107,9 +107,11 @@ final class MapPainter {
             canvas.begin("regions" + suffix, web ? borderPresentation(canvas) : Map.of(), null);
             if (model.composite()) {
                 PartFrames.paintRegionsByPart(canvas, model, pages, suffix,
-                        partPages -> RegionLayer.paint(canvas, model, theme, fills, partPages, panel.period(), regionPrefix, web, precision, circles));
+                        partPages -> RegionLayer.paint(canvas, model, theme, fills, partPages, panel.period(), regionPrefix, web, precision, circles,
+                                options.wording()));
             } else {
-                RegionLayer.paint(canvas, model, theme, fills, pages, panel.period(), regionPrefix, web, precision, circles);
+                RegionLayer.paint(canvas, model, theme, fills, pages, panel.period(), regionPrefix, web, precision, circles,
+                        options.wording());
             }
             canvas.end();
             RegionLayer.paintBorders(canvas, theme, pages, precision, suffix, !web);
@@ -186,7 +188,7 @@ final class MapPainter {
         Rectangle2D box = layout.scaleBox();
         AreaScale scale = layout.areaScale();
         canvas.begin("area-scale");
-        canvas.text("Area scale", box.getX(), box.getY() + type.capHeight(size), size, true, Canvas.Anchor.START, c.text(), c.background());
+        canvas.text(options.wording().text("draw.areaScale"), box.getX(), box.getY() + type.capHeight(size), size, true, Canvas.Anchor.START, c.text(), c.background());
         double squareTop = box.getY() + type.lineHeight(size) + 0.3 * size * type.unitsPerPt();
         double side = scale.sideU();
         Rectangle2D.Double square = new Rectangle2D.Double(box.getX(), squareTop, side, side);
@@ -194,7 +196,7 @@ final class MapPainter {
             canvas.fill(square, c.background());
             canvas.stroke(square, c.text(), theme.lines().border().pt());
         });
-        canvas.text(scale.label(), box.getX() + side + 0.6 * size * type.unitsPerPt(), squareTop + side / 2 + type.capHeight(size) / 2,
+        canvas.text(scale.label(options.wording().numbers()), box.getX() + side + 0.6 * size * type.unitsPerPt(), squareTop + side / 2 + type.capHeight(size) / 2,
                 size, false, Canvas.Anchor.START, c.text(), c.background());
         canvas.end();
     }

@@ -1,6 +1,7 @@
 package aequa.publish;
 
 import aequa.atlas.MapModel;
+import aequa.wording.Wording;
 
 /**
  * What publishing needs from the drawing stage: the pictures of one map. The publisher asks for them only
@@ -30,6 +31,14 @@ public interface MapArtwork {
      * pixels (1 for the download and the index thumbnail, 2 for high-density screens and social previews).
      */
     byte[] png(MapModel map, int widthPx, int scale);
+
+    /**
+     * The same artwork with every word and number in {@code wording}'s language. The default (for artwork
+     * without words) is this artwork itself.
+     */
+    default MapArtwork inLanguage(Wording wording) {
+        return this;
+    }
 
     /**
      * Identifies the drawing code and theme. When it changes every map is redrawn; return, for example, the

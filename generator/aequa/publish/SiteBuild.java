@@ -27,6 +27,8 @@ import aequa.pages.MapPageView;
 import aequa.pages.PageRenderer;
 import aequa.pages.SiteView;
 import aequa.publish.PublishProgress.Stage;
+import aequa.wording.Language;
+import aequa.wording.Wording;
 
 /** One run of {@link SitePublisher#publish}: holds the state of a single build; used once, under the lock. */
 final class SiteBuild {
@@ -78,8 +80,10 @@ final class SiteBuild {
         Map<String, byte[]> sources = new LinkedHashMap<>();
         Stream.concat(PageRenderer.TEMPLATE_NAMES.stream(), PageRenderer.ASSET_NAMES.stream())
                 .forEach(name -> sources.put(name, renderer.source(name)));
-        String siteHash = siteHash(sources, themeCss);
-        SiteView site = SiteViews.site(atlas.project().site());
+        Wording wording = Wording.of(Language.parse(atlas.project().site().language()).orElse(Language.ENGLISH));
+        String siteHash = new Sha256().add(siteHash(sources, themeCss)).add(wording.fingerprint()).hex();
+        SiteView site = SiteViews.site(atlas.project().site(), wording);
+        MapArtwork artwork = this.artwork.inLanguage(wording);
         progress.step(Stage.PREPARE, 1, 1);
 
         try (StagingFolder folder = StagingFolder.create(out, lock.runId())) {
@@ -88,7 +92,7 @@ final class SiteBuild {
             Sha256 edition = new Sha256();
             List<String> fingerprints = IntStream.range(0, count).parallel()
                     .mapToObj(i -> MapFingerprint.of(atlas.maps().get(i))).toList();
-            List<String> drawHashes = fingerprints.stream().map(this::drawHash).toList();
+            List<String> drawHashes = fingerprints.stream().map(f -> drawHash(f, artwork)).toList();
             int atOnce = MapPictures.mapsAtOnce();
             for (int first = 0; first < count; first += atOnce) {
                 // the maps of a batch are drawn at the same time; their files are written one map after another
@@ -122,9 +126,9 @@ final class SiteBuild {
                 put(SiteReport.FILE_NAME, SiteReport.write(atlas, maps, digest, findings, changes, json), pagesHash);
                 progress.step(Stage.REPORT, 1, 1);
                 progress.step(Stage.PAGES, 0, 1);
-                put("index.html", utf8(renderer.renderIndex(site, SiteViews.index(atlas, files))), pagesHash);
-                put("method.html", utf8(renderer.renderMethod(site, SiteViews.method(atlas, files))), pagesHash);
-                put("changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files))), pagesHash);
+                put("index.html", utf8(renderer.renderIndex(site, SiteViews.index(atlas, files, wording))), pagesHash);
+                put("method.html", utf8(renderer.renderMethod(site, SiteViews.method(atlas, files, wording))), pagesHash);
+                put("changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files, wording))), pagesHash);
             }
             for (String asset : PageRenderer.ASSET_NAMES) {
                 put(asset, sources.get(asset), siteHash);
@@ -153,7 +157,7 @@ final class SiteBuild {
         }
     }
 
-    private String drawHash(String fingerprint) {
+    private String drawHash(String fingerprint, MapArtwork artwork) {
         return new Sha256().add(fingerprint).add(artwork.fingerprint()).add(Integer.toString(options.pngWidthPx())).hex();
     }
 
@@ -184,12 +188,13 @@ final class SiteBuild {
         if (webSvg == null) {
             webSvg = Files.readString(out.resolve(files.webSvg()), StandardCharsets.UTF_8);
         }
-        MapPageView page = MapViews.page(map, files, webSvg);
+        MapPageView page = MapViews.page(map, files, webSvg, site.wording());
         EmbedView embed = MapViews.embed(map, files, webSvg);
-        write(files.page(), utf8(renderer.renderMap(site, page, embed)), pageHash);
-        write(files.embed(), utf8(renderer.renderEmbed(site, page, embed)), pageHash);
-        write(files.fragment(), utf8(renderer.renderFragment(site, page, embed, FragmentSvg.of(webSvg))), pageHash);
-        write(files.figures(), utf8(renderer.renderFigures(site, MapViews.figures(map, files))), pageHash);
+        write(files.page(), utf8(renderer.renderMap(site, page, files.page(), embed)), pageHash);
+        write(files.embed(), utf8(renderer.renderEmbed(site, page, files.embed(), embed)), pageHash);
+        write(files.fragment(), utf8(renderer.renderFragment(site, page, files.fragment(), embed, FragmentSvg.of(webSvg))),
+                pageHash);
+        write(files.figures(), utf8(renderer.renderFigures(site, MapViews.figures(map, files, site.wording()), files.figures())), pageHash);
         write(files.csv(), FiguresCsv.write(map), pageHash);
     }
 

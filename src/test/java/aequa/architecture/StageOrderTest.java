@@ -23,7 +23,7 @@ class StageOrderTest {
 
     /** The stages in data-flow order; the index is the rank. */
     private static final List<String> STAGES = List.of("findings", "project", "inputs", "ellipsoid", "projection",
-            "planar", "composite", "statistics", "classes", "colour", "atlas", "drawing", "pages", "publish", "cli");
+            "planar", "composite", "statistics", "classes", "colour", "wording", "atlas", "drawing", "pages", "publish", "cli");
 
     /** Libraries confined to one stage, or to one package of a stage (a reader's package: "inputs.regions"). */
     private static final Map<String, String> LIBRARY_OWNERS = Map.of(
@@ -33,7 +33,8 @@ class StageOrderTest {
             "freemarker", "pages",
             "picocli", "cli",
             "com.linuxense.javadbf", "inputs.regions",
-            "org.dhatim.fastexcel", "inputs.figures");
+            "org.dhatim.fastexcel", "inputs.figures",
+            "com.ibm.icu", "wording");
 
     private static final Pattern IMPORT = Pattern.compile("^import (?:static )?([\\w.]+)", Pattern.MULTILINE);
     private static final Pattern QUALIFIED_USE = Pattern.compile("\\baequa\\.(\\w+)\\.[A-Z]");
