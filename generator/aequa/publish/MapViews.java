@@ -80,8 +80,8 @@ final class MapViews {
     /** "Lambert azimuthal equal-area projection (...) on the WGS 84 ellipsoid; ...; figures: SOURCE, DATE." */
     static String caption(MapModel map, Wording w) {
         String projection = projectionText(map.projection(), w);
-        StringBuilder text = new StringBuilder(w.text("caption.onEllipsoid", "projection", projection,
-                "error", errorPercent(map.areaAudit().maxRelativeError(), w)));
+        StringBuilder text = new StringBuilder(w.sentence(w.text("caption.onEllipsoid", "projection", projection,
+                "error", errorPercent(map.areaAudit().maxRelativeError(), w))));
         String source = map.spec().source();
         String asOf = w.numbers().period(map.spec().asOf());
         if (!source.isEmpty()) {
