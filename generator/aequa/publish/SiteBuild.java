@@ -182,7 +182,9 @@ final class SiteBuild {
         String webSvg = null;
         if (drawn.isEmpty()) {
             files.drawn().forEach(path -> carryOver(path, drawHash));
-            mapsReused.add(map.id());
+            if (files.languagePrefix().isEmpty()) {
+                mapsReused.add(map.id()); // counted once, in the first language: every language draws the same maps
+            }
         } else {
             MapPictures pictures = drawn.get();
             webSvg = pictures.webSvg();
@@ -194,7 +196,9 @@ final class SiteBuild {
             write(files.pdf(), pictures.pdf(), drawHash);
             write(files.png(), pictures.png(), drawHash);
             write(files.pngDouble(), pictures.pngDouble(), drawHash);
-            mapsDrawn.add(map.id());
+            if (files.languagePrefix().isEmpty()) {
+                mapsDrawn.add(map.id());
+            }
         }
         if (reusable(files.written(), pageHash)) {
             files.written().forEach(path -> carryOver(path, pageHash));
