@@ -30,7 +30,7 @@ final class Caption {
         ProjectionChoice choice = model.projection();
         NumberWriter numbers = w.numbers();
         List<String> sentences = new ArrayList<>();
-        sentences.add(w.text("draw.caption", "projection", ProjectionWords.projection(choice, w)));
+        sentences.add(w.sentence(w.text("draw.caption", "projection", ProjectionWords.projection(choice, w))));
         sentences.add(distortion(choice, w));
         if (model.composite()) {
             sentences.add(PartSentences.parts(model, w));

@@ -35,7 +35,8 @@ final class Descriptions {
                     : w.text("draw.describeClasses", "text", text, "count", model.classification().classCount(),
                     "method", model.classification().method().configName());
         }
-        String projection = w.text("caption.projection", "family", ProjectionWords.family(model.projection().projection().family(), w));
+        String projection = w.sentence(w.text("caption.projection", "family",
+                ProjectionWords.family(model.projection().projection().family(), w)));
         if (!model.composite()) {
             return w.text("draw.describeEnd", "text", text, "projection", projection);
         }

@@ -76,6 +76,7 @@ final class MapPainter {
         Theme.Colours c = theme.colours();
         Theme.TypeSizes sizes = theme.typePt();
         Typesetter type = canvas.type();
+        canvas.rightToLeft(options.wording().language().rightToLeft());
         canvas.begin("background");
         canvas.fill(new Rectangle2D.Double(0, 0, layout.widthU(), layout.heightU()), c.background());
         canvas.end();
@@ -83,7 +84,9 @@ final class MapPainter {
             canvas.begin("title");
             double baseline = layout.marginU() + type.capHeight(sizes.title()); // the title block starts at the margin
             for (String line : layout.titleLines()) {
-                canvas.text(line, layout.marginU(), baseline, sizes.title(), true, Canvas.Anchor.START, c.text(), c.background());
+                boolean rtl = canvas.runsRightToLeft(line);
+                canvas.text(line, rtl ? layout.widthU() - layout.marginU() : layout.marginU(), baseline, sizes.title(), true,
+                        rtl ? Canvas.Anchor.END : Canvas.Anchor.START, c.text(), c.background());
                 baseline += type.lineHeight(sizes.title());
             }
             canvas.end();
@@ -141,8 +144,8 @@ final class MapPainter {
         layout.legend().paint(canvas, legendBox.getX(), legendBox.getY(), legendBox.getWidth());
         canvas.end();
         paintAreaScale(canvas, layout);
-        paintParagraph(canvas, "caption", layout.captionLines(), layout.captionTopU(), layout.marginU(), c.textMuted());
-        paintParagraph(canvas, "credits", layout.creditLines(), layout.creditsTopU(), layout.marginU(), c.textMuted());
+        paintParagraph(canvas, "caption", layout.captionLines(), layout.captionTopU(), layout.marginU(), layout.widthU(), c.textMuted());
+        paintParagraph(canvas, "credits", layout.creditLines(), layout.creditsTopU(), layout.marginU(), layout.widthU(), c.textMuted());
     }
 
     /** The theme's inner-border colour and weight in page units, as SVG presentation attributes. */
@@ -201,7 +204,7 @@ final class MapPainter {
         canvas.end();
     }
 
-    private void paintParagraph(Canvas canvas, String id, List<String> lines, double top, double x, Rgb colour) {
+    private void paintParagraph(Canvas canvas, String id, List<String> lines, double top, double x, double layoutWidthU, Rgb colour) {
         if (lines.isEmpty()) {
             return;
         }
@@ -210,7 +213,10 @@ final class MapPainter {
         canvas.begin(id);
         double baseline = top + type.capHeight(size);
         for (String line : lines) {
-            canvas.text(line, x, baseline, size, false, Canvas.Anchor.START, colour, theme.colours().background());
+            // a right-to-left line is set against the right margin, as right-to-left paragraphs are
+            boolean rtl = canvas.runsRightToLeft(line);
+            canvas.text(line, rtl ? layoutWidthU - x : x, baseline, size, false, rtl ? Canvas.Anchor.END : Canvas.Anchor.START,
+                    colour, theme.colours().background());
             baseline += type.lineHeight(size);
         }
         canvas.end();

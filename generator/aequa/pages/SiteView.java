@@ -33,8 +33,9 @@ public record SiteView(String title, String publisher, String notice, Wording wo
      * @param language its BCP 47 tag, for {@code hreflang} and {@code lang}
      * @param name     its name in itself ("français"), as the language link reads
      * @param prefix   from this language's root to that language's root ("fr/", "../")
+     * @param current  whether it is the language of this page
      */
-    public record Alternate(String language, String name, String prefix) {
+    public record Alternate(String language, String name, String prefix, boolean current) {
     }
 
     /** The pages' BCP 47 language tag. */

@@ -49,7 +49,9 @@ final class MapViews {
     /** What the map page offers for other sites' pages, and where the embed page and fragment link to. */
     static EmbedView embed(MapModel map, MapFiles files, String webSvg) {
         int keyRows = circles(map) ? 1 : map.classification().classCount();
-        String frame = FrameCode.of(map.spec().title(), fileName(files.embed()), "../../assets/embed-host.js",
+        // the assets are shared at the site's root; a language's folder is one level below it
+        String toSiteRoot = files.languagePrefix().isEmpty() ? "../../" : "../../../";
+        String frame = FrameCode.of(map.spec().title(), fileName(files.embed()), toSiteRoot + "assets/embed-host.js",
                 FrameCode.fallbackHeightPx(webSvg, keyRows));
         return new EmbedView(frame, fileName(files.fragment()), fileName(files.page()), "../../method.html#cautions");
     }
@@ -89,8 +91,8 @@ final class MapViews {
     /** "Lambert azimuthal equal-area projection (...) on the WGS 84 ellipsoid; ...; figures: SOURCE, DATE." */
     static String caption(MapModel map, Wording w) {
         String projection = projectionText(map.projection(), w);
-        StringBuilder text = new StringBuilder(w.text("caption.onEllipsoid", "projection", projection,
-                "error", errorPercent(map.areaAudit().maxRelativeError(), w)));
+        StringBuilder text = new StringBuilder(w.sentence(w.text("caption.onEllipsoid", "projection", projection,
+                "error", errorPercent(map.areaAudit().maxRelativeError(), w))));
         String source = map.spec().source();
         String asOf = w.numbers().period(map.spec().asOf());
         if (!source.isEmpty()) {

@@ -30,6 +30,19 @@ final class SiteViews {
         return new SiteView(spec.title(), spec.publisher(), spec.notice(), wording);
     }
 
+    /** The site in {@code language}, with links to the same pages in every language (itself included). */
+    static SiteView site(SiteSpec spec, SiteLanguage language, List<SiteLanguage> all) {
+        if (all.size() < 2) {
+            return site(spec, language.wording());
+        }
+        List<SiteView.Alternate> alternates = new ArrayList<>();
+        for (SiteLanguage other : all) {
+            alternates.add(new SiteView.Alternate(other.wording().language().tag(), other.wording().language().nativeName(),
+                    language.toSiteRoot() + other.prefix(), other == language));
+        }
+        return new SiteView(spec.title(), spec.publisher(), spec.notice(), language.wording(), alternates, language.toSiteRoot());
+    }
+
     static IndexView index(Atlas atlas, List<MapFiles> files, Wording w) {
         List<IndexView.Card> cards = new ArrayList<>();
         for (int i = 0; i < atlas.maps().size(); i++) {

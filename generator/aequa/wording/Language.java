@@ -49,6 +49,13 @@ public record Language(String tag) {
         return ULocale.forLanguageTag(tag).isRightToLeft();
     }
 
+    /** The language's name in itself ("français", "العربية"), as a link to its pages reads (CLDR display names). */
+    public String nativeName() {
+        ULocale locale = ULocale.forLanguageTag(tag);
+        String name = locale.getDisplayName(locale);
+        return name.substring(0, name.offsetByCodePoints(0, 1)).toUpperCase(locale.toLocale()) + name.substring(name.offsetByCodePoints(0, 1));
+    }
+
     /** {@code "rtl"} or {@code "ltr"}, for the {@code dir} attribute. */
     public String direction() {
         return rightToLeft() ? "rtl" : "ltr";

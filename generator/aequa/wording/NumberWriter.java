@@ -153,12 +153,23 @@ public final class NumberWriter {
         return locale.toLanguageTag();
     }
 
-    /** Formats after removing negative zero: a value that rounds to 0 at {@code decimals} is written as 0. */
-    private static String write(LocalizedNumberFormatter formatter, double value, int decimals) {
+    /**
+     * Formats after removing negative zero (a value that rounds to 0 at {@code decimals} is written as 0). In a
+     * right-to-left language written with Latin digits, the figure itself (sign, digits, marks, percent sign) is
+     * wrapped in a left-to-right embedding (U+202A ... U+202C, UAX #9): without it the bidirectional algorithm
+     * moves the sign and the percent sign to the far side of the digits in right-to-left text (-98 shows as
+     * 98-), while the words of a unit keep their right-to-left place.
+     */
+    private String write(LocalizedNumberFormatter formatter, double value, int decimals) {
         double shown = value;
         if (value < 0 && BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_EVEN).signum() == 0) {
             shown = 0;
         }
-        return formatter.format(shown == 0 ? 0.0 : shown).toString().replace('-', '\u2212');
+        String text = formatter.format(shown == 0 ? 0.0 : shown).toString().replace('-', '\u2212');
+        return locale.isRightToLeft() ? LATIN_FIGURE.matcher(text).replaceAll("\u202a$0\u202c") : text;
     }
+
+    /** A figure in Latin digits with its sign, marks and percent sign (and the marks CLDR puts around them). */
+    private static final java.util.regex.Pattern LATIN_FIGURE =
+            java.util.regex.Pattern.compile("\u200e?[\u2212+]?[0-9](?:[0-9.,\u202f\u00a0]*[0-9])?(?:\u200e?%\u200e?)?");
 }

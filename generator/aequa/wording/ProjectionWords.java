@@ -3,7 +3,6 @@ package aequa.wording;
 import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import java.util.stream.Collectors;
 
 import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionFamily;
@@ -27,10 +26,10 @@ public final class ProjectionWords {
     /** "Albers equal-area conic projection (Longitude of false origin 10°, ...)": family and parameters. */
     public static String projection(ProjectionChoice choice, Wording w) {
         String family = family(choice.projection().family(), w);
-        String params = choice.projection().parameters().stream().map(p -> parameter(p, w))
-                .collect(Collectors.joining(", "));
+        java.util.List<String> params = choice.projection().parameters().stream().map(p -> parameter(p, w))
+                .toList();
         return params.isEmpty() ? w.text("caption.projection", "family", family)
-                : w.text("caption.projectionWithParameters", "family", family, "parameters", params);
+                : w.text("caption.projectionWithParameters", "family", family, "parameters", w.unitList(params));
     }
 
     /** A parameter's name and value: angles with at most 4 decimals (about 10 m), lengths with 6 digits. */

@@ -129,6 +129,24 @@ public final class Wording {
         return com.ibm.icu.text.ListFormatter.getInstance(locale).format(items);
     }
 
+    /** {@code text} with its first letter in upper case, by the language's rules: a sentence that begins with a name. */
+    public String sentence(String text) {
+        if (text.isEmpty()) {
+            return text;
+        }
+        int first = text.offsetByCodePoints(0, 1);
+        return com.ibm.icu.lang.UCharacter.toUpperCase(locale, text.substring(0, first)) + text.substring(first);
+    }
+
+    /** "a, b, c": items joined by the language's comma ("a، b" in Arabic), without a conjunction. */
+    public String unitList(java.util.List<String> items) {
+        String joined = items.isEmpty() ? "" : items.get(0);
+        for (int i = 1; i < items.size(); i++) {
+            joined = text("list.item", "list", joined, "item", items.get(i));
+        }
+        return joined;
+    }
+
     /** Whether {@code key} names a message. */
     public boolean has(String key) {
         return patterns.containsKey(key);

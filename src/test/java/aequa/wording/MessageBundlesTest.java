@@ -103,16 +103,8 @@ class MessageBundlesTest {
         }
     }
 
-    /** The named arguments of a pattern, in sorted order. */
     private static Set<String> arguments(String pattern) {
-        MessagePattern parsed = new MessagePattern(pattern);
-        Set<String> names = new TreeSet<>();
-        for (int i = 0; i < parsed.countParts(); i++) {
-            if (parsed.getPart(i).getType() == MessagePattern.Part.Type.ARG_NAME) {
-                names.add(parsed.getSubstring(parsed.getPart(i)));
-            }
-        }
-        return names;
+        return MessageArguments.of(pattern);
     }
 
     /** The selectors of each plural argument of a pattern. */

@@ -58,10 +58,12 @@ class NumberWriterTest {
 
     @Test
     void arabicFollowsItsLocalesDigits() {
-        // CLDR ar: Latin digits by default, a left-to-right mark before the sign and around the percent sign
+        // CLDR ar: Latin digits by default, a left-to-right mark before the sign; aequa wraps a Latin figure in a
+        // left-to-right embedding (U+202A ... U+202C) so its sign stays on the left inside Arabic text
         NumberWriter ar = writer("ar");
-        assertEquals("1,234.5", ar.fixed(1234.5, 1));
-        assertEquals("\u200e\u22123.5", ar.fixed(-3.5, 1));
+        assertEquals("\u202a1,234.5\u202c", ar.fixed(1234.5, 1));
+        assertEquals("\u202a\u200e\u22123.5\u202c", ar.fixed(-3.5, 1));
+        assertEquals("\u202a100,000\u202c \u0643\u0645\u00b2", ar.areaKm2(100_000, 0), "the unit's words stay outside");
         // CLDR ar-EG: Arabic-Indic digits, U+066B decimal and U+066C group separators, U+066A percent sign
         NumberWriter egypt = writer("ar-EG");
         assertEquals("\u0661\u066c\u0662\u0663\u0664\u066b\u0665", egypt.fixed(1234.5, 1));
