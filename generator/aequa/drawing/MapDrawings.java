@@ -53,7 +53,7 @@ public final class MapDrawings {
         painter.paint(canvas, layout, precision, true);
         String rootId = Ids.of("map", model.id());
         String svg = SvgOutput.tidy(SvgOutput.webRoot(g, rootId, width, layout.heightU(), model.spec().title(),
-                Descriptions.of(model)), precision.decimals());
+                Descriptions.of(model, options.wording())), precision.decimals());
         return drawn(DrawnMap.Format.WEB_SVG, svg.getBytes(StandardCharsets.UTF_8), layout, "px", canvas);
     }
 

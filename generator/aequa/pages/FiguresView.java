@@ -36,13 +36,15 @@ public record FiguresView(String id, String title, String unit, List<String> per
 
     /**
      * @param status      {@code reported}, {@code zero}, {@code no data}, {@code suppressed} or {@code not applicable}
+     *                    (the CSV's word, also the cell's class name)
+     * @param statusLabel the status in the page's language
      * @param value       the figure as given, formatted, or empty unless reported
      * @param normalised  the value mapped, formatted, or empty unless reported
      * @param classNumber the class, 1 = lowest, or empty
      * @param unreliable  whether the figure rests on too few events or too wide a margin
      * @param margin      the figure's margin of error, formatted, or empty when the source gives none
      */
-    public record Cell(String status, String value, String normalised, String classNumber, boolean unreliable,
+    public record Cell(String status, String statusLabel, String value, String normalised, String classNumber, boolean unreliable,
                        String margin) {
     }
 }
