@@ -47,7 +47,7 @@ import aequa.projection.Projections;
  */
 final class GeometryCache {
 
-    private static final int FORMAT = 2;
+    private static final int FORMAT = 3;
 
     private final Optional<Path> folder;
     private final boolean writable;

@@ -48,6 +48,11 @@ final class GeometryCodec {
             CacheFile.writeText(out, region.key());
             CacheFile.writeText(out, region.name());
             geometry(out, region.lonLat());
+            out.writeInt(region.attributes().size());
+            for (Map.Entry<String, String> a : region.attributes().entrySet()) {
+                CacheFile.writeText(out, a.getKey());
+                CacheFile.writeText(out, a.getValue());
+            }
             out.writeDouble(layer.areaKm2ByKey().get(region.key()));
         }
         out.writeInt(value.findings().size());
@@ -69,7 +74,13 @@ final class GeometryCodec {
         for (int i = 0; i < count; i++) {
             String key = CacheFile.readText(in);
             String name = CacheFile.readText(in);
-            regions.add(new Region(key, name, geometry(in, wkb)));
+            Geometry lonLat = geometry(in, wkb);
+            int attributeCount = in.readInt();
+            Map<String, String> attributes = new LinkedHashMap<>();
+            for (int a = 0; a < attributeCount; a++) {
+                attributes.put(CacheFile.readText(in), CacheFile.readText(in));
+            }
+            regions.add(new Region(key, name, lonLat, attributes));
             areas.put(key, in.readDouble());
         }
         int findingCount = in.readInt();

@@ -108,10 +108,15 @@ final class MapAssembler {
                     planar.mapAreaRatio().get(region.key()), drawn, classed.get().values(figures.figures(region.key()))));
         }
         regions.sort(Comparator.comparing(MapRegion::key));
+        Geometry outlinesM = GroupOutlines.of(map.id(), map.outlines(), "/maps/" + mapIndex + "/outlines",
+                project.file().regions().get(map.regions()), layer.regions(), planar.simplifiedM(), project.places(), findings);
+        if (outlinesM == null) {
+            return Optional.empty();
+        }
         List<String> allNotices = new ArrayList<>(notices);
         allNotices.addAll(planar.droppedIslands());
         return Optional.of(new MapModel(map, figures.periods(), choice, regions, classed.get().classification(),
-                classed.get().ramp(), planar.audit(), allNotices, parts));
+                classed.get().ramp(), planar.audit(), allNotices, parts, outlinesM));
     }
 
     /**

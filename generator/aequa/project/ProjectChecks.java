@@ -56,6 +56,11 @@ final class ProjectChecks {
         onlyFor(at + "/object", source.object(), source.file(), List.of(".topojson", ".json"), "object",
                 "the object of a TopoJSON topology");
         InsetsChecks.check(at + "/insets", source.insets(), this::error);
+        if (NamePattern.isPattern(source.name()) && NamePattern.parse(source.name()).isEmpty()) {
+            error("project-bad-name-pattern", at + "/name", "The name pattern '" + source.name() + "' does not pair its braces"
+                            + " around property names.",
+                    "Write each property in braces, for example \"{name}, {state}\"; text outside braces is kept as it is.");
+        }
         if (source.key().isBlank()) {
             error("project-missing-key", at + "/key", "The region source has an empty 'key'.",
                     "Name the property that holds each region's code, or '" + RegionSourceSpec.FEATURE_ID + "' for the feature id.");
