@@ -54,7 +54,8 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
         List<PartLayout.Inset> insets = new ArrayList<>();
         for (int i = 1; i < plans.size(); i++) {
             insets.add(new PartLayout.Inset(extent(planar.get(i).simplifiedM().values()),
-                    PartLayout.nameWidthM(MapPart.frameLabel(plans.get(i).name(), plans.get(i).areaScale()), mainExtent), plans.get(i).corner()));
+                    PartLayout.nameWidthM(MapPart.frameLabel(plans.get(i).name(), plans.get(i).areaScale()), mainExtent), plans.get(i).corner(),
+                    plans.get(i).areaScale() != 1));
         }
         List<PartLayout.Placement> placements = PartLayout.place(List.copyOf(planar.get(0).simplifiedM().values()), insets);
 
@@ -78,7 +79,8 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
             parts.add(new MapPart(plan.id(), plan.name(), plan.keys().stream().sorted().toList(), plan.main(),
                     plan.areaScale(), plan.choice(), part.audit(), plan.areaKm2(), plan.gapKm(),
                     new MapPart.Frame(frame.getMinX(), frame.getMinY(), frame.getMaxX(), frame.getMaxY()),
-                    i == 0 ? 0 : placements.get(i - 1).nameBandM()));
+                    i == 0 ? 0 : placements.get(i - 1).nameBandM(), i == 0 ? 0 : placements.get(i - 1).nameLines(),
+                    i == 0 ? 0 : placements.get(i - 1).scaleBandM()));
         }
         return new CompositeLayers(parts, geometry, ratios, worst, dropped);
     }

@@ -175,6 +175,52 @@ class CompositeMapsTest {
     }
 
     /**
+     * A part at its own area scale carries its own area-scale square: in the print SVG, the square in Alaska's
+     * frame and the main map's square state areas in the ratio of their labels times the part's declared scale
+     * (an equal-area drawing's page area is proportional to ground area times the scale: Snyder 1987, p. 4).
+     */
+    @Test
+    void aPartAtItsOwnAreaScaleHasItsOwnSquare() {
+        MapPart alaska = statesScaled.parts().get(1);
+        assertTrue(alaska.scaleBandM() > 0);
+        assertTrue(counties.parts().stream().allMatch(p -> p.scaleBandM() == 0), "parts at the main scale need no square");
+        String svg = new String(aequa.drawing.MapDrawings.printSvg(statesScaled, aequa.drawing.Themes.bundled("newsprint"),
+                aequa.drawing.PrintSize.of(aequa.drawing.PrintPreset.TWO_COLUMNS)).bytes(), java.nio.charset.StandardCharsets.UTF_8);
+        double[] own = square(group(svg, "frame-part-1"));
+        double[] main = square(group(svg, "area-scale"));
+        assertEquals(alaska.areaScale() * own[1] / main[1], own[0] * own[0] / (main[0] * main[0]), 1e-3);
+        assertTrue(!group(svg, "frame-part-2").contains("km²"), "Hawaii, at the main scale, has no square");
+    }
+
+    private static String group(String svg, String id) {
+        int start = svg.indexOf("<g id='" + id + "'>");
+        assertTrue(start >= 0, id);
+        int depth = 0;
+        int i = start;
+        do {
+            int open = svg.indexOf("<g", i + 1);
+            int close = svg.indexOf("</g>", i + 1);
+            if (open >= 0 && open < close) {
+                depth++;
+                i = open;
+            } else {
+                depth--;
+                i = close;
+            }
+        } while (depth >= 0);
+        return svg.substring(start, i);
+    }
+
+    /** The side of the group's filled square (page units) and the area its label states, km². */
+    private static double[] square(String group) {
+        var rect = java.util.regex.Pattern.compile("<rect x='[^']*' y='[^']*' width='([0-9.]+)' height='([0-9.]+)' style='fill:").matcher(group);
+        assertTrue(rect.find(), group);
+        var label = java.util.regex.Pattern.compile(">([0-9,]+) km²<").matcher(group);
+        assertTrue(label.find(), group);
+        return new double[] {Double.parseDouble(rect.group(1)), Double.parseDouble(label.group(1).replace(",", ""))};
+    }
+
+    /**
      * The share of the map's box (regions and frames) that regions fill: the issue measured well under a third
      * for one projection of the counties; the composite map must fill clearly more.
      */
