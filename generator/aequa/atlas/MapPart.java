@@ -42,7 +42,23 @@ public record MapPart(String id, String name, List<String> keys, boolean main, d
     }
 
     static String frameLabel(String name, double areaScale) {
-        return areaScale == 1 ? name : name + " (areas at " + factorText(areaScale) + " \u00d7 the main map)";
+        return areaScale == 1 ? name : name + " " + scaleNote(areaScale);
+    }
+
+    /**
+     * The frame's text in two lines, for a frame too narrow for one: the name, then how its areas compare; a
+     * part at the main scale has its name broken by the drawing instead, so this is empty for it.
+     */
+    public List<String> frameLabelLines() {
+        return frameLabelLines(name, areaScale);
+    }
+
+    static List<String> frameLabelLines(String name, double areaScale) {
+        return areaScale == 1 ? List.of() : List.of(name, scaleNote(areaScale));
+    }
+
+    private static String scaleNote(double areaScale) {
+        return "(areas at " + factorText(areaScale) + " \u00d7 the main map)";
     }
 
     /** The area scale as readers see it: at most three significant digits, for example "0.25". */

@@ -36,7 +36,7 @@ public final class PartLayout {
     static final double NAME_WRAP_SHARE = 0.3;
     /** The name band of a two-line name, in name bands, and the width of its longer line, in names (by eye: words break unevenly). */
     static final double TWO_LINE_BAND = 1.7;
-    static final double TWO_LINE_WIDTH = 0.6;
+    public static final double TWO_LINE_WIDTH = 0.6;
     /** The area-scale band of a part at its own area scale, as a share of the main part's larger side (by eye). */
     static final double SCALE_BAND_SHARE = 0.05;
     /** Characters of the widest area-scale label ("5,000,000 km²"), for the frame's least width. */
@@ -53,11 +53,17 @@ public final class PartLayout {
      *
      * @param contentM    the envelope of its regions on its own plane, metres (after its area scale)
      * @param nameWidthM  how wide its name is, in the same metres, when drawn in the name band
+     * @param twoLineWidthM how wide its longer line is when the name takes two lines
      * @param corner      {@code top-left}, {@code top-right}, {@code bottom-left}, {@code bottom-right} or empty
      * @param ownScale    whether the part is drawn at another area scale than the main part (it then gets an
      *                    area-scale band)
      */
-    public record Inset(Envelope contentM, double nameWidthM, String corner, boolean ownScale) {
+    public record Inset(Envelope contentM, double nameWidthM, double twoLineWidthM, String corner, boolean ownScale) {
+
+        /** A part whose name breaks where the drawing finds room: its longer line is taken as {@value #TWO_LINE_WIDTH} of it. */
+        public Inset(Envelope contentM, double nameWidthM, String corner, boolean ownScale) {
+            this(contentM, nameWidthM, TWO_LINE_WIDTH * nameWidthM, corner, ownScale);
+        }
     }
 
     /**
@@ -103,14 +109,14 @@ public final class PartLayout {
             Envelope c = inset.contentM();
             double contentW = c.getWidth() + 2 * margin;
             boolean twoLines = inset.nameWidthM() + 2 * margin > Math.max(contentW, NAME_WRAP_SHARE * side);
-            double nameW = (twoLines ? TWO_LINE_WIDTH : 1) * inset.nameWidthM() + 2 * margin;
+            double nameW = (twoLines ? inset.twoLineWidthM() : inset.nameWidthM()) + 2 * margin;
             double nameBand = twoLines ? TWO_LINE_BAND * band : band;
             double scaleBand = inset.ownScale() ? SCALE_BAND_SHARE * side : 0;
             double scaleW = inset.ownScale() ? scaleBand + SCALE_LABEL_CHARS * NAME_CHAR_SHARE * band + 2 * margin : 0;
             double w = Math.max(contentW, Math.max(nameW, scaleW));
             double h = c.getHeight() + 2 * margin + nameBand + scaleBand;
             Envelope best = best(candidates(main, whole, frames, w, h, gap), inset.corner(), main, whole, index, frames, gap);
-            best = slide(best, main, index, frames, gap);
+            best = slide(best, inset.corner(), main, index, frames, gap);
             frames.add(best);
             whole.expandToInclude(best);
             double dx = best.getMinX() + (best.getWidth() - c.getWidth()) / 2 - c.getMinX();
@@ -189,6 +195,15 @@ public final class PartLayout {
         };
     }
 
+    /** Whether the whole frame lies in the corner's quarter of the main part (not only its centre). */
+    private static boolean wholly(Envelope f, String corner, Envelope main) {
+        Envelope quarter = new Envelope(corner.endsWith("left") ? Double.NEGATIVE_INFINITY : main.centre().x,
+                corner.endsWith("left") ? main.centre().x : Double.POSITIVE_INFINITY,
+                corner.startsWith("bottom") ? Double.NEGATIVE_INFINITY : main.centre().y,
+                corner.startsWith("bottom") ? main.centre().y : Double.POSITIVE_INFINITY);
+        return quarter.contains(f);
+    }
+
     private static boolean allowed(Envelope frame, STRtree index, List<Envelope> frames, double gap) {
         Envelope grown = new Envelope(frame);
         grown.expandBy(gap);
@@ -209,8 +224,12 @@ public final class PartLayout {
         return true;
     }
 
-    /** Slides the frame towards the main part's centre, along x then y, as far as it stays allowed. */
-    private static Envelope slide(Envelope frame, Envelope main, STRtree index, List<Envelope> frames, double gap) {
+    /**
+     * Slides the frame towards the main part's centre, along x then y, as far as it stays allowed and, when a
+     * corner was asked for and the frame lies wholly in that quarter, as far as it stays wholly there.
+     */
+    private static Envelope slide(Envelope frame, String corner, Envelope main, STRtree index, List<Envelope> frames, double gap) {
+        boolean keepQuarter = !corner.isEmpty() && wholly(frame, corner, main);
         Envelope current = frame;
         for (int axis = 0; axis < 2; axis++) {
             double towards = axis == 0 ? main.centre().x - current.centre().x : main.centre().y - current.centre().y;
@@ -218,7 +237,7 @@ public final class PartLayout {
             for (int step = 1; step <= SLIDE_STEPS; step++) {
                 double trial = moved + towards / (1 << step);
                 Envelope shifted = shift(current, axis == 0 ? trial : 0, axis == 0 ? 0 : trial);
-                if (allowed(shifted, index, frames, gap)) {
+                if (allowed(shifted, index, frames, gap) && (!keepQuarter || wholly(shifted, corner, main))) {
                     moved = trial;
                 }
             }

@@ -88,7 +88,7 @@ final class PartFrames {
         double room = w - lineBandU * 0.6;
         List<String> text = List.of(label);
         if (type.width(label, size, false) > room && lines == 2) {
-            List<String> wrapped = type.wrap(label, size, false, room);
+            List<String> wrapped = part.frameLabelLines().isEmpty() ? type.wrap(label, size, false, room) : part.frameLabelLines();
             text = wrapped.size() <= 2 ? wrapped : List.of(label);
         }
         double widest = text.stream().mapToDouble(t -> type.width(t, size, false)).max().orElse(0);

@@ -46,6 +46,8 @@ final class MapViews {
 
     static FiguresView figures(MapModel map, MapFiles files) {
         List<FiguresView.Row> rows = new ArrayList<>();
+        java.util.Map<String, String> partOf = new java.util.HashMap<>();
+        map.parts().forEach(part -> part.keys().forEach(key -> partOf.put(key, part.name())));
         for (MapRegion region : map.regions()) {
             List<FiguresView.Cell> cells = new ArrayList<>();
             for (int p = 0; p < map.periods().size(); p++) {
@@ -56,10 +58,12 @@ final class MapViews {
                         v.classIndex() < 0 ? "" : Integer.toString(v.classIndex() + 1), v.unreliable(),
                         reported && Double.isFinite(v.marginOfError()) ? "\u00b1" + NumberText.of(v.marginOfError()) : ""));
             }
-            rows.add(new FiguresView.Row(region.key(), region.name(), areaText(region.geodesicAreaKm2()), cells));
+            rows.add(new FiguresView.Row(region.key(), region.name(), areaText(region.geodesicAreaKm2()), cells,
+                    partOf.getOrDefault(region.key(), "")));
         }
         return new FiguresView(files.fileId(), map.spec().title(), map.spec().unit(), map.periods(), rows,
-                fileName(files.page()), fileName(files.csv()), rows.stream().flatMap(r -> r.cells().stream()).anyMatch(c -> !c.margin().isEmpty()));
+                fileName(files.page()), fileName(files.csv()), rows.stream().flatMap(r -> r.cells().stream()).anyMatch(c -> !c.margin().isEmpty()),
+                map.composite());
     }
 
     /** "Lambert azimuthal equal-area projection (...) of the WGS 84 ellipsoid; figures: SOURCE, DATE." */
