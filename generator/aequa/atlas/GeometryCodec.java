@@ -55,6 +55,11 @@ final class GeometryCodec {
             }
             out.writeDouble(layer.areaKm2ByKey().get(region.key()));
         }
+        out.writeInt(layer.droppedWhy().size());
+        for (Map.Entry<String, String> d : new java.util.TreeMap<>(layer.droppedWhy()).entrySet()) {
+            CacheFile.writeText(out, d.getKey());
+            CacheFile.writeText(out, d.getValue());
+        }
         out.writeInt(value.findings().size());
         for (Finding f : value.findings()) {
             out.writeInt(f.severity().ordinal());
@@ -83,6 +88,11 @@ final class GeometryCodec {
             regions.add(new Region(key, name, lonLat, attributes));
             areas.put(key, in.readDouble());
         }
+        int droppedCount = in.readInt();
+        Map<String, String> dropped = new LinkedHashMap<>();
+        for (int i = 0; i < droppedCount; i++) {
+            dropped.put(CacheFile.readText(in), CacheFile.readText(in));
+        }
         int findingCount = in.readInt();
         List<Finding> findings = new ArrayList<>();
         for (int i = 0; i < findingCount; i++) {
@@ -90,7 +100,7 @@ final class GeometryCodec {
             findings.add(new Finding(severity, CacheFile.readText(in), CacheFile.readText(in), CacheFile.readText(in),
                     CacheFile.readText(in), CacheFile.readText(in)));
         }
-        return new LayerWithFindings(new RegionLayer(sourceId, file, regions, areas), findings);
+        return new LayerWithFindings(new RegionLayer(sourceId, file, regions, areas, dropped), findings);
     }
 
     static void writePlanar(DataOutputStream out, PlanarLayer planar) throws IOException {

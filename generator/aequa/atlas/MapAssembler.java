@@ -64,7 +64,7 @@ final class MapAssembler {
         List<RegionArea> areas = layer.regions().stream()
                 .map(r -> new RegionArea(r.key(), layer.areaKm2ByKey().get(r.key()))).toList();
         int before = findings.list().size();
-        MapFigures figures = MapStatistics.compute(map, table, areas, project.file().checks(), findings);
+        MapFigures figures = MapStatistics.compute(map, table, areas, layer.droppedWhy(), project.file().checks(), findings);
         List<String> notices = readerNotices(findings.list().subList(before, findings.list().size()));
 
         Optional<ProjectionRequest> request = ProjectionRequests.of(project, mapIndex, map,

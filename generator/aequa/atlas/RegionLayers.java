@@ -61,6 +61,7 @@ final class RegionLayers {
         for (int i = 0; i < densified.size(); i++) {
             areas.put(densified.get(i).key(), areasKm2[i]);
         }
-        return new GeometryCodec.LayerWithFindings(new RegionLayer(sourceId, spec.file(), densified, areas), findings.list());
+        return new GeometryCodec.LayerWithFindings(new RegionLayer(sourceId, spec.file(), densified, areas,
+                DroppedRegions.why(read.regions(), valid, findings.list())), findings.list());
     }
 }
