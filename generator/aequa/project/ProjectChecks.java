@@ -115,6 +115,15 @@ final class ProjectChecks {
                     "Set 'per' to the denominator column, for example 'population'.");
         }
         oneOf(at + "/display", map.display(), List.of("choropleth", "circles"));
+        if (map.largestCircleMm() != null && !(map.largestCircleMm() >= MapSpec.MIN_CIRCLE_MM
+                && map.largestCircleMm() <= MapSpec.MAX_CIRCLE_MM)) {
+            error("project-bad-value", at + "/largest-circle-mm", String.format(java.util.Locale.ROOT,
+                            "'largest-circle-mm' must be from %.0f to %.0f millimetres.", MapSpec.MIN_CIRCLE_MM, MapSpec.MAX_CIRCLE_MM),
+                    "It is the diameter of the largest circle in print; leave it out to size circles by the map.");
+        } else if (map.largestCircleMm() != null && !"circles".equals(map.display())) {
+            error("project-bad-value", at + "/largest-circle-mm", "'largest-circle-mm' applies only to 'display: circles'.",
+                    "Remove it, or set 'display: circles' for a map of counts.");
+        }
         checkClasses(at + "/classes", map.classes());
         if (map.insets() != null) {
             InsetsChecks.check(at + "/insets", map.insets(), this::error);
