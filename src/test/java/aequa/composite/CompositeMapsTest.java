@@ -48,6 +48,7 @@ class CompositeMapsTest {
     private static MapModel counties;
     private static MapModel countiesOneProjection;
     private static MapModel statesScaled;
+    private static MapModel countiesCircles;
 
     @BeforeAll
     static void load(@TempDir Path project) throws IOException {
@@ -76,6 +77,7 @@ class CompositeMapsTest {
                 "    insets:",
                 "      - { name: Alaska, regions: [\"02\"], scale: 0.25, corner: bottom-left }",
                 "      - { name: Hawaii, box: [-161, 18, -154, 23] }",
+                "  - { id: counties-circles, regions: counties, figures: counties, indicator: code_number, measure: count, display: circles }",
                 ""));
         Findings findings = new Findings();
         LoadedProject loaded = ProjectLoader.load(project, findings).orElseThrow(() -> new AssertionError(findings.list()));
@@ -84,6 +86,7 @@ class CompositeMapsTest {
         counties = atlas.maps().get(0);
         countiesOneProjection = atlas.maps().get(1);
         statesScaled = atlas.maps().get(2);
+        countiesCircles = atlas.maps().get(3);
     }
 
     @Test
@@ -172,6 +175,34 @@ class CompositeMapsTest {
         assertEquals(0.25, drawn.planarM().getArea() / 1e6 / drawn.geodesicAreaKm2(), 0.005);
         assertEquals(List.of("15"), statesScaled.parts().get(2).keys());
         assertEquals(3, statesScaled.parts().size(), "the other territories stay in the main part of a listed map");
+    }
+
+    /**
+     * Circle maps and small multiples draw the same composite: a circle map of the counties has the choropleth's
+     * parts and frames, and every panel of small multiples draws every part's regions and frame.
+     */
+    @Test
+    void circleMapsAndSmallMultiplesUseTheSameComposite() {
+        assertEquals(counties.parts().stream().map(p -> p.name() + p.keys() + p.frame()).toList(),
+                countiesCircles.parts().stream().map(p -> p.name() + p.keys() + p.frame()).toList());
+        String circles = new String(aequa.drawing.MapDrawings.webSvg(countiesCircles, aequa.drawing.Themes.bundled("daylight"),
+                aequa.drawing.WebSize.STANDARD).bytes(), java.nio.charset.StandardCharsets.UTF_8);
+        assertTrue(circles.contains("id='frame-part-1'") && circles.contains("id='regions-part-1'") && circles.contains("id='symbols'"));
+        List<String> periods = List.of("2020", "2021");
+        List<MapRegion> twice = counties.regions().stream().map(r -> new MapRegion(r.key(), r.name(), r.geodesicAreaKm2(),
+                r.mapAreaRatio(), r.planarM(), List.of(r.values().get(0), r.values().get(0)))).toList();
+        MapModel multiples = new MapModel(counties.spec(), periods, counties.projection(), twice, counties.classification(),
+                counties.ramp(), counties.areaAudit(), counties.notices(), counties.parts(), counties.outlinesM());
+        String svg = new String(aequa.drawing.MapDrawings.webSvg(multiples, aequa.drawing.Themes.bundled("daylight"),
+                aequa.drawing.WebSize.STANDARD).bytes(), java.nio.charset.StandardCharsets.UTF_8);
+        for (MapPart part : counties.parts()) {
+            long layers = java.util.regex.Pattern.compile("id='regions-" + part.id() + "-").matcher(svg).results().count();
+            assertEquals(2, layers, part.name() + ": a layer per panel");
+            if (!part.main()) {
+                assertEquals(2, java.util.regex.Pattern.compile("id='frame-" + part.id() + "-").matcher(svg).results().count(),
+                        part.name() + ": a frame per panel");
+            }
+        }
     }
 
     /**
