@@ -88,7 +88,8 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
         if (circles) {
             double maxValue = Symbols.maxValue(model);
             double shortSide = Math.min(cellW, cellW * aspect);
-            symbols = Double.isNaN(maxValue) ? null : new Symbols(maxValue, Symbols.MAX_RADIUS_SHARE * shortSide);
+            symbols = Double.isNaN(maxValue) ? null : new Symbols(maxValue,
+                    Symbols.largestRadiusU(model, maxValue, cellW / extentM.getWidth(), shortSide, upt));
         }
         Legend legend = new Legend(model, theme, type, options.histogram(), symbols, w);
         double legendH = legend.height(legendW);

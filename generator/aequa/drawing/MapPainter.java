@@ -19,7 +19,7 @@ import aequa.project.MapDisplay;
 /**
  * Paints one {@link MapModel} onto a {@link Canvas}: the single drawing path behind SVG, PNG and PDF.
  * Layers, bottom to top, each a named group: background, title, per panel (globe and graticule, regions,
- * borders, outline, symbols, labels, period label), legend, area scale, caption, credits.
+ * borders, outline, group outlines, symbols, labels, period label), legend, area scale, caption, credits.
  */
 final class MapPainter {
 
@@ -119,8 +119,15 @@ final class MapPainter {
             }
             canvas.end();
             RegionFillLayer.paintBorders(canvas, theme, pages, precision, suffix, !web);
+            if (!model.outlinesM().isEmpty()) {
+                // group outlines (the states over a county map) in the weight and colour of the map's outer outline
+                canvas.begin("group-outlines" + suffix);
+                canvas.stroke(PagePaths.lines(panel.fit().toPage(model.outlinesM()), precision), c.outline(),
+                        theme.lines().outline().pt());
+                canvas.end();
+            }
             if (model.composite()) {
-                PartFrames.paint(canvas, model, theme, panel.fit(), suffix);
+                PartFrames.paint(canvas, model, theme, panel.fit(), suffix, options.wording().numbers());
             }
             if (graticule && !wholeGlobe) {
                 canvas.begin("graticule" + suffix);

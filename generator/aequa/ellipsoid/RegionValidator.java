@@ -102,7 +102,7 @@ public final class RegionValidator {
         }
         Geometry repaired = repair(geometry, file, place, findings);
         return new Checked(repaired.isEmpty() ? Optional.empty()
-                : Optional.of(new Region(region.key(), region.name(), repaired)), findings);
+                : Optional.of(region.withLonLat(repaired)), findings);
     }
 
     private static Geometry repair(Geometry geometry, String file, String place, Findings findings) {

@@ -60,6 +60,8 @@ final class MapViews {
     static FiguresView figures(MapModel map, MapFiles files, Wording w) {
         NumberWriter numbers = w.numbers();
         List<FiguresView.Row> rows = new ArrayList<>();
+        java.util.Map<String, String> partOf = new java.util.HashMap<>();
+        map.parts().forEach(part -> part.keys().forEach(key -> partOf.put(key, part.name())));
         for (MapRegion region : map.regions()) {
             List<FiguresView.Cell> cells = new ArrayList<>();
             for (int p = 0; p < map.periods().size(); p++) {
@@ -72,11 +74,13 @@ final class MapViews {
                         reported && Double.isFinite(v.marginOfError())
                                 ? w.text("figures.plusMinus", "margin", numbers.significant(v.marginOfError())) : ""));
             }
-            rows.add(new FiguresView.Row(region.key(), region.name(), areaText(region.geodesicAreaKm2(), numbers), cells));
+            rows.add(new FiguresView.Row(region.key(), region.name(), areaText(region.geodesicAreaKm2(), numbers), cells,
+                    partOf.getOrDefault(region.key(), "")));
         }
         List<String> periods = map.periods().stream().map(numbers::period).toList();
         return new FiguresView(files.fileId(), map.spec().title(), map.spec().unit(), periods, rows,
-                fileName(files.page()), fileName(files.csv()), rows.stream().flatMap(r -> r.cells().stream()).anyMatch(c -> !c.margin().isEmpty()));
+                fileName(files.page()), fileName(files.csv()), rows.stream().flatMap(r -> r.cells().stream()).anyMatch(c -> !c.margin().isEmpty()),
+                map.composite());
     }
 
     /** The status of a figure in the page's language. */
