@@ -143,7 +143,8 @@ public final class RegionValidator {
         }
         if (collapsed > 0) {
             findings.add(Finding.note("part-degenerate", file, place,
-                    collapsed + " of its rings enclose no area (fewer than three distinct positions); aequa left them out.",
+                    collapsed == 1 ? "1 of its rings encloses no area (fewer than three distinct positions); aequa left it out."
+                            : collapsed + " of its rings enclose no area (fewer than three distinct positions); aequa left them out.",
                     "Remove such slivers from the source."));
         }
         if (parts.isEmpty()) {
