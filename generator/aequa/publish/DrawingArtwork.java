@@ -83,7 +83,7 @@ public final class DrawingArtwork implements MapArtwork {
     /** The 2x PNG, and the 1x made from it ({@link MapDrawings#pngPair}): the map is painted once for both. */
     @Override
     public byte[][] pngs(MapModel map, int widthPx) {
-        List<DrawnMap> pair = MapDrawings.pngPair(map, theme, widthPx);
+        List<DrawnMap> pair = MapDrawings.pngPair(map, theme, widthPx, DrawOptions.web().withTitle(true).inLanguage(wording));
         return new byte[][] {pair.get(0).bytes(), pair.get(1).bytes()};
     }
 
