@@ -4,6 +4,8 @@ import java.nio.file.Path;
 import java.util.List;
 
 import aequa.project.ProjectFile;
+import aequa.wording.Language;
+import aequa.wording.Wording;
 
 /**
  * The loaded, computed model of a whole site: the outcome of step 1 of a build. Nothing here has been
@@ -12,10 +14,22 @@ import aequa.project.ProjectFile;
  * @param projectDir the project folder
  * @param project    the parsed project file
  * @param maps       the maps, in project-file order
+ * @param wordings   one per language the site is published in, first language first, the project's checked
+ *                   overrides applied
  */
-public record Atlas(Path projectDir, ProjectFile project, List<MapModel> maps) {
+public record Atlas(Path projectDir, ProjectFile project, List<MapModel> maps, List<Wording> wordings) {
 
     public Atlas {
         maps = List.copyOf(maps);
+        wordings = List.copyOf(wordings);
+        if (wordings.isEmpty()) {
+            throw new IllegalArgumentException("a site has at least one language");
+        }
+    }
+
+    /** An atlas in the shipped wording of the project's languages (English for a tag aequa does not ship). */
+    public Atlas(Path projectDir, ProjectFile project, List<MapModel> maps) {
+        this(projectDir, project, maps, project.site().languages().stream()
+                .map(tag -> Language.parse(tag).map(Wording::of).orElse(Wording.english())).distinct().toList());
     }
 }

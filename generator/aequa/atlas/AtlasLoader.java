@@ -6,6 +6,8 @@ import java.util.List;
 import aequa.findings.Findings;
 import aequa.project.LoadedProject;
 import aequa.project.MapSpec;
+import aequa.wording.SiteWording;
+import aequa.wording.Wording;
 
 /**
  * Step 1 of a build: from a checked project file to the immutable {@link Atlas}, with every problem in the
@@ -25,6 +27,7 @@ public final class AtlasLoader {
         for (int i = 0; i < specs.size(); i++) {
             assembler.assemble(i, specs.get(i)).ifPresent(maps::add);
         }
-        return new Atlas(project.dir(), project.file(), maps);
+        List<Wording> wordings = SiteWording.load(project.dir(), project.file().site().languages(), findings);
+        return new Atlas(project.dir(), project.file(), maps, wordings);
     }
 }

@@ -51,8 +51,13 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
         Envelope mainExtent = extent(planar.get(0).simplifiedM().values());
         List<PartLayout.Inset> insets = new ArrayList<>();
         for (int i = 1; i < plans.size(); i++) {
-            insets.add(new PartLayout.Inset(extent(planar.get(i).simplifiedM().values()),
-                    PartLayout.nameWidthM(MapPart.frameLabel(plans.get(i).name(), plans.get(i).areaScale()), mainExtent), plans.get(i).corner()));
+            PartPlan plan = plans.get(i);
+            double nameWidthM = PartLayout.nameWidthM(MapPart.frameLabel(plan.name(), plan.areaScale()), mainExtent);
+            List<String> lines = MapPart.frameLabelLines(plan.name(), plan.areaScale());
+            double twoLineWidthM = lines.isEmpty() ? PartLayout.TWO_LINE_WIDTH * nameWidthM
+                    : lines.stream().mapToDouble(line -> PartLayout.nameWidthM(line, mainExtent)).max().orElse(0);
+            insets.add(new PartLayout.Inset(extent(planar.get(i).simplifiedM().values()), nameWidthM, twoLineWidthM,
+                    plan.corner(), plan.areaScale() != 1));
         }
         List<PartLayout.Placement> placements = PartLayout.place(List.copyOf(planar.get(0).simplifiedM().values()), insets);
 
@@ -76,7 +81,8 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
             parts.add(new MapPart(plan.id(), plan.name(), plan.keys().stream().sorted().toList(), plan.main(),
                     plan.areaScale(), plan.choice(), part.audit(), plan.areaKm2(), plan.gapKm(),
                     new MapPart.Frame(frame.getMinX(), frame.getMinY(), frame.getMaxX(), frame.getMaxY()),
-                    i == 0 ? 0 : placements.get(i - 1).nameBandM()));
+                    i == 0 ? 0 : placements.get(i - 1).nameBandM(), i == 0 ? 0 : placements.get(i - 1).nameLines(),
+                    i == 0 ? 0 : placements.get(i - 1).scaleBandM()));
         }
         List<String> clipped = planar.stream().flatMap(p -> p.audit().clippedKeys().stream()).toList();
         List<String> aroundPole = planar.stream().flatMap(p -> p.audit().aroundPoleKeys().stream()).toList();

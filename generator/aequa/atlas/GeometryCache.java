@@ -51,7 +51,7 @@ import aequa.projection.Projections;
  */
 final class GeometryCache {
 
-    private static final int FORMAT = 3;
+    private static final int FORMAT = 4;
 
     private final Optional<Path> folder;
     private final boolean writable;

@@ -48,7 +48,17 @@ final class GeometryCodec {
             CacheFile.writeText(out, region.key());
             CacheFile.writeText(out, region.name());
             geometry(out, region.lonLat());
+            out.writeInt(region.attributes().size());
+            for (Map.Entry<String, String> a : region.attributes().entrySet()) {
+                CacheFile.writeText(out, a.getKey());
+                CacheFile.writeText(out, a.getValue());
+            }
             out.writeDouble(layer.areaKm2ByKey().get(region.key()));
+        }
+        out.writeInt(layer.droppedWhy().size());
+        for (Map.Entry<String, String> d : new java.util.TreeMap<>(layer.droppedWhy()).entrySet()) {
+            CacheFile.writeText(out, d.getKey());
+            CacheFile.writeText(out, d.getValue());
         }
         out.writeInt(value.findings().size());
         for (Finding f : value.findings()) {
@@ -69,8 +79,19 @@ final class GeometryCodec {
         for (int i = 0; i < count; i++) {
             String key = CacheFile.readText(in);
             String name = CacheFile.readText(in);
-            regions.add(new Region(key, name, geometry(in, wkb)));
+            Geometry lonLat = geometry(in, wkb);
+            int attributeCount = in.readInt();
+            Map<String, String> attributes = new LinkedHashMap<>();
+            for (int a = 0; a < attributeCount; a++) {
+                attributes.put(CacheFile.readText(in), CacheFile.readText(in));
+            }
+            regions.add(new Region(key, name, lonLat, attributes));
             areas.put(key, in.readDouble());
+        }
+        int droppedCount = in.readInt();
+        Map<String, String> dropped = new LinkedHashMap<>();
+        for (int i = 0; i < droppedCount; i++) {
+            dropped.put(CacheFile.readText(in), CacheFile.readText(in));
         }
         int findingCount = in.readInt();
         List<Finding> findings = new ArrayList<>();
@@ -79,7 +100,7 @@ final class GeometryCodec {
             findings.add(new Finding(severity, CacheFile.readText(in), CacheFile.readText(in), CacheFile.readText(in),
                     CacheFile.readText(in), CacheFile.readText(in)));
         }
-        return new LayerWithFindings(new RegionLayer(sourceId, file, regions, areas), findings);
+        return new LayerWithFindings(new RegionLayer(sourceId, file, regions, areas, dropped), findings);
     }
 
     static void writePlanar(DataOutputStream out, PlanarLayer planar) throws IOException {

@@ -65,7 +65,7 @@ final class MapAssembler {
         List<RegionArea> areas = layer.regions().stream()
                 .map(r -> new RegionArea(r.key(), layer.areaKm2ByKey().get(r.key()))).toList();
         int before = findings.list().size();
-        MapFigures figures = MapStatistics.compute(map, table, areas, project.file().checks(), findings);
+        MapFigures figures = MapStatistics.compute(map, table, areas, layer.droppedWhy(), project.file().checks(), findings);
         List<String> notices = readerNotices(findings.list().subList(before, findings.list().size()));
 
         Optional<ProjectionRequest> request = ProjectionRequests.of(project, mapIndex, map,
@@ -104,10 +104,15 @@ final class MapAssembler {
                     planar.mapAreaRatio().get(region.key()), drawn, classed.get().values(figures.figures(region.key()))));
         }
         regions.sort(Comparator.comparing(MapRegion::key));
+        Geometry outlinesM = GroupOutlines.of(map.id(), map.outlines(), "/maps/" + mapIndex + "/outlines",
+                project.file().regions().get(map.regions()), layer.regions(), planar.simplifiedM(), project.places(), findings);
+        if (outlinesM == null) {
+            return Optional.empty();
+        }
         List<String> allNotices = new ArrayList<>(notices);
         allNotices.addAll(planar.droppedIslands());
         return Optional.of(new MapModel(map, figures.periods(), choice, regions, classed.get().classification(),
-                classed.get().ramp(), planar.audit(), allNotices, parts));
+                classed.get().ramp(), planar.audit(), allNotices, parts, outlinesM));
     }
 
     /**

@@ -2,6 +2,8 @@ package aequa.atlas;
 
 import java.util.List;
 
+import org.locationtech.jts.geom.Geometry;
+
 import aequa.classes.Classification;
 import aequa.colour.ColourRamp;
 import aequa.planar.AreaAudit;
@@ -22,17 +24,30 @@ import aequa.projection.ProjectionChoice;
  *                       for the author and the method page, never printed in the graphic
  * @param parts          the parts of a composite map, main part first; empty for a map on one projection (then
  *                       {@code projection} is the map's; for a composite map it is the main part's)
+ * @param outlinesM      the outlines of the groups the map's {@code outlines} setting names (lines on the map's
+ *                       plane, metres, drawn over the fills); empty when the map has none
  */
 public record MapModel(MapSpec spec, List<String> periods, ProjectionChoice projection, List<MapRegion> regions,
                        Classification classification, ColourRamp ramp, AreaAudit areaAudit, List<String> notices,
-                       List<MapPart> parts) {
+                       List<MapPart> parts, Geometry outlinesM) {
 
     public MapModel {
+        java.util.Objects.requireNonNull(outlinesM, "outlinesM");
         periods = List.copyOf(periods);
         regions = List.copyOf(regions);
         notices = List.copyOf(notices);
         parts = List.copyOf(parts);
     }
+
+    /** A map without group outlines. */
+    public MapModel(MapSpec spec, List<String> periods, ProjectionChoice projection, List<MapRegion> regions,
+                    Classification classification, ColourRamp ramp, AreaAudit areaAudit, List<String> notices,
+                    List<MapPart> parts) {
+        this(spec, periods, projection, regions, classification, ramp, areaAudit, notices, parts, NO_OUTLINES);
+    }
+
+    /** The empty outline layer. */
+    public static final Geometry NO_OUTLINES = new org.locationtech.jts.geom.GeometryFactory().createMultiLineString();
 
     /** A map on one projection. */
     public MapModel(MapSpec spec, List<String> periods, ProjectionChoice projection, List<MapRegion> regions,

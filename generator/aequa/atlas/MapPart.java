@@ -21,10 +21,13 @@ import aequa.projection.ProjectionChoice;
  * @param gapKm      its geodesic gap to the main part when the parts were found automatically, else NaN
  * @param frame      its frame (for the main part, the extent of its regions)
  * @param nameBandM  the height of the name band at the top of the frame (0 for the main part)
+ * @param nameLines  the lines the name band holds: 1, or 2 for a long name (0 for the main part)
+ * @param scaleBandM the height of the band at the bottom of the frame that holds the part's own area-scale
+ *                   square (0 unless the part is drawn at another area scale than the main part)
  */
 public record MapPart(String id, String name, List<String> keys, boolean main, double areaScale,
                       ProjectionChoice projection, AreaAudit areaAudit, double areaKm2, double gapKm, Frame frame,
-                      double nameBandM) {
+                      double nameBandM, int nameLines, double scaleBandM) {
 
     public MapPart {
         keys = List.copyOf(keys);
@@ -39,7 +42,23 @@ public record MapPart(String id, String name, List<String> keys, boolean main, d
     }
 
     static String frameLabel(String name, double areaScale) {
-        return areaScale == 1 ? name : name + " (areas at " + factorText(areaScale) + " \u00d7 the main map)";
+        return areaScale == 1 ? name : name + " " + scaleNote(areaScale);
+    }
+
+    /**
+     * The frame's text in two lines, for a frame too narrow for one: the name, then how its areas compare; a
+     * part at the main scale has its name broken by the drawing instead, so this is empty for it.
+     */
+    public List<String> frameLabelLines() {
+        return frameLabelLines(name, areaScale);
+    }
+
+    static List<String> frameLabelLines(String name, double areaScale) {
+        return areaScale == 1 ? List.of() : List.of(name, scaleNote(areaScale));
+    }
+
+    private static String scaleNote(double areaScale) {
+        return "(areas at " + factorText(areaScale) + " \u00d7 the main map)";
     }
 
     /** The area scale as readers see it: at most three significant digits, for example "0.25". */

@@ -54,13 +54,14 @@ final class RegionLayers {
         // GeoJSON edges are straight in lon/lat (RFC 7946, section 3.1.1), and so are the drawn ones: the area
         // is measured exactly along them (LonLatArea), not along geodesics between the vertices. Each region
         // is densified and measured alone, in parallel; the lists keep the input order.
-        List<Region> densified = valid.parallelStream().map(region -> new Region(region.key(), region.name(),
+        List<Region> densified = valid.parallelStream().map(region -> region.withLonLat(
                 LonLatDensifier.densify(region.lonLat(), LonLatDensifier.MAX_STEP_DEG))).toList();
         double[] areasKm2 = densified.parallelStream().mapToDouble(region -> LonLatArea.areaKm2(region.lonLat())).toArray();
         Map<String, Double> areas = new LinkedHashMap<>();
         for (int i = 0; i < densified.size(); i++) {
             areas.put(densified.get(i).key(), areasKm2[i]);
         }
-        return new GeometryCodec.LayerWithFindings(new RegionLayer(sourceId, spec.file(), densified, areas), findings.list());
+        return new GeometryCodec.LayerWithFindings(new RegionLayer(sourceId, spec.file(), densified, areas,
+                DroppedRegions.why(read.regions(), valid, findings.list())), findings.list());
     }
 }

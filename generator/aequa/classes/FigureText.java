@@ -2,19 +2,15 @@ package aequa.classes;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;
-import java.text.DecimalFormat;
-import java.text.DecimalFormatSymbols;
 import java.util.List;
-import java.util.Locale;
 
 /**
- * How a map's figures are written for readers, one policy for the legend, tooltips, tables, the text
- * alternative and the print files: class limits with the fewest decimals that write every limit of the map
- * exactly (limits are already rounded for readers, {@link ReadableBreaks}), the same count for all of them;
- * figures with one decimal more, so a reader can place a figure within its class, and no trailing zeros (a
- * count stays "75", not "75.0"; {@link #figure}). Thousands are grouped
- * with a comma, the decimal mark is a point and negatives take a true minus sign, whatever the machine's
- * locale. Downloads (CSV, report.json) keep full precision.
+ * How many decimals a map's figures are written with, one precision policy for the legend, tooltips, tables,
+ * the text alternative and the print files: class limits with the fewest decimals that write every limit of
+ * the map exactly (limits are already rounded for readers, {@link ReadableBreaks}), the same count for all of
+ * them; figures with one decimal more, so a reader can place a figure within its class, and no trailing zeros
+ * (a count stays "75", not "75.0"). The marks, grouping and digits are the language's (aequa.wording's
+ * NumberWriter). Downloads (CSV, report.json) keep full precision.
  */
 public final class FigureText {
 
@@ -41,41 +37,44 @@ public final class FigureText {
         return Math.min(MAX_DECIMALS, limitDecimals(limits) + 1);
     }
 
-    /** A mapped figure: rounded to {@link #valueDecimals} of the map's limits, trailing zeros dropped. */
-    public static String figure(double value, List<Double> limits) {
-        if (!Double.isFinite(value)) {
-            return format(value, 0);
+    /**
+     * The fewest decimals (at most 4) that write every value of {@code values} exactly and keep neighbouring
+     * values distinct, for limits drawn along a bar (the histogram and gradient legends, the circle key);
+     * legend limits are already rounded for readers. Values that are not finite are skipped.
+     */
+    public static int distinctDecimals(List<Double> values) {
+        for (int d = 0; d < 4; d++) {
+            boolean enough = true;
+            BigDecimal previous = null;
+            for (double v : values) {
+                if (!Double.isFinite(v)) {
+                    continue;
+                }
+                BigDecimal exact = BigDecimal.valueOf(v);
+                BigDecimal rounded = exact.setScale(d, RoundingMode.HALF_EVEN);
+                if (rounded.compareTo(exact) != 0 || (previous != null && rounded.compareTo(previous) == 0)) {
+                    enough = false;
+                    break;
+                }
+                previous = rounded;
+            }
+            if (enough) {
+                return d;
+            }
         }
-        int decimals = valueDecimals(limits);
-        int exact = Math.max(0, BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_EVEN).stripTrailingZeros().scale());
-        return format(value, Math.min(decimals, exact));
+        return 4;
     }
 
     /**
-     * The range of class {@code i} in words, as every key of a map says it (the drawn legend, the page's key,
-     * the text alternative): "1 to under 2" for every class but the last, which holds its upper limit too
-     * ("9 to 10"), following {@link Classification#classOf}: a value equal to a break is in the upper class.
-     * Limits with {@link #limitDecimals}.
+     * The decimals of one mapped figure: {@link #valueDecimals} of the map's limits, fewer when the figure
+     * rounded to them ends in zeros (75.0 is written 75); 0 for a value that is not finite.
      */
-    public static String classRange(List<Double> limits, int i) {
-        int decimals = limitDecimals(limits);
-        boolean last = i == limits.size() - 2;
-        return format(limits.get(i), decimals) + (last ? " to " : " to under ") + format(limits.get(i + 1), decimals);
-    }
-
-    /** {@code value} with exactly {@code decimals} decimals, e.g. {@code 12,345.6}; NaN and infinities as "–". */
-    public static String format(double value, int decimals) {
+    public static int figureDecimals(double value, List<Double> limits) {
         if (!Double.isFinite(value)) {
-            return "\u2013";
+            return 0;
         }
-        DecimalFormat format = new DecimalFormat("#,##0", DecimalFormatSymbols.getInstance(Locale.ROOT));
-        format.setMinimumFractionDigits(decimals);
-        format.setMaximumFractionDigits(decimals);
-        format.setRoundingMode(RoundingMode.HALF_EVEN);
-        String text = format.format(value);
-        if (text.matches("-0(\\.0*)?")) {
-            text = text.substring(1); // a negative that rounds to zero is zero
-        }
-        return text.startsWith("-") ? "\u2212" + text.substring(1) : text;
+        int decimals = valueDecimals(limits);
+        int exact = Math.max(0, BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_EVEN).stripTrailingZeros().scale());
+        return Math.min(decimals, exact);
     }
 }

@@ -63,7 +63,8 @@ final class ExplainCommand implements Callable<Integer> {
             err.println("aequa: " + file + " holds no usable regions, so there is no extent to fit a projection to.");
             return ExitCode.DATA_PROBLEMS.code;
         }
-        List<PartPlan> parts = PartsReport.plan(regions, findings);
+        PartsReport.Parts report = PartsReport.plan(source.file(), regions, findings);
+        List<PartPlan> parts = report.plans();
         // one part is the whole extent with the automatic request: its choice is the one asked for here
         ProjectionChoice choice = parts.size() == 1 ? parts.get(0).choice()
                 : ProjectionChooser.choose(Footprint.of(regions.stream().map(Region::lonLat).toList()),
@@ -72,18 +73,18 @@ final class ExplainCommand implements Callable<Integer> {
         if (json) {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
             Map<String, Object> root = ChoiceReport.json(file.toString(), regions.size(), choice);
-            root.put("parts", PartsReport.json(parts));
+            root.put("parts", PartsReport.json(report));
             out.println(mapper.writeValueAsString(root));
         } else {
             if (parts.size() > 1) {
                 // what publish draws comes first: the composite map; then the single projection insets: off would use
                 out.println(file + " is drawn as a composite map:");
-                out.print(PartsReport.text(parts));
+                out.print(PartsReport.text(report));
                 out.println("With insets: off, one projection would have to fit the whole extent:");
                 out.print(ChoiceReport.text(file.toString(), regions.size(), choice));
             } else {
                 out.print(ChoiceReport.text(file.toString(), regions.size(), choice));
-                out.print(PartsReport.text(parts));
+                out.print(PartsReport.text(report));
             }
         }
         return findings.hasErrors() ? ExitCode.DATA_PROBLEMS.code : ExitCode.OK.code;

@@ -1,40 +1,70 @@
 package aequa.cli;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
+import aequa.atlas.MapPart;
+import aequa.atlas.PartPlacement;
 import aequa.composite.CompositePlanner;
 import aequa.composite.PartPlan;
 import aequa.ellipsoid.LonLatArea;
 import aequa.ellipsoid.LonLatDensifier;
 import aequa.findings.Findings;
 import aequa.inputs.regions.Region;
+import aequa.project.ChecksSpec;
 import aequa.project.InsetsSpec;
 import aequa.projection.ProjectionRequest;
 
 /**
  * The parts {@code explain} reports: what a map of a file's regions is drawn in with the default
- * {@code insets: auto}, each part's regions, gap to the main part and projection, for a person or a script.
+ * {@code insets: auto}, each part's regions, gap to the main part, projection and placement (the quarter of the
+ * main map its frame sits in, and its frame on the main part's plane), for a person or a script.
  */
 final class PartsReport {
 
     private PartsReport() {
     }
 
-    /** The automatic parts of {@code regions} (one part when nothing lies apart). */
-    static List<PartPlan> plan(List<Region> regions, Findings findings) {
-        Map<String, Double> areas = new LinkedHashMap<>();
-        for (Region r : regions) {
-            // measured as the load step measures regions (RegionLayers): exactly along the lon/lat edges
-            areas.put(r.key(), LonLatArea.areaKm2(LonLatDensifier.densify(r.lonLat(), LonLatDensifier.MAX_STEP_DEG)));
-        }
-        return CompositePlanner.plan(regions, areas, InsetsSpec.AUTO, ProjectionRequest.automatic(),
-                new CompositePlanner.SettingPlace(pointer -> "", "/insets"), findings);
+    /** The planned parts, and (for a composite map) where the layout puts each one's frame. */
+    record Parts(List<PartPlan> plans, List<MapPart> placed) {
     }
 
-    static String text(List<PartPlan> parts) {
+    /** The automatic parts of {@code regions} (one part when nothing lies apart), placed as publish places them. */
+    static Parts plan(String file, List<Region> regions, Findings findings) {
+        Map<String, Double> areas = new LinkedHashMap<>();
+        List<Region> densified = new ArrayList<>(regions.size());
+        for (Region r : regions) {
+            // densified and measured as the load step does (RegionLayers): exactly along the lon/lat edges
+            Region fine = r.withLonLat(LonLatDensifier.densify(r.lonLat(), LonLatDensifier.MAX_STEP_DEG));
+            densified.add(fine);
+            areas.put(r.key(), LonLatArea.areaKm2(fine.lonLat()));
+        }
+        List<PartPlan> plans = CompositePlanner.plan(regions, areas, InsetsSpec.AUTO, ProjectionRequest.automatic(),
+                new CompositePlanner.SettingPlace(pointer -> "", "/insets"), findings);
+        List<MapPart> placed = plans.size() <= 1 ? List.of()
+                : PartPlacement.place(file, densified, areas, plans, ChecksSpec.DEFAULT_AREA_TOLERANCE);
+        return new Parts(plans, placed);
+    }
+
+    /**
+     * Where a framed part sits against the main map, in words: the quarter its frame's centre lies in, and
+     * whether the frame lies inside the main map's box (in an empty corner of it) or beside it.
+     */
+    static String placement(MapPart part, MapPart main) {
+        MapPart.Frame f = part.frame();
+        MapPart.Frame m = main.frame();
+        double x = (f.minXM() + f.maxXM()) / 2;
+        double y = (f.minYM() + f.maxYM()) / 2;
+        String corner = (y >= (m.minYM() + m.maxYM()) / 2 ? "top" : "bottom") + "-" + (x < (m.minXM() + m.maxXM()) / 2 ? "left" : "right");
+        boolean inside = f.minXM() >= m.minXM() && f.maxXM() <= m.maxXM() && f.minYM() >= m.minYM() && f.maxYM() <= m.maxYM();
+        return corner + (inside ? ", inside the main map's box" : ", beside the main map");
+    }
+
+    static String text(Parts report) {
+        List<PartPlan> parts = report.plans();
         if (parts.size() <= 1) {
             return "  Parts: one map; no regions lie far enough apart to be framed (insets: auto).\n";
         }
@@ -48,11 +78,18 @@ final class PartsReport {
             s.append(String.format(Locale.ROOT, "      %s (%s): omega largest %.2f deg, mean %.2f deg%n",
                     p.choice().projection().family().displayName(), ChoiceReport.parameters(p.choice().projection().parameters()),
                     p.choice().omegaMaxDeg(), p.choice().omegaMeanDeg()));
+            if (!p.main() && parts.indexOf(p) < report.placed().size()) {
+                MapPart placed = report.placed().get(parts.indexOf(p));
+                MapPart.Frame f = placed.frame();
+                s.append(String.format(Locale.ROOT, "      placed %s; frame %,.0f x %,.0f km%n",
+                        placement(placed, report.placed().get(0)), (f.maxXM() - f.minXM()) / 1000, (f.maxYM() - f.minYM()) / 1000));
+            }
         }
         return s.toString();
     }
 
-    static List<Map<String, Object>> json(List<PartPlan> parts) {
+    static List<Map<String, Object>> json(Parts report) {
+        List<PartPlan> parts = report.plans();
         return parts.stream().map(p -> {
             Map<String, Object> part = new LinkedHashMap<>();
             part.put("id", p.id());
@@ -68,6 +105,19 @@ final class PartsReport {
             part.put("omegaMeanDeg", p.choice().omegaMeanDeg());
             part.put("wkt2", p.choice().projection().wkt2());
             part.put("projString", p.choice().projection().projString());
+            int index = parts.indexOf(p);
+            if (index < report.placed().size()) {
+                MapPart placed = report.placed().get(index);
+                MapPart.Frame f = placed.frame();
+                Map<String, Object> placement = new LinkedHashMap<>();
+                if (!p.main()) {
+                    String words = placement(placed, report.placed().get(0));
+                    placement.put("corner", words.substring(0, words.indexOf(',')));
+                    placement.put("insideMainBox", words.contains("inside"));
+                }
+                placement.put("frameM", List.of(f.minXM(), f.minYM(), f.maxXM(), f.maxYM()));
+                part.put("placement", placement);
+            }
             return part;
         }).toList();
     }

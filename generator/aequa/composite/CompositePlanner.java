@@ -90,29 +90,42 @@ public final class CompositePlanner {
             Footprint footprint = Footprint.of(members.stream().map(Region::lonLat).toList());
             ProjectionChoice choice = chooser.choose(g.keys, footprint, i == 0 ? request : ProjectionRequest.automatic());
             String name = !g.name.isEmpty() ? g.name : i == 0 ? "Main map"
-                    : defaultName(members, areaKm2ByKey, g.gapKm, parts.get(0).footprint(), footprint);
+                    : defaultName(members, regions, areaKm2ByKey, g.gapKm, parts.get(0).footprint(), footprint);
             parts.add(new PartPlan(i == 0 ? "main" : "part-" + i, name, g.keys, i == 0, g.areaScale, g.corner,
                     area.apply(g.keys), g.gapKm, footprint, choice));
         }
         return parts;
     }
 
-    /** Up to this many region names make a part's default name; a larger part is named by where it lies. */
+    /** Up to this many region names, or values of a shared property, make a part's default name. */
     static final int NAMED_REGIONS = 2;
 
     private static final String[] COMPASS = {"north", "north-east", "east", "south-east", "south", "south-west", "west", "north-west"};
 
     /**
-     * A detached part's default name: its regions' names when it has at most {@value #NAMED_REGIONS} (largest
-     * first), else how many regions it holds and where it lies from the main part, for example "29 regions,
-     * 820 km north-west" (the gap, and the compass point of the geodesic from the main part's centre).
+     * A detached part's default name, from the regions' own names where the data has them: the values of the
+     * property that best describes the part (one that every region of the part has, written with letters, not
+     * the same for the whole map, taking at most {@value #NAMED_REGIONS} values in the part; the fewest values
+     * win), for example "Alaska" from the counties' {@code state}; else its regions' names when it has at most
+     * {@value #NAMED_REGIONS}; else the largest region's name and how many more it holds ("Juneau and 28
+     * more"); and only when the regions have no names (their keys stand in), where it lies: "29 regions, 820 km
+     * north-west" (the gap, and the compass point of the geodesic from the main part's centre). Names are
+     * listed largest area first.
      */
-    static String defaultName(List<Region> members, Map<String, Double> areaKm2ByKey, double gapKm, Footprint main,
-                              Footprint part) {
+    static String defaultName(List<Region> members, List<Region> all, Map<String, Double> areaKm2ByKey, double gapKm,
+                              Footprint main, Footprint part) {
         List<Region> largestFirst = members.stream().sorted(Comparator.comparingDouble((Region r) -> -areaKm2ByKey.get(r.key()))
                 .thenComparing(Region::key)).toList();
+        List<String> shared = SharedProperty.values(largestFirst, all, NAMED_REGIONS);
+        if (!shared.isEmpty()) {
+            return String.join(" and ", shared);
+        }
         if (members.size() <= NAMED_REGIONS) {
             return String.join(" and ", largestFirst.stream().map(Region::name).toList());
+        }
+        Region largest = largestFirst.get(0);
+        if (!largest.name().equals(largest.key())) {
+            return String.format(Locale.ROOT, "%s and %,d more", largest.name(), members.size() - 1);
         }
         double azimuth = GeodesicDistance.azimuthDeg(main.sphericalCentreLonDeg(), main.sphericalCentreLatDeg(),
                 part.sphericalCentreLonDeg(), part.sphericalCentreLatDeg());

@@ -13,7 +13,10 @@ import org.locationtech.jts.index.strtree.STRtree;
 /**
  * Places the framed parts of a composite map around its main part, on the main part's plane (metres).
  *
- * <p>Each part's frame holds its regions with a margin, and a band at the top for its name. Parts are placed
+ * <p>Each part's frame holds its regions with a margin, and a band at the top for its name: one line, or two
+ * when the name is wider than the regions and than {@value #NAME_WRAP_SHARE} of the main part's larger side
+ * (then the frame is as wide as the longer half of the name, not the whole). A part drawn at another area
+ * scale than the main part also has a band at the bottom for its own area-scale square. Parts are placed
  * one by one, largest first. The candidate places for a frame line it up with an edge of the main part's
  * extent, of the map so far, or of a frame already placed, inside or just outside them; a place is allowed
  * when the frame, grown by a gap, touches no region of the main part and no other frame. Among the allowed
@@ -29,6 +32,15 @@ public final class PartLayout {
     static final double MARGIN_SHARE = 0.012;
     static final double GAP_SHARE = 0.02;
     static final double NAME_BAND_SHARE = 0.04;
+    /** A name wider than this share of the main part's larger side (and than its regions) takes two lines (by eye). */
+    static final double NAME_WRAP_SHARE = 0.3;
+    /** The name band of a two-line name, in name bands, and the width of its longer line, in names (by eye: words break unevenly). */
+    static final double TWO_LINE_BAND = 1.7;
+    public static final double TWO_LINE_WIDTH = 0.6;
+    /** The area-scale band of a part at its own area scale, as a share of the main part's larger side (by eye). */
+    static final double SCALE_BAND_SHARE = 0.05;
+    /** Characters of the widest area-scale label ("5,000,000 km²"), for the frame's least width. */
+    private static final int SCALE_LABEL_CHARS = 13;
     /** The drawing's tallest map block relative to its width (drawing's Layout.MAX_MAP_ASPECT). */
     static final double MAX_ASPECT = 1.25;
     /** Trials of the slide towards the centre: halving steps down to 1/2^12 of the way. */
@@ -41,17 +53,28 @@ public final class PartLayout {
      *
      * @param contentM    the envelope of its regions on its own plane, metres (after its area scale)
      * @param nameWidthM  how wide its name is, in the same metres, when drawn in the name band
+     * @param twoLineWidthM how wide its longer line is when the name takes two lines
      * @param corner      {@code top-left}, {@code top-right}, {@code bottom-left}, {@code bottom-right} or empty
+     * @param ownScale    whether the part is drawn at another area scale than the main part (it then gets an
+     *                    area-scale band)
      */
-    public record Inset(Envelope contentM, double nameWidthM, String corner) {
+    public record Inset(Envelope contentM, double nameWidthM, double twoLineWidthM, String corner, boolean ownScale) {
+
+        /** A part whose name breaks where the drawing finds room: its longer line is taken as {@value #TWO_LINE_WIDTH} of it. */
+        public Inset(Envelope contentM, double nameWidthM, String corner, boolean ownScale) {
+            this(contentM, nameWidthM, TWO_LINE_WIDTH * nameWidthM, corner, ownScale);
+        }
     }
 
     /**
      * Where a part goes: add ({@code dxM}, {@code dyM}) to its coordinates to draw it in {@code frameM}.
      *
-     * @param nameBandM the height of the name band at the top of the frame
+     * @param nameBandM  the height of the name band at the top of the frame
+     * @param nameLines  how many lines the name band holds (1 or 2)
+     * @param scaleBandM the height of the area-scale band at the bottom of the frame (0 when the part is at the
+     *                   main part's area scale)
      */
-    public record Placement(double dxM, double dyM, Envelope frameM, double nameBandM) {
+    public record Placement(double dxM, double dyM, Envelope frameM, double nameBandM, int nameLines, double scaleBandM) {
     }
 
     private PartLayout() {
@@ -84,20 +107,29 @@ public final class PartLayout {
         List<Placement> placements = new ArrayList<>();
         for (Inset inset : insets) {
             Envelope c = inset.contentM();
-            double w = Math.max(c.getWidth() + 2 * margin, inset.nameWidthM() + 2 * margin);
-            double h = c.getHeight() + 2 * margin + band;
+            double contentW = c.getWidth() + 2 * margin;
+            boolean twoLines = inset.nameWidthM() + 2 * margin > Math.max(contentW, NAME_WRAP_SHARE * side);
+            double nameW = (twoLines ? inset.twoLineWidthM() : inset.nameWidthM()) + 2 * margin;
+            double nameBand = twoLines ? TWO_LINE_BAND * band : band;
+            double scaleBand = inset.ownScale() ? SCALE_BAND_SHARE * side : 0;
+            double scaleW = inset.ownScale() ? scaleBand + SCALE_LABEL_CHARS * NAME_CHAR_SHARE * band + 2 * margin : 0;
+            double w = Math.max(contentW, Math.max(nameW, scaleW));
+            double h = c.getHeight() + 2 * margin + nameBand + scaleBand;
             Envelope best = best(candidates(main, whole, frames, w, h, gap), inset.corner(), main, whole, index, frames, gap);
-            best = slide(best, main, index, frames, gap);
+            best = slide(best, inset.corner(), main, index, frames, gap);
             frames.add(best);
             whole.expandToInclude(best);
             double dx = best.getMinX() + (best.getWidth() - c.getWidth()) / 2 - c.getMinX();
-            double dy = best.getMinY() + margin - c.getMinY();
-            placements.add(new Placement(dx, dy, best, band));
+            double dy = best.getMinY() + scaleBand + margin - c.getMinY();
+            placements.add(new Placement(dx, dy, best, nameBand, twoLines ? 2 : 1, scaleBand));
         }
         return placements;
     }
 
-    private static List<Envelope> candidates(Envelope main, Envelope whole, List<Envelope> frames, double w, double h, double gap) {
+    private static List<Envelope> candidates(Envelope main, Envelope whole, List<Envelope> frames, double w, double h,
+                                             double minGap) {
+        // places outside keep a hair more than the gap, so a region that runs straight along the map's edge is not touched
+        double gap = minGap * (1 + 1e-6);
         List<Double> xs = new ArrayList<>(List.of(main.getMinX(), main.getMaxX() - w, whole.getMinX(), whole.getMaxX() - w,
                 whole.getMinX() - gap - w, whole.getMaxX() + gap));
         List<Double> ys = new ArrayList<>(List.of(main.getMinY(), main.getMaxY() - h, whole.getMinY(), whole.getMaxY() - h,
@@ -163,6 +195,15 @@ public final class PartLayout {
         };
     }
 
+    /** Whether the whole frame lies in the corner's quarter of the main part (not only its centre). */
+    private static boolean wholly(Envelope f, String corner, Envelope main) {
+        Envelope quarter = new Envelope(corner.endsWith("left") ? Double.NEGATIVE_INFINITY : main.centre().x,
+                corner.endsWith("left") ? main.centre().x : Double.POSITIVE_INFINITY,
+                corner.startsWith("bottom") ? Double.NEGATIVE_INFINITY : main.centre().y,
+                corner.startsWith("bottom") ? main.centre().y : Double.POSITIVE_INFINITY);
+        return quarter.contains(f);
+    }
+
     private static boolean allowed(Envelope frame, STRtree index, List<Envelope> frames, double gap) {
         Envelope grown = new Envelope(frame);
         grown.expandBy(gap);
@@ -183,8 +224,12 @@ public final class PartLayout {
         return true;
     }
 
-    /** Slides the frame towards the main part's centre, along x then y, as far as it stays allowed. */
-    private static Envelope slide(Envelope frame, Envelope main, STRtree index, List<Envelope> frames, double gap) {
+    /**
+     * Slides the frame towards the main part's centre, along x then y, as far as it stays allowed and, when a
+     * corner was asked for and the frame lies wholly in that quarter, as far as it stays wholly there.
+     */
+    private static Envelope slide(Envelope frame, String corner, Envelope main, STRtree index, List<Envelope> frames, double gap) {
+        boolean keepQuarter = !corner.isEmpty() && wholly(frame, corner, main);
         Envelope current = frame;
         for (int axis = 0; axis < 2; axis++) {
             double towards = axis == 0 ? main.centre().x - current.centre().x : main.centre().y - current.centre().y;
@@ -192,7 +237,7 @@ public final class PartLayout {
             for (int step = 1; step <= SLIDE_STEPS; step++) {
                 double trial = moved + towards / (1 << step);
                 Envelope shifted = shift(current, axis == 0 ? trial : 0, axis == 0 ? 0 : trial);
-                if (allowed(shifted, index, frames, gap)) {
+                if (allowed(shifted, index, frames, gap) && (!keepQuarter || wholly(shifted, corner, main))) {
                     moved = trial;
                 }
             }

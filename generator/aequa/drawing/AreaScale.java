@@ -1,5 +1,7 @@
 package aequa.drawing;
 
+import aequa.wording.NumberWriter;
+
 /**
  * The area scale of an equal-area map: a square whose area on the ground is a round number of km2. On an
  * equal-area projection drawn at one uniform page scale s (page units per metre), every region's page area
@@ -26,9 +28,9 @@ public record AreaScale(double areaKm2, double sideU) {
         return new AreaScale(areaKm2, Math.sqrt(areaKm2 * 1e6) * scaleUnitsPerM);
     }
 
-    /** {@code "10,000 km²"}, with decimals only below 1 km2. */
-    public String label() {
+    /** {@code "10,000 km²"} in the language of {@code numbers}, with decimals only below 1 km2. */
+    public String label(NumberWriter numbers) {
         int decimals = areaKm2 >= 1 ? 0 : (int) Math.ceil(-Math.log10(areaKm2) - 1e-9);
-        return Numbers.format(areaKm2, decimals) + " km\u00b2";
+        return numbers.areaKm2(areaKm2, decimals);
     }
 }

@@ -4,7 +4,9 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Graphics2D;
 import java.awt.Shape;
+import java.awt.font.TextLayout;
 import java.awt.geom.AffineTransform;
+import java.text.Bidi;
 import java.util.ArrayDeque;
 import java.util.Deque;
 import java.util.HashSet;
@@ -41,6 +43,8 @@ final class Canvas {
      * @param g    the target, already transformed so that one user unit is one page unit
      * @param type measures type and supplies fonts
      */
+    private boolean rightToLeft;
+
     Canvas(Graphics2D g, Typesetter type) {
         this.g = g;
         this.svg = g instanceof SVGGraphics2D ? (SVGGraphics2D) g : null;
@@ -144,9 +148,61 @@ final class Canvas {
         g.scale(1.0 / Typesetter.TEXT_SCALE, 1.0 / Typesetter.TEXT_SCALE);
         g.setFont(font);
         g.setColor(awt(colour, 1.0));
-        g.drawString(xmlSafe(text), (float) (startX * Typesetter.TEXT_SCALE), (float) (yU * Typesetter.TEXT_SCALE));
+        String line = directed(xmlSafe(text));
+        float x = (float) (startX * Typesetter.TEXT_SCALE);
+        float y = (float) (yU * Typesetter.TEXT_SCALE);
+        if (!line.isEmpty() && !(g instanceof SVGGraphics2D)
+                && Bidi.requiresBidi(line.toCharArray(), 0, line.length())) {
+            // PDF outlines come from glyph vectors, which neither reorder nor join letters: TextLayout does both
+            new TextLayout(line, font, g.getFontRenderContext()).draw(g, x, y);
+        } else {
+            g.drawString(line, x, y);
+        }
         g.setTransform(saved);
         inventory.text(new Inventory.TextMark(text, font.getSize() / (type.unitsPerPt() * Typesetter.TEXT_SCALE), colour, background, layer()));
+    }
+
+    /**
+     * A line whose first strong letter is right-to-left (Arabic, Hebrew) wrapped in a right-to-left embedding
+     * (U+202B ... U+202C, Unicode Bidirectional Algorithm, UAX #9, section 2.1): its words and numbers are
+     * ordered right to left as one block, which still starts at the line's left edge, so the layout's anchors
+     * hold in SVG (where the browser orders and shapes the text), PNG and PDF alike. Other lines are unchanged
+     * (the HTML dir="auto" rule, extended by {@link #runsRightToLeft}).
+     */
+    String directed(String text) {
+        return runsRightToLeft(text) ? "\u202b" + text + "\u202c" : text;
+    }
+
+    /**
+     * Whether a line is set right to left: its first strong letter is right-to-left, or the drawing is in a
+     * right-to-left language and the line holds any right-to-left letter (a legend heading that starts with
+     * the author's English unit and ends in Arabic words reads from the right).
+     */
+    boolean runsRightToLeft(String text) {
+        if (rightToLeft && text.codePoints().anyMatch(Canvas::strongRightToLeft)) {
+            return true;
+        }
+        for (int i = 0; i < text.length(); ) {
+            int cp = text.codePointAt(i);
+            if (Character.getDirectionality(cp) == Character.DIRECTIONALITY_LEFT_TO_RIGHT) {
+                return false;
+            }
+            if (strongRightToLeft(cp)) {
+                return true;
+            }
+            i += Character.charCount(cp);
+        }
+        return false;
+    }
+
+    /** Marks the drawing as one in a right-to-left language (see {@link #runsRightToLeft}). */
+    void rightToLeft(boolean on) {
+        this.rightToLeft = on;
+    }
+
+    private static boolean strongRightToLeft(int cp) {
+        byte direction = Character.getDirectionality(cp);
+        return direction == Character.DIRECTIONALITY_RIGHT_TO_LEFT || direction == Character.DIRECTIONALITY_RIGHT_TO_LEFT_ARABIC;
     }
 
     /** Replaces characters XML 1.0 does not allow (C0 controls other than tab, line feed, return) by spaces. */

@@ -6,50 +6,50 @@ import java.util.List;
 import aequa.atlas.MapModel;
 import aequa.projection.DistortionSpread;
 import aequa.projection.ProjectionChoice;
-import aequa.projection.ProjectionParameter;
+import aequa.wording.NumberWriter;
+import aequa.wording.ProjectionWords;
+import aequa.wording.Wording;
 
 /**
  * The words under the map. The caption states the projection and its parameters, the datum, the angular
  * distortion (Tissot's omega, the largest angular deformation at a point) over the data, the area check and
  * the area scale; the credits state the source and the date of the figures, then the author's notes. Findings
  * of the checks (join warnings, dropped islands) are for the author, never printed in the graphic: they go to
- * the terminal, report.json and the method page.
+ * the terminal, report.json and the method page. Every word and number is in the drawing's language.
  */
 final class Caption {
+
+    /** Below this an area difference is written as "below 0.0001 %": the audit's own precision. */
+    private static final double SMALLEST_PERCENT = 1e-4;
 
     private Caption() {
     }
 
     /** One paragraph; the area scale sentence is included when {@code scale} is not null. */
-    static String caption(MapModel model, AreaScale scale) {
+    static String caption(MapModel model, AreaScale scale, Wording w) {
         ProjectionChoice choice = model.projection();
-        StringBuilder text = new StringBuilder();
-        text.append(choice.projection().family().displayName()).append(" projection");
-        List<String> parameters = new ArrayList<>();
-        for (ProjectionParameter p : choice.projection().parameters()) {
-            parameters.add(p.name() + " " + parameterValue(p));
-        }
-        if (!parameters.isEmpty()) {
-            text.append(" (").append(String.join(", ", parameters)).append(')');
-        }
-        text.append(", datum WGS 84. ");
-        distortion(choice, text);
+        NumberWriter numbers = w.numbers();
+        List<String> sentences = new ArrayList<>();
+        sentences.add(w.sentence(w.text("draw.caption", "projection", ProjectionWords.projection(choice, w))));
+        sentences.add(distortion(choice, w));
         if (model.composite()) {
-            text.append(' ').append(PartSentences.parts(model));
+            sentences.add(PartSentences.parts(model, w));
         }
         if (model.areaAudit() != null) {
             double percent = model.areaAudit().maxRelativeError() * 100;
             // "true" only for a passed audit: every region drawn whole and within the tolerance
-            text.append(model.areaAudit().passed() ? " Areas are true: largest difference from the ellipsoid "
-                            : " Areas are not true: largest difference from the ellipsoid ")
-                    .append(percent < 1e-4 ? "below 0.0001" : Numbers.trim(percent, 4)).append(" %.");
+            boolean passed = model.areaAudit().passed();
+            if (percent < SMALLEST_PERCENT) {
+                sentences.add(w.text(passed ? "draw.areasTrueBelow" : "draw.areasNotTrueBelow", "error",
+                        numbers.percent(SMALLEST_PERCENT, 4)));
+            } else {
+                sentences.add(w.text(passed ? "draw.areasTrue" : "draw.areasNotTrue", "error", numbers.percent(percent, 4)));
+            }
         }
         if (scale != null) {
-            text.append(" The square shows ").append(scale.label())
-                    .append(model.mixedAreaScales() ? " anywhere on the main map and in every part drawn at its scale" : " anywhere on the map")
-                    .append("; distances are not to scale.");
+            sentences.add(w.text(model.mixedAreaScales() ? "draw.squareShowsParts" : "draw.squareShows", "area", scale.label(numbers)));
         }
-        return text.toString();
+        return String.join(" ", sentences);
     }
 
     /**
@@ -57,44 +57,36 @@ final class Caption {
      * its largest omega always sits on the pole lines and says little about the rest (issue #16); a regional
      * map gives the largest, where it sits, and the mean.
      */
-    private static void distortion(ProjectionChoice choice, StringBuilder text) {
+    private static String distortion(ProjectionChoice choice, Wording w) {
+        NumberWriter numbers = w.numbers();
         DistortionSpread spread = choice.spread();
+        String max = numbers.degrees(choice.omegaMaxDeg(), 1);
+        String mean = numbers.degrees(choice.omegaMeanDeg(), 1);
         if (choice.projection().family().world() && Double.isFinite(spread.shareBelow10Deg())) {
-            text.append("Angular distortion \u03c9: mean ").append(Numbers.trim(choice.omegaMeanDeg(), 1))
-                    .append("\u00b0; below 10\u00b0 over ").append(Numbers.trim(100 * spread.shareBelow10Deg(), 0))
-                    .append(" % of the mapped area, below 5\u00b0 over ").append(Numbers.trim(100 * spread.shareBelow5Deg(), 0))
-                    .append(" %; largest, ").append(Numbers.trim(choice.omegaMaxDeg(), 1)).append("\u00b0, ")
-                    .append(spread.worstPlace()).append('.');
-            return;
+            return w.text("draw.omegaWorld", "mean", mean, "share10", numbers.percent(100 * spread.shareBelow10Deg(), 0),
+                    "share5", numbers.percent(100 * spread.shareBelow5Deg(), 0), "max", max,
+                    "place", ProjectionWords.place(spread.worstPlace(), w));
         }
-        text.append("Angular distortion \u03c9 up to ").append(Numbers.trim(choice.omegaMaxDeg(), 1)).append('\u00b0');
-        if (!spread.worstPlace().isEmpty()) {
-            text.append(" (").append(spread.worstPlace()).append(')');
-        } else if (Math.abs(choice.worstLatDeg()) >= 89.9) {
-            text.append(" (at the ").append(choice.worstLatDeg() > 0 ? "North" : "South").append(" Pole)");
+        String place = spread.worstPlace();
+        if (place.isEmpty() && Math.abs(choice.worstLatDeg()) >= 89.9) {
+            place = choice.worstLatDeg() > 0 ? "at the North Pole" : "at the South Pole";
         }
-        text.append(", mean ").append(Numbers.trim(choice.omegaMeanDeg(), 1)).append("\u00b0.");
+        return place.isEmpty() ? w.text("draw.omegaUpTo", "max", max, "mean", mean)
+                : w.text("draw.omegaUpToAt", "max", max, "mean", mean, "place", ProjectionWords.place(place, w));
     }
 
     /** Source, date of the figures, then the map's notes, as one paragraph. */
-    static String credits(MapModel model) {
+    static String credits(MapModel model, Wording w) {
         List<String> parts = new ArrayList<>();
         if (!model.spec().source().isBlank()) {
-            parts.add("Source: " + model.spec().source().strip() + ".");
+            parts.add(w.text("draw.source", "source", model.spec().source().strip()));
         }
         if (!model.spec().asOf().isBlank()) {
-            parts.add("Figures: " + model.spec().asOf().strip() + ".");
+            parts.add(w.text("draw.figures", "date", w.numbers().period(model.spec().asOf().strip())));
         }
         if (!model.spec().notes().isBlank()) {
             parts.add(model.spec().notes().strip());
         }
         return String.join(" ", parts);
-    }
-
-    private static String parameterValue(ProjectionParameter p) {
-        if (p.unit().equals("deg")) {
-            return Numbers.trim(p.value(), 4) + "\u00b0";
-        }
-        return Numbers.trim(p.value(), 2) + " " + p.unit();
     }
 }

@@ -5,42 +5,43 @@ import java.util.List;
 import aequa.atlas.MapModel;
 import aequa.project.ClassMethod;
 import aequa.project.MapDisplay;
+import aequa.wording.ProjectionWords;
+import aequa.wording.Wording;
 
-/** The text alternative of a map: what it shows, how many regions, classes and periods, which projection. */
+/**
+ * The text alternative of a map, in the drawing's language: what it shows, how many regions, classes and
+ * periods, which projection.
+ */
 final class Descriptions {
 
     private Descriptions() {
     }
 
-    static String of(MapModel model) {
+    static String of(MapModel model, Wording w) {
         boolean circles = model.spec().display() == MapDisplay.CIRCLES;
-        StringBuilder text = new StringBuilder();
-        text.append(circles ? "Proportional-circle map of " : "Choropleth map of ").append(model.spec().title());
+        String text = w.text(circles ? "draw.describeCircles" : "draw.describeChoropleth", "title", model.spec().title());
         if (!model.spec().unit().isBlank()) {
-            text.append(" (").append(model.spec().unit()).append(')');
+            text = w.text("draw.describeUnit", "text", text, "unit", model.spec().unit());
         }
-        text.append(" for ").append(model.regions().size()).append(" regions");
+        text = w.text("draw.describeRegions", "text", text, "count", model.regions().size());
         List<String> periods = model.periods();
         if (periods.size() > 1) {
-            text.append(", one panel per period from ").append(periods.get(0)).append(" to ").append(periods.get(periods.size() - 1));
+            text = w.text("draw.describePanels", "text", text, "first", w.numbers().period(periods.get(0)),
+                    "last", w.numbers().period(periods.get(periods.size() - 1)));
         } else if (periods.size() == 1) {
-            text.append(", ").append(periods.get(0));
+            text = w.text("draw.describePeriod", "text", text, "period", w.numbers().period(periods.get(0)));
         }
         if (!circles) {
-            if (model.classification().method() == ClassMethod.UNCLASSED) {
-                text.append(", unclassed colour scale");
-            } else {
-                text.append(", ").append(model.classification().classCount()).append(" classes (")
-                        .append(model.classification().method().configName()).append(')');
-            }
+            text = model.classification().method() == ClassMethod.UNCLASSED ? w.text("draw.describeUnclassed", "text", text)
+                    : w.text("draw.describeClasses", "text", text, "count", model.classification().classCount(),
+                    "method", model.classification().method().configName());
         }
-        text.append(". ").append(model.projection().projection().family().displayName()).append(" projection");
-        if (model.composite()) {
-            text.append(" for the main map, ").append(model.parts().size() - 1).append(" detached ")
-                    .append(model.parts().size() == 2 ? "part" : "parts").append(" framed on their own projections");
+        String projection = w.sentence(w.text("caption.projection", "family",
+                ProjectionWords.family(model.projection().projection().family(), w)));
+        if (!model.composite()) {
+            return w.text("draw.describeEnd", "text", text, "projection", projection);
         }
-        text.append(model.mixedAreaScales() ? "; areas are true to scale within each part, and parts at another scale say so."
-                : "; areas are true to scale.");
-        return text.toString();
+        return w.text("draw.describeEndParts", "text", text, "projection", projection, "count", model.parts().size() - 1,
+                "mixed", model.mixedAreaScales() ? "yes" : "no");
     }
 }

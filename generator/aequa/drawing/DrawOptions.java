@@ -1,5 +1,7 @@
 package aequa.drawing;
 
+import aequa.wording.Wording;
+
 /**
  * What a drawing shows besides the regions.
  *
@@ -7,8 +9,9 @@ package aequa.drawing;
  * @param labels    label regions where the name fits
  * @param graticule meridians, parallels and the globe's outline
  * @param histogram draw the histogram legend (values spread along the classes) instead of the list legend
+ * @param wording   the language of every word and number drawn (English unless asked)
  */
-public record DrawOptions(boolean title, boolean labels, Graticule graticule, boolean histogram) {
+public record DrawOptions(boolean title, boolean labels, Graticule graticule, boolean histogram, Wording wording) {
 
     /** When to draw meridians, parallels and the projected globe's outline. */
     public enum Graticule {
@@ -20,25 +23,30 @@ public record DrawOptions(boolean title, boolean labels, Graticule graticule, bo
 
     public DrawOptions {
         java.util.Objects.requireNonNull(graticule, "graticule");
+        java.util.Objects.requireNonNull(wording, "wording");
     }
 
     public static DrawOptions print() {
-        return new DrawOptions(true, true, Graticule.AUTO, false);
+        return new DrawOptions(true, true, Graticule.AUTO, false, Wording.english());
     }
 
     public static DrawOptions web() {
-        return new DrawOptions(false, true, Graticule.AUTO, false);
+        return new DrawOptions(false, true, Graticule.AUTO, false, Wording.english());
     }
 
     public DrawOptions withHistogram(boolean on) {
-        return new DrawOptions(title, labels, graticule, on);
+        return new DrawOptions(title, labels, graticule, on, wording);
     }
 
     public DrawOptions withTitle(boolean on) {
-        return new DrawOptions(on, labels, graticule, histogram);
+        return new DrawOptions(on, labels, graticule, histogram, wording);
     }
 
     public DrawOptions withGraticule(Graticule mode) {
-        return new DrawOptions(title, labels, mode, histogram);
+        return new DrawOptions(title, labels, mode, histogram, wording);
+    }
+
+    public DrawOptions inLanguage(Wording other) {
+        return new DrawOptions(title, labels, graticule, histogram, other);
     }
 }

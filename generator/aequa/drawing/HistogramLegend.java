@@ -7,7 +7,9 @@ import java.util.List;
 import aequa.atlas.MapModel;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
+import aequa.classes.FigureText;
 import aequa.colour.Rgb;
+import aequa.wording.NumberWriter;
 
 /**
  * The histogram legend: the class bar drawn to true value scale (each class as wide as its range), with a
@@ -26,7 +28,8 @@ final class HistogramLegend {
         return 3.2 * em + 0.9 * em + 1.7 * em;
     }
 
-    static void paint(Canvas canvas, MapModel model, Theme theme, double x, double y, double widthU, double em) {
+    static void paint(Canvas canvas, MapModel model, Theme theme, double x, double y, double widthU, double em,
+                      NumberWriter numbers) {
         List<Double> limits = model.classification().limits();
         double low = limits.get(0);
         double high = limits.get(limits.size() - 1);
@@ -62,7 +65,7 @@ final class HistogramLegend {
         }
         double barY = y + histogramH + 0.15 * em;
         double barH = 0.75 * em;
-        int decimals = Numbers.decimalsFor(limits);
+        int decimals = FigureText.distinctDecimals(limits);
         double size = theme.typePt().legend();
         Typesetter type = canvas.type();
         double lastLabelEnd = Double.NEGATIVE_INFINITY;
@@ -73,7 +76,7 @@ final class HistogramLegend {
         }
         for (int i = 0; i < limits.size(); i++) {
             double at = x + (limits.get(i) - low) / span * widthU;
-            String label = Numbers.format(limits.get(i), decimals);
+            String label = numbers.fixed(limits.get(i), decimals);
             double w = type.width(label, size, false);
             double start = Math.max(x, Math.min(x + widthU - w, at - w / 2));
             if (start < lastLabelEnd + 0.5 * em) {

@@ -7,6 +7,7 @@ import java.util.List;
 import org.locationtech.jts.geom.Envelope;
 
 import aequa.atlas.MapModel;
+import aequa.wording.Wording;
 
 /**
  * Where everything goes on the page, in page units: title, one panel per period (same scale in all),
@@ -71,8 +72,9 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
         double aspect = extentM.getHeight() / Math.max(extentM.getWidth(), 1e-9);
 
         // the legend and the area-scale block depend only on the width (and, for circles, the panel width)
-        double scaleLabelW = type.width("5,000,000 km\u00b2", sizes.legend(), false);
-        double scaleBlockW = Math.max(type.width("Area scale", sizes.legend(), true),
+        Wording w = options.wording();
+        double scaleLabelW = type.width(new AreaScale(5_000_000, 1).label(w.numbers()), sizes.legend(), false);
+        double scaleBlockW = Math.max(type.width(w.text("draw.areaScale"), sizes.legend(), true),
                 SCALE_SQUARE_EM * em + 0.6 * em + scaleLabelW);
         double scaleBlockH = type.lineHeight(sizes.legend()) + 0.3 * em + SCALE_SQUARE_EM * em;
         boolean stacked = inner - scaleBlockW - 2 * em < 22 * em;
@@ -86,16 +88,17 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
         if (circles) {
             double maxValue = Symbols.maxValue(model);
             double shortSide = Math.min(cellW, cellW * aspect);
-            symbols = Double.isNaN(maxValue) ? null : new Symbols(maxValue, Symbols.MAX_RADIUS_SHARE * shortSide);
+            symbols = Double.isNaN(maxValue) ? null : new Symbols(maxValue,
+                    Symbols.largestRadiusU(model, maxValue, cellW / extentM.getWidth(), shortSide, upt));
         }
-        Legend legend = new Legend(model, theme, type, options.histogram(), symbols);
+        Legend legend = new Legend(model, theme, type, options.histogram(), symbols, w);
         double legendH = legend.height(legendW);
         double furnitureH = stacked ? legendH + gap + scaleBlockH : Math.max(legendH, scaleBlockH);
 
         // caption and credits (the caption's area-scale sentence is measured with a long stand-in figure)
-        String captionProbe = Caption.caption(model, new AreaScale(5_000_000, 1));
+        String captionProbe = Caption.caption(model, new AreaScale(5_000_000, 1), w);
         List<String> probeLines = type.wrap(captionProbe, sizes.caption(), false, inner);
-        List<String> creditLines = type.wrap(Caption.credits(model), sizes.caption(), false, inner);
+        List<String> creditLines = type.wrap(Caption.credits(model, w), sizes.caption(), false, inner);
         double captionH = probeLines.size() * type.lineHeight(sizes.caption());
         double creditsH = creditLines.isEmpty() ? 0 : creditLines.size() * type.lineHeight(sizes.caption()) + 0.3 * em;
 
@@ -116,7 +119,7 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
             double x = margin + col * (cellW + gap);
             double y = top + row * (panelLabelH + cellH + gap);
             Rectangle2D box = new Rectangle2D.Double(x, y + panelLabelH, cellW, cellH);
-            String label = n > 1 ? model.periods().get(p) : "";
+            String label = n > 1 ? w.numbers().period(model.periods().get(p)) : "";
             panels.add(new Panel(p, label, y + type.capHeight(sizes.legend()), box, MapFit.at(scale, extentM, box)));
         }
         double y = top + rows * (panelLabelH + cellH) + (rows - 1) * gap + gap;
@@ -127,7 +130,7 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
                 ? new Rectangle2D.Double(margin, y + legendH + gap, scaleBlockW, scaleBlockH)
                 : new Rectangle2D.Double(margin + inner - scaleBlockW, y, scaleBlockW, scaleBlockH);
         y += furnitureH + gap;
-        List<String> captionLines = type.wrap(Caption.caption(model, areaScale), sizes.caption(), false, inner);
+        List<String> captionLines = type.wrap(Caption.caption(model, areaScale, w), sizes.caption(), false, inner);
         double captionTop = y;
         y += captionLines.size() * type.lineHeight(sizes.caption()) + 0.3 * em;
         double creditsTop = y;

@@ -18,6 +18,8 @@ import aequa.classes.Classification;
 import aequa.classes.FigureText;
 import aequa.colour.Rgb;
 import aequa.statistics.FigureStatus;
+import aequa.wording.NumberWriter;
+import aequa.wording.Wording;
 
 /**
  * The map's key. A heading (the unit), then one of: the class list (swatch, range, count of regions), the
@@ -47,9 +49,16 @@ final class Legend {
     private final List<Entry> classEntries = new ArrayList<>();
     private final List<Entry> statusEntries = new ArrayList<>();
     private final double em;
+    private final Wording wording;
+    private final NumberWriter numbers;
 
-    /** @param symbols the circles of a proportional-symbol map, or null for a choropleth */
-    Legend(MapModel model, Theme theme, Typesetter type, boolean histogram, Symbols symbols) {
+    /**
+     * @param symbols the circles of a proportional-symbol map, or null for a choropleth
+     * @param wording the language of the legend's words and numbers
+     */
+    Legend(MapModel model, Theme theme, Typesetter type, boolean histogram, Symbols symbols, Wording wording) {
+        this.wording = wording;
+        this.numbers = wording.numbers();
         this.model = model;
         this.theme = theme;
         this.type = type;
@@ -59,9 +68,9 @@ final class Legend {
         Classification classes = model.classification();
         List<Double> limits = classes.limits();
         for (int i = 0; i < classes.classCount() && i < model.ramp().fills().size(); i++) {
-            String range = FigureText.classRange(limits, i);
+            String range = wording.classRange(limits, i);
             classEntries.add(new Entry(model.ramp().fills().get(i), RegionFills.Hatch.NONE, false, range,
-                    "(" + classes.counts().get(i) + ")"));
+                    count(classes.counts().get(i))));
         }
         addStatusEntries();
     }
@@ -78,18 +87,22 @@ final class Legend {
             }
         }
         Theme.Colours c = theme.colours();
-        addStatus(counts, FigureStatus.NO_DATA, c.noData(), RegionFills.Hatch.SINGLE, "No data");
-        addStatus(counts, FigureStatus.SUPPRESSED, c.noData(), RegionFills.Hatch.CROSS, "Withheld");
-        addStatus(counts, FigureStatus.NOT_APPLICABLE, c.notApplicable(), RegionFills.Hatch.LEVEL, "Not applicable");
+        addStatus(counts, FigureStatus.NO_DATA, c.noData(), RegionFills.Hatch.SINGLE, wording.text("draw.noData"));
+        addStatus(counts, FigureStatus.SUPPRESSED, c.noData(), RegionFills.Hatch.CROSS, wording.text("draw.withheld"));
+        addStatus(counts, FigureStatus.NOT_APPLICABLE, c.notApplicable(), RegionFills.Hatch.LEVEL, wording.text("draw.notApplicable"));
         if (unreliable > 0) {
-            statusEntries.add(new Entry(c.background(), RegionFills.Hatch.NONE, true, "Unreliable estimate", "(" + unreliable + ")"));
+            statusEntries.add(new Entry(c.background(), RegionFills.Hatch.NONE, true, wording.text("draw.unreliable"), count(unreliable)));
         }
+    }
+
+    private String count(int n) {
+        return wording.text("draw.count", "count", numbers.integer(n));
     }
 
     private void addStatus(Map<FigureStatus, Integer> counts, FigureStatus status, Rgb fill, RegionFills.Hatch hatch, String label) {
         Integer n = counts.get(status);
         if (n != null && n > 0) {
-            statusEntries.add(new Entry(fill, hatch, false, label, "(" + n + ")"));
+            statusEntries.add(new Entry(fill, hatch, false, label, count(n)));
         }
     }
 
@@ -98,13 +111,14 @@ final class Legend {
     }
 
     private String heading() {
-        String unit = model.spec().unit().isBlank() ? "Value" : model.spec().unit();
+        String unit = model.spec().unit().isBlank() ? wording.text("draw.value") : model.spec().unit();
         if (symbols != null || unclassed() || histogram) {
             return unit;
         }
         // small multiples share one legend: say that its counts are of all panels together
         int periods = model.periods().size();
-        return periods > 1 ? unit + " (regions, all " + periods + " periods)" : unit + " (regions)";
+        return periods > 1 ? wording.text("draw.regionsAllPeriods", "unit", unit, "count", periods)
+                : wording.text("draw.regionsHeading", "unit", unit);
     }
 
     double height(double widthU) {
@@ -137,7 +151,7 @@ final class Legend {
         } else if (unclassed()) {
             paintGradient(canvas, x, top, Math.min(widthU, 30 * em));
         } else if (histogram) {
-            HistogramLegend.paint(canvas, model, theme, x, top, Math.min(widthU, 40 * em), em);
+            HistogramLegend.paint(canvas, model, theme, x, top, Math.min(widthU, 40 * em), em, numbers);
         }
         paintGrid(canvas, gridEntries(), x, top + keyHeight(), widthU);
     }
@@ -221,13 +235,13 @@ final class Legend {
             canvas.fill(new Rectangle2D.Double(x + i * stepW, y, w, 1.1 * em), colour);
         }
         List<Double> limits = model.classification().limits();
-        int decimals = Numbers.decimalsFor(List.of(limits.get(0), limits.get(limits.size() - 1)));
+        int decimals = FigureText.distinctDecimals(List.of(limits.get(0), limits.get(limits.size() - 1)));
         double size = theme.typePt().legend();
         double baseline = y + 1.1 * em + 0.3 * em + type.capHeight(size);
         Rgb text = theme.colours().text();
         Rgb bg = theme.colours().background();
-        canvas.text(Numbers.format(limits.get(0), decimals), x, baseline, size, false, Canvas.Anchor.START, text, bg);
-        canvas.text(Numbers.format(limits.get(limits.size() - 1), decimals), x + widthU, baseline, size, false, Canvas.Anchor.END, text, bg);
+        canvas.text(numbers.fixed(limits.get(0), decimals), x, baseline, size, false, Canvas.Anchor.START, text, bg);
+        canvas.text(numbers.fixed(limits.get(limits.size() - 1), decimals), x + widthU, baseline, size, false, Canvas.Anchor.END, text, bg);
     }
 
     // ----- nested circles -----
@@ -258,7 +272,7 @@ final class Legend {
             double topY = bottom - 2 * symbols.radius(value);
             double labelX = centreX + rMax + 0.8 * em;
             canvas.stroke(new Line2D.Double(centreX, topY, labelX - 0.3 * em, topY), c.textMuted(), theme.lines().graticule().pt());
-            canvas.text(Numbers.format(value, Numbers.decimalsFor(List.of(value))), labelX, topY + type.capHeight(size) / 2,
+            canvas.text(numbers.fixed(value, FigureText.distinctDecimals(List.of(value))), labelX, topY + type.capHeight(size) / 2,
                     size, false, Canvas.Anchor.START, c.text(), c.background());
         }
     }

@@ -53,7 +53,7 @@ public final class MapDrawings {
         painter.paint(canvas, layout, precision, true);
         String rootId = Ids.of("map", model.id());
         String svg = SvgOutput.tidy(SvgOutput.webRoot(g, rootId, width, layout.heightU(), model.spec().title(),
-                Descriptions.of(model)), precision.decimals());
+                Descriptions.of(model, options.wording())), precision.decimals());
         return drawn(DrawnMap.Format.WEB_SVG, svg.getBytes(StandardCharsets.UTF_8), layout, "px", canvas);
     }
 
@@ -100,12 +100,12 @@ public final class MapDrawings {
      * The PNG at 2 device pixels per CSS pixel, and the one at 1 made from it rather than painted again: each
      * of its pixels is the mean of a 2 x 2 block of the larger image, per channel, rounded to nearest
      * (box-filter downsampling, that is supersampled anti-aliasing on top of the renderer's own). Default web
-     * options with a title, as {@link #png(MapModel, Theme, int, int)}.
+     * options as {@link #png(MapModel, Theme, int, int, DrawOptions)} takes them (language, title).
      *
      * @return {@code [1x, 2x]}
      */
-    public static List<DrawnMap> pngPair(MapModel model, Theme theme, int widthPx) {
-        Raster raster = raster(model, theme, widthPx, 2, DrawOptions.web().withTitle(true));
+    public static List<DrawnMap> pngPair(MapModel model, Theme theme, int widthPx, DrawOptions options) {
+        Raster raster = raster(model, theme, widthPx, 2, options);
         DrawnMap single = drawn(DrawnMap.Format.PNG, encode(halved(raster.image())), raster.layout(), "px", raster.canvas());
         DrawnMap twice = drawn(DrawnMap.Format.PNG, encode(raster.image()), raster.layout(), "px", raster.canvas());
         return List.of(single, twice);

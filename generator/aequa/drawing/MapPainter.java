@@ -19,7 +19,7 @@ import aequa.project.MapDisplay;
 /**
  * Paints one {@link MapModel} onto a {@link Canvas}: the single drawing path behind SVG, PNG and PDF.
  * Layers, bottom to top, each a named group: background, title, per panel (globe and graticule, regions,
- * borders, outline, symbols, labels, period label), legend, area scale, caption, credits.
+ * borders, outline, group outlines, symbols, labels, period label), legend, area scale, caption, credits.
  */
 final class MapPainter {
 
@@ -77,6 +77,7 @@ final class MapPainter {
         Theme.Colours c = theme.colours();
         Theme.TypeSizes sizes = theme.typePt();
         Typesetter type = canvas.type();
+        canvas.rightToLeft(options.wording().language().rightToLeft());
         canvas.begin("background");
         canvas.fill(new Rectangle2D.Double(0, 0, layout.widthU(), layout.heightU()), c.background());
         canvas.end();
@@ -84,7 +85,9 @@ final class MapPainter {
             canvas.begin("title");
             double baseline = layout.marginU() + type.capHeight(sizes.title()); // the title block starts at the margin
             for (String line : layout.titleLines()) {
-                canvas.text(line, layout.marginU(), baseline, sizes.title(), true, Canvas.Anchor.START, c.text(), c.background());
+                boolean rtl = canvas.runsRightToLeft(line);
+                canvas.text(line, rtl ? layout.widthU() - layout.marginU() : layout.marginU(), baseline, sizes.title(), true,
+                        rtl ? Canvas.Anchor.END : Canvas.Anchor.START, c.text(), c.background());
                 baseline += type.lineHeight(sizes.title());
             }
             canvas.end();
@@ -108,14 +111,23 @@ final class MapPainter {
             canvas.begin("regions" + suffix, web ? borderPresentation(canvas) : Map.of(), null);
             if (model.composite()) {
                 PartFrames.paintRegionsByPart(canvas, model, pages, suffix,
-                        partPages -> RegionFillLayer.paint(canvas, model, theme, fills, partPages, panel.period(), regionPrefix, web, precision, circles));
+                        partPages -> RegionFillLayer.paint(canvas, model, theme, fills, partPages, panel.period(), regionPrefix, web, precision, circles,
+                                options.wording()));
             } else {
-                RegionFillLayer.paint(canvas, model, theme, fills, pages, panel.period(), regionPrefix, web, precision, circles);
+                RegionFillLayer.paint(canvas, model, theme, fills, pages, panel.period(), regionPrefix, web, precision, circles,
+                        options.wording());
             }
             canvas.end();
             RegionFillLayer.paintBorders(canvas, theme, pages, precision, suffix, !web);
+            if (!model.outlinesM().isEmpty()) {
+                // group outlines (the states over a county map) in the weight and colour of the map's outer outline
+                canvas.begin("group-outlines" + suffix);
+                canvas.stroke(PagePaths.lines(panel.fit().toPage(model.outlinesM()), precision), c.outline(),
+                        theme.lines().outline().pt());
+                canvas.end();
+            }
             if (model.composite()) {
-                PartFrames.paint(canvas, model, theme, panel.fit(), suffix);
+                PartFrames.paint(canvas, model, theme, panel.fit(), suffix, options.wording().numbers());
             }
             if (graticule && !wholeGlobe) {
                 canvas.begin("graticule" + suffix);
@@ -140,8 +152,8 @@ final class MapPainter {
         layout.legend().paint(canvas, legendBox.getX(), legendBox.getY(), legendBox.getWidth());
         canvas.end();
         paintAreaScale(canvas, layout);
-        paintParagraph(canvas, "caption", layout.captionLines(), layout.captionTopU(), layout.marginU(), c.textMuted());
-        paintParagraph(canvas, "credits", layout.creditLines(), layout.creditsTopU(), layout.marginU(), c.textMuted());
+        paintParagraph(canvas, "caption", layout.captionLines(), layout.captionTopU(), layout.marginU(), layout.widthU(), c.textMuted());
+        paintParagraph(canvas, "credits", layout.creditLines(), layout.creditsTopU(), layout.marginU(), layout.widthU(), c.textMuted());
     }
 
     /** The theme's inner-border colour and weight in page units, as SVG presentation attributes. */
@@ -187,7 +199,7 @@ final class MapPainter {
         Rectangle2D box = layout.scaleBox();
         AreaScale scale = layout.areaScale();
         canvas.begin("area-scale");
-        canvas.text("Area scale", box.getX(), box.getY() + type.capHeight(size), size, true, Canvas.Anchor.START, c.text(), c.background());
+        canvas.text(options.wording().text("draw.areaScale"), box.getX(), box.getY() + type.capHeight(size), size, true, Canvas.Anchor.START, c.text(), c.background());
         double squareTop = box.getY() + type.lineHeight(size) + 0.3 * size * type.unitsPerPt();
         double side = scale.sideU();
         Rectangle2D.Double square = new Rectangle2D.Double(box.getX(), squareTop, side, side);
@@ -195,12 +207,12 @@ final class MapPainter {
             canvas.fill(square, c.background());
             canvas.stroke(square, c.text(), theme.lines().border().pt());
         });
-        canvas.text(scale.label(), box.getX() + side + 0.6 * size * type.unitsPerPt(), squareTop + side / 2 + type.capHeight(size) / 2,
+        canvas.text(scale.label(options.wording().numbers()), box.getX() + side + 0.6 * size * type.unitsPerPt(), squareTop + side / 2 + type.capHeight(size) / 2,
                 size, false, Canvas.Anchor.START, c.text(), c.background());
         canvas.end();
     }
 
-    private void paintParagraph(Canvas canvas, String id, List<String> lines, double top, double x, Rgb colour) {
+    private void paintParagraph(Canvas canvas, String id, List<String> lines, double top, double x, double layoutWidthU, Rgb colour) {
         if (lines.isEmpty()) {
             return;
         }
@@ -209,7 +221,10 @@ final class MapPainter {
         canvas.begin(id);
         double baseline = top + type.capHeight(size);
         for (String line : lines) {
-            canvas.text(line, x, baseline, size, false, Canvas.Anchor.START, colour, theme.colours().background());
+            // a right-to-left line is set against the right margin, as right-to-left paragraphs are
+            boolean rtl = canvas.runsRightToLeft(line);
+            canvas.text(line, rtl ? layoutWidthU - x : x, baseline, size, false, rtl ? Canvas.Anchor.END : Canvas.Anchor.START,
+                    colour, theme.colours().background());
             baseline += type.lineHeight(size);
         }
         canvas.end();

@@ -13,6 +13,7 @@ import org.locationtech.jts.geom.GeometryFactory;
 import aequa.atlas.MapModel;
 import aequa.atlas.MapPart;
 import aequa.atlas.MapRegion;
+import aequa.wording.NumberWriter;
 
 /**
  * The parts of a composite map on the page: each part's regions as a named group (so print SVG has a layer
@@ -22,6 +23,8 @@ final class PartFrames {
 
     /** Largest share of the name band the name's capitals fill (chosen by eye). */
     private static final double NAME_CAP_SHARE = 0.45;
+    /** Largest share of the area-scale band a part's own square's side takes (chosen by eye). */
+    private static final double OWN_SQUARE_SHARE = 0.7;
 
     private static final GeometryFactory GEOMETRY = new GeometryFactory();
 
@@ -48,10 +51,13 @@ final class PartFrames {
         }
     }
 
-    /** The frames and names of the framed parts, one group each. */
-    static void paint(Canvas canvas, MapModel model, Theme theme, MapFit fit, String suffix) {
+    /**
+     * The frames and names of the framed parts, one group each; a part at its own area scale also gets its own
+     * area-scale square (true for its areas only) in the band at the bottom of its frame, its label written by
+ * {@code numbers}.
+     */
+    static void paint(Canvas canvas, MapModel model, Theme theme, MapFit fit, String suffix, NumberWriter numbers) {
         Theme.Colours c = theme.colours();
-        Typesetter type = canvas.type();
         for (MapPart part : model.parts()) {
             if (part.main()) {
                 continue;
@@ -63,22 +69,64 @@ final class PartFrames {
             double w = (f.maxXM() - f.minXM()) * scale;
             double h = (f.maxYM() - f.minYM()) * scale;
             double bandU = part.nameBandM() * scale;
-            String label = part.frameLabel();
-            double size = theme.typePt().legend();
-            size = Math.min(size, size * NAME_CAP_SHARE * bandU / type.capHeight(size));
-            double room = w - bandU * 0.6;
-            double width = type.width(label, size, false);
-            if (width > room) {
-                size *= room / width;
-            }
-            // never below the theme's smallest type (print preflight): a small print lets the name reach past its band
-            size = Math.max(size, theme.typePt().minimum());
             canvas.begin(Ids.of("frame", part.id()) + suffix);
             canvas.stroke(new Rectangle2D.Double(x, y, w, h), c.textMuted(), theme.lines().border().pt());
-            double baseline = y + Math.max((bandU + type.capHeight(size)) / 2, bandU * 0.3 + type.capHeight(size));
-            canvas.text(label, x + bandU * 0.3, baseline, size, false, Canvas.Anchor.START,
-                    c.text(), c.background());
+            paintName(canvas, theme, part, x, y, w, bandU);
+            if (part.scaleBandM() > 0) {
+                paintOwnScale(canvas, theme, numbers, part, scale, x, y + h, part.scaleBandM() * scale, bandU / Math.max(1, part.nameLines()));
+            }
             canvas.end();
         }
+    }
+
+    /** The name in its band: one line, or two when the layout made room for two and one does not fit. */
+    private static void paintName(Canvas canvas, Theme theme, MapPart part, double x, double y, double w, double bandU) {
+        Typesetter type = canvas.type();
+        String label = part.frameLabel();
+        int lines = Math.max(1, part.nameLines());
+        double lineBandU = bandU / lines;
+        double legend = theme.typePt().legend();
+        double size = Math.min(legend, legend * NAME_CAP_SHARE * (lines == 1 ? bandU : lineBandU * 1.15) / type.capHeight(legend));
+        double room = w - lineBandU * 0.6;
+        List<String> text = List.of(label);
+        if (type.width(label, size, false) > room && lines == 2) {
+            List<String> wrapped = part.frameLabelLines().isEmpty() ? type.wrap(label, size, false, room) : part.frameLabelLines();
+            text = wrapped.size() <= 2 ? wrapped : List.of(label);
+        }
+        double widest = text.stream().mapToDouble(t -> type.width(t, size, false)).max().orElse(0);
+        double fitted = widest > room ? size * room / widest : size;
+        // never below the theme's smallest type (print preflight): a small print lets the name reach past its band
+        fitted = Math.max(fitted, theme.typePt().minimum());
+        double lineU = text.size() == 1 ? bandU : type.lineHeight(fitted);
+        double baseline = text.size() == 1
+                ? y + Math.max((bandU + type.capHeight(fitted)) / 2, bandU * 0.3 + type.capHeight(fitted))
+                : y + (bandU - lineU * 2) / 2 + (lineU + type.capHeight(fitted)) / 2;
+        for (String line : text) {
+            canvas.text(line, x + lineBandU * 0.3, baseline, fitted, false, Canvas.Anchor.START,
+                    theme.colours().text(), theme.colours().background());
+            baseline += lineU;
+        }
+    }
+
+    /**
+     * The part's own area-scale square, bottom left in its frame: a round ground area whose square, drawn at the
+     * part's area scale (linear factor sqrt(areaScale) on the map's page scale), fills most of the band.
+     */
+    private static void paintOwnScale(Canvas canvas, Theme theme, NumberWriter numbers, MapPart part, double scaleUnitsPerM, double x, double bottom,
+                                      double scaleBandU, double insetU) {
+        Typesetter type = canvas.type();
+        AreaScale own = AreaScale.choose(scaleUnitsPerM * Math.sqrt(part.areaScale()), OWN_SQUARE_SHARE * scaleBandU);
+        double side = own.sideU();
+        double left = x + insetU * 0.3;
+        double top = bottom - insetU * 0.3 - side;
+        Rectangle2D.Double square = new Rectangle2D.Double(left, top, side, side);
+        Theme.Colours c = theme.colours();
+        canvas.precisely(() -> {
+            canvas.fill(square, c.background());
+            canvas.stroke(square, c.text(), theme.lines().border().pt());
+        });
+        double size = Math.max(theme.typePt().minimum(), Math.min(theme.typePt().legend(), theme.typePt().legend() * 0.8));
+        canvas.text(own.label(numbers), left + side + 0.5 * size * type.unitsPerPt(), top + side / 2 + type.capHeight(size) / 2,
+                size, false, Canvas.Anchor.START, c.text(), c.background());
     }
 }

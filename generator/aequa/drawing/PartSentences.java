@@ -5,6 +5,7 @@ import java.util.List;
 
 import aequa.atlas.MapModel;
 import aequa.atlas.MapPart;
+import aequa.wording.Wording;
 
 /**
  * What the caption says about a composite map's parts: that the projection stated first is the main map's,
@@ -19,7 +20,7 @@ final class PartSentences {
     private PartSentences() {
     }
 
-    static String parts(MapModel model) {
+    static String parts(MapModel model, Wording w) {
         List<String> sameScale = new ArrayList<>();
         List<String> otherScale = new ArrayList<>();
         double worstOmegaDeg = 0;
@@ -31,32 +32,22 @@ final class PartSentences {
             if (part.areaScale() == 1) {
                 sameScale.add(part.name());
             } else {
-                otherScale.add(part.name() + " at " + part.areaScaleText() + " \u00d7");
+                otherScale.add(w.text("draw.partAtScale", "name", part.name(), "scale", part.areaScaleText()));
             }
         }
         List<String> names = model.parts().stream().filter(p -> !p.main()).map(MapPart::name).toList();
         // a few short names read well in a sentence; descriptive default names ("29 regions, 820 km north-west") do not
         boolean byName = names.size() <= MAX_NAMED && names.stream().noneMatch(n -> n.contains(","));
-        StringBuilder text = new StringBuilder("These figures are for the main map; ");
-        text.append(byName ? list(names) : names.size() + " detached parts")
-                .append(names.size() == 1 ? " is" : " are").append(" framed, each on its own equal-area projection (\u03c9 up to ")
-                .append(Numbers.trim(worstOmegaDeg, worstOmegaDeg < 1 ? 2 : 1)).append("\u00b0)");
+        String framed = w.text("draw.partsFramed", "count", names.size(),
+                "parts", byName ? w.list(names) : w.text("draw.detachedParts", "count", names.size()),
+                "max", w.numbers().degrees(worstOmegaDeg, worstOmegaDeg < 1 ? 2 : 1));
         if (otherScale.isEmpty()) {
-            text.append(", at the main map's area scale, so areas compare across the whole map.");
-        } else {
-            text.append(". Areas compare only within a part: ").append(list(otherScale)).append(" the main map's area scale");
-            if (!sameScale.isEmpty()) {
-                text.append("; ").append(list(sameScale)).append(sameScale.size() == 1 ? " is" : " are").append(" at the main map's");
-            }
-            text.append('.');
+            return w.text("draw.partsSameScale", "framed", framed);
         }
-        return text.toString();
-    }
-
-    private static String list(List<String> items) {
-        if (items.size() <= 1) {
-            return String.join("", items);
+        if (sameScale.isEmpty()) {
+            return w.text("draw.partsOtherScale", "framed", framed, "others", w.list(otherScale));
         }
-        return String.join(", ", items.subList(0, items.size() - 1)) + " and " + items.get(items.size() - 1);
+        return w.text("draw.partsMixedScale", "framed", framed, "others", w.list(otherScale),
+                "same", w.list(sameScale), "count", sameScale.size());
     }
 }

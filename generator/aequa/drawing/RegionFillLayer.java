@@ -1,6 +1,8 @@
 package aequa.drawing;
 
 import java.awt.geom.Path2D;
+import java.math.BigDecimal;
+import java.math.RoundingMode;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -10,9 +12,9 @@ import org.locationtech.jts.geom.Geometry;
 import aequa.atlas.MapModel;
 import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
-import aequa.classes.FigureText;
 import aequa.colour.Rgb;
 import aequa.statistics.FigureStatus;
+import aequa.wording.Wording;
 
 /**
  * The regions of one panel: one group per region (id from its key; on the web also data attributes and a
@@ -38,7 +40,8 @@ final class RegionFillLayer {
      * @param dataAttributes write data-* attributes and titles (web)
      */
     static void paint(Canvas canvas, MapModel model, Theme theme, RegionFills fills, List<Geometry> pageGeometries,
-                      int period, String idPrefix, boolean dataAttributes, FixedDecimal precision, boolean plainFill) {
+                      int period, String idPrefix, boolean dataAttributes, FixedDecimal precision, boolean plainFill,
+                      Wording w) {
         List<MapRegion> regions = model.regions();
         double spacing = hatchSpacing(canvas);
         double hatchPt = theme.lines().hatch().pt();
@@ -54,9 +57,9 @@ final class RegionFillLayer {
             if (dataAttributes) {
                 attributes.put("data-key", region.key());
                 attributes.put("data-name", region.name());
-                attributes.put("data-value", RegionFills.classed(value) ? Numbers.trim(value.normalisedValue(), 6) : "");
+                attributes.put("data-value", RegionFills.classed(value) ? machineNumber(value.normalisedValue()) : "");
                 attributes.put("data-class", RegionFills.classed(value) ? Integer.toString(value.classIndex()) : statusName(value));
-                title = region.name() + ": " + describe(model, value);
+                title = w.text("draw.tooltip", "region", region.name(), "value", describe(model, value, w));
             }
             canvas.begin(Ids.of(idPrefix, region.key()), attributes, title);
             Path2D.Double path = PagePaths.area(page, precision);
@@ -95,15 +98,28 @@ final class RegionFillLayer {
         return period < region.values().size() ? region.values().get(period) : RegionValue.noData();
     }
 
-    /** {@code 12.5 clinics per 1,000 km²}, or the status in words. */
-    static String describe(MapModel model, RegionValue value) {
+    /**
+     * The figure for scripts ({@code data-value}): a machine number with a point and no grouping, like the CSV
+     * download, at most 6 decimals; readers see the title instead.
+     */
+    static String machineNumber(double value) {
+        String plain = BigDecimal.valueOf(value).setScale(6, RoundingMode.HALF_EVEN).stripTrailingZeros().toPlainString();
+        return plain.equals("-0") ? "0" : plain;
+    }
+
+    /** {@code 12.5 clinics per 1,000 km²}, or the status in words, in the drawing's language. */
+    static String describe(MapModel model, RegionValue value, Wording w) {
         if (!RegionFills.classed(value)) {
-            return statusName(value).replace('-', ' ');
+            return w.text(switch (RegionFills.status(value)) {
+                case SUPPRESSED -> "draw.statusWithheld";
+                case NOT_APPLICABLE -> "draw.statusNotApplicable";
+                default -> "draw.statusNoData";
+            });
         }
         String unit = model.spec().unit();
-        String figure = FigureText.figure(value.normalisedValue(), model.classification().limits());
-        String text = unit.isBlank() ? figure : figure + " " + unit;
-        return value.unreliable() ? text + " (unreliable)" : text;
+        String figure = w.numbers().figure(value.normalisedValue(), model.classification().limits());
+        String text = unit.isBlank() ? figure : w.text("draw.valueUnit", "value", figure, "unit", unit);
+        return value.unreliable() ? w.text("draw.unreliableValue", "value", text) : text;
     }
 
     static String statusName(RegionValue value) {

@@ -68,13 +68,15 @@ final class SvgOutput {
      * The web root: a viewBox and no fixed size (it fills its container's width), {@code role="img"} and
      * {@code aria-labelledby} pointing at a {@code <title>} and {@code <desc>} written first inside it
      * (WAI-ARIA 1.2 "img" role; the pattern recommended for inline SVG by the W3C SVG Accessibility API Mappings).
+     * {@code direction="ltr"}: the layout places every text by its left end, so the map must not inherit a
+     * right-to-left page's direction (SVG 1.1, section 10.7.4); right-to-left lines carry their own embedding.
      */
     static String webRoot(SVGGraphics2D g, String rootId, double width, double height, String title, String description) {
         String element = g.getSVGElement(rootId, false, new ViewBox(0, 0, width, height), null, null);
         int rootEnd = element.indexOf('>');
         String open = element.substring(0, rootEnd);
         String rest = element.substring(rootEnd + 1);
-        return open + " class='aequa-map' role='img' aria-labelledby='" + rootId + "-title " + rootId + "-desc'>"
+        return open + " class='aequa-map' direction='ltr' role='img' aria-labelledby='" + rootId + "-title " + rootId + "-desc'>"
                 + "<title id='" + rootId + "-title'>" + escape(title) + "</title>"
                 + "<desc id='" + rootId + "-desc'>" + escape(description) + "</desc>"
                 + rest;

@@ -16,8 +16,51 @@ import aequa.statistics.FigureStatus;
  */
 record Symbols(double maxValue, double maxRadiusU) {
 
-    /** The share of the shorter side of a map panel the largest circle's radius takes (chosen by eye). */
+    /** The share of the shorter side of a map panel the largest circle's radius takes at most (chosen by eye). */
     static final double MAX_RADIUS_SHARE = 0.045;
+    /**
+     * The share of the regions' drawn area that all circles of a panel together cover at most, so that a map of
+     * thousands of small regions gets small circles instead of one blob (chosen by eye on the US counties).
+     */
+    static final double MAX_COVER_SHARE = 0.35;
+    /** Millimetres to points (1 in = 25.4 mm = 72 pt). */
+    private static final double PT_PER_MM = 72 / 25.4;
+
+    /**
+     * The largest circle's radius in page units: the map's {@code largest-circle-mm} when set (a diameter);
+     * else the smaller of {@value #MAX_RADIUS_SHARE} of the panel's shorter side and the radius at which the
+     * circles of the busiest period cover {@value #MAX_COVER_SHARE} of the regions' drawn area.
+     *
+     * @param scaleUPerM  the panel's page units per metre
+     * @param shortSideU  the panel's shorter side
+     * @param unitsPerPt  page units per point
+     */
+    static double largestRadiusU(MapModel model, double maxValue, double scaleUPerM, double shortSideU, double unitsPerPt) {
+        if (model.spec().largestCircleMm() != null) {
+            return model.spec().largestCircleMm() / 2 * PT_PER_MM * unitsPerPt;
+        }
+        double regionsM2 = 0;
+        for (MapRegion region : model.regions()) {
+            regionsM2 += region.planarM().getArea();
+        }
+        double busiest = 0; // the largest sum of v / vMax over a period: the circles' total area in units of the largest
+        for (int p = 0; p < Math.max(1, model.periods().size()); p++) {
+            double sum = 0;
+            for (MapRegion region : model.regions()) {
+                RegionValue v = p < region.values().size() ? region.values().get(p) : null;
+                if (v != null && drawn(v)) {
+                    sum += v.normalisedValue() / maxValue;
+                }
+            }
+            busiest = Math.max(busiest, sum);
+        }
+        double byShare = MAX_RADIUS_SHARE * shortSideU;
+        if (busiest == 0 || regionsM2 == 0) {
+            return byShare;
+        }
+        double byCover = Math.sqrt(MAX_COVER_SHARE * regionsM2 * scaleUPerM * scaleUPerM / (Math.PI * busiest));
+        return Math.min(byShare, byCover);
+    }
 
     static boolean drawn(RegionValue value) {
         return value.status() == FigureStatus.REPORTED && value.normalisedValue() > 0;

@@ -102,7 +102,7 @@ public final class RegionValidator {
         }
         Geometry repaired = repair(geometry, file, place, findings);
         return new Checked(repaired.isEmpty() ? Optional.empty()
-                : Optional.of(new Region(region.key(), region.name(), repaired)), findings);
+                : Optional.of(region.withLonLat(repaired)), findings);
     }
 
     private static Geometry repair(Geometry geometry, String file, String place, Findings findings) {
@@ -143,7 +143,8 @@ public final class RegionValidator {
         }
         if (collapsed > 0) {
             findings.add(Finding.note("part-degenerate", file, place,
-                    collapsed + " of its rings enclose no area (fewer than three distinct positions); aequa left them out.",
+                    collapsed == 1 ? "1 of its rings encloses no area (fewer than three distinct positions); aequa left it out."
+                            : collapsed + " of its rings enclose no area (fewer than three distinct positions); aequa left them out.",
                     "Remove such slivers from the source."));
         }
         if (parts.isEmpty()) {

@@ -13,13 +13,20 @@ import java.util.List;
  * @param mapHref    link back to the map's page, relative to this page
  * @param csvHref    link to the CSV download, relative to this page
  * @param hasMargins whether any figure has a margin of error (the table then shows a column for it)
+ * @param hasParts   whether the map is drawn in parts (the table then names each region's part)
  */
 public record FiguresView(String id, String title, String unit, List<String> periods, List<Row> rows,
-                          String mapHref, String csvHref, boolean hasMargins) {
+                          String mapHref, String csvHref, boolean hasMargins, boolean hasParts) {
 
     public FiguresView {
         periods = List.copyOf(periods);
         rows = List.copyOf(rows);
+    }
+
+    /** The table of a map on one projection. */
+    public FiguresView(String id, String title, String unit, List<String> periods, List<Row> rows,
+                       String mapHref, String csvHref, boolean hasMargins) {
+        this(id, title, unit, periods, rows, mapHref, csvHref, hasMargins, false);
     }
 
     /**
@@ -27,8 +34,9 @@ public record FiguresView(String id, String title, String unit, List<String> per
      * @param name    the region's name
      * @param areaKm2 the geodesic area, formatted
      * @param cells   one per period
+     * @param part    the name of the map part the region is drawn in (empty for a map on one projection)
      */
-    public record Row(String key, String name, String areaKm2, List<Cell> cells) {
+    public record Row(String key, String name, String areaKm2, List<Cell> cells, String part) {
         public Row {
             cells = List.copyOf(cells);
         }
@@ -36,13 +44,15 @@ public record FiguresView(String id, String title, String unit, List<String> per
 
     /**
      * @param status      {@code reported}, {@code zero}, {@code no data}, {@code suppressed} or {@code not applicable}
+     *                    (the CSV's word, also the cell's class name)
+     * @param statusLabel the status in the page's language
      * @param value       the figure as given, formatted, or empty unless reported
      * @param normalised  the value mapped, formatted, or empty unless reported
      * @param classNumber the class, 1 = lowest, or empty
      * @param unreliable  whether the figure rests on too few events or too wide a margin
      * @param margin      the figure's margin of error, formatted, or empty when the source gives none
      */
-    public record Cell(String status, String value, String normalised, String classNumber, boolean unreliable,
+    public record Cell(String status, String statusLabel, String value, String normalised, String classNumber, boolean unreliable,
                        String margin) {
     }
 }

@@ -29,6 +29,8 @@ public record MethodView(List<MapMethod> maps) {
      * @param classMethod      the classification method's name
      * @param limits           the class limits, formatted, ascending
      * @param counts           regions per class
+     * @param classNumbers     the class numbers (1 = lowest) in the page's digits
+     * @param countTexts       the counts in the page's digits
      * @param normalisation    a sentence saying what the value was divided by
      * @param source           the credit for the figures
      * @param asOf             the date the figures refer to
@@ -41,7 +43,8 @@ public record MethodView(List<MapMethod> maps) {
     public record MapMethod(String id, String title, String projectionName, String reason, List<String> parameters,
                             String omegaMaxDeg, String omegaMeanDeg, List<String> runnersUp, String areaErrorPercent,
                             String areaWorstKey, String areaTolerancePercent, boolean areaPassed, String classMethod,
-                            List<String> limits, List<Integer> counts, String normalisation, String source,
+                            List<String> limits, List<Integer> counts,
+                            List<String> classNumbers, List<String> countTexts, String normalisation, String source,
                             String asOf, List<String> checkNotes, String mapHref, List<String> parts) {
         public MapMethod {
             parameters = List.copyOf(parameters);

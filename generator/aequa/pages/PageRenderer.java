@@ -46,7 +46,7 @@ public final class PageRenderer {
 
     /** Every template a site uses, also the set hashed for incremental builds. */
     public static final List<String> TEMPLATE_NAMES = List.of(
-            "layout.ftlh", "index.ftlh", "map.ftlh", "figures.ftlh", "method.ftlh", "changes.ftlh", "embed-words.ftlh",
+            "layout.ftlh", "index.ftlh", "map.ftlh", "figures.ftlh", "method.ftlh", "changes.ftlh",
             "embed.ftlh", "fragment.ftlh");
 
     /** Files copied verbatim into the site's {@code assets/} folder; overridable like templates. */
@@ -96,22 +96,26 @@ public final class PageRenderer {
     }
 
     public String renderIndex(SiteView site, IndexView page) {
-        return render("index.ftlh", site, "", page);
+        return render("index.ftlh", site, "", "index.html", page, Map.of());
     }
 
     /** A map page without the section that offers the map for other sites' pages. */
-    public String renderMap(SiteView site, MapPageView page) {
-        return render("map.ftlh", site, "../../", page, Map.of("mapSvg", markup(page.svg())));
+    public String renderMap(SiteView site, MapPageView page, String pagePath) {
+        return render("map.ftlh", site, "../../", pagePath, page, Map.of("mapSvg", markup(page.svg())));
     }
 
-    /** A map page with its section "Use this map in your own page". */
-    public String renderMap(SiteView site, MapPageView page, EmbedView embed) {
-        return render("map.ftlh", site, "../../", page, Map.of("mapSvg", markup(page.svg()), "embed", embed));
+    /**
+     * A map page with its section "Use this map in your own page".
+     *
+     * @param pagePath the page's path from the language's root, for the links to its other languages
+     */
+    public String renderMap(SiteView site, MapPageView page, String pagePath, EmbedView embed) {
+        return render("map.ftlh", site, "../../", pagePath, page, Map.of("mapSvg", markup(page.svg()), "embed", embed));
     }
 
     /** The map's embed page, shown in other sites' frames. */
-    public String renderEmbed(SiteView site, MapPageView page, EmbedView embed) {
-        return render("embed.ftlh", site, "../../", page, Map.of("mapSvg", markup(page.svg()), "embed", embed));
+    public String renderEmbed(SiteView site, MapPageView page, String pagePath, EmbedView embed) {
+        return render("embed.ftlh", site, "../../", pagePath, page, Map.of("mapSvg", markup(page.svg()), "embed", embed));
     }
 
     /**
@@ -120,8 +124,8 @@ public final class PageRenderer {
      * @param fragmentSvg the map's SVG without ids or anything it would load (see aequa.publish.FragmentSvg);
      *                    inserted unescaped, like {@link MapPageView#svg()}
      */
-    public String renderFragment(SiteView site, MapPageView page, EmbedView embed, String fragmentSvg) {
-        return render("fragment.ftlh", site, "../../", page, Map.of("mapSvg", markup(fragmentSvg), "embed", embed));
+    public String renderFragment(SiteView site, MapPageView page, String pagePath, EmbedView embed, String fragmentSvg) {
+        return render("fragment.ftlh", site, "../../", pagePath, page, Map.of("mapSvg", markup(fragmentSvg), "embed", embed));
     }
 
     private static TemplateHTMLOutputModel markup(String trusted) {
@@ -132,27 +136,26 @@ public final class PageRenderer {
         }
     }
 
-    public String renderFigures(SiteView site, FiguresView page) {
-        return render("figures.ftlh", site, "../../", page);
+    /** @param pagePath the page's path from the language's root, for the links to its other languages */
+    public String renderFigures(SiteView site, FiguresView page, String pagePath) {
+        return render("figures.ftlh", site, "../../", pagePath, page, Map.of());
     }
 
     public String renderMethod(SiteView site, MethodView page) {
-        return render("method.ftlh", site, "", page);
+        return render("method.ftlh", site, "", "method.html", page, Map.of());
     }
 
     public String renderChanges(SiteView site, ChangesView page) {
-        return render("changes.ftlh", site, "", page);
+        return render("changes.ftlh", site, "", "changes.html", page, Map.of());
     }
 
-    private String render(String name, SiteView site, String root, Object page) {
-        return render(name, site, root, page, Map.of());
-    }
-
-    private String render(String name, SiteView site, String root, Object page, Map<String, Object> extra) {
+    private String render(String name, SiteView site, String root, String pagePath, Object page, Map<String, Object> extra) {
         Map<String, Object> model = new java.util.HashMap<>(extra);
         model.put("site", site);
         model.put("root", root);
+        model.put("pagePath", pagePath);
         model.put("page", page);
+        model.put("t", new MessageMethod(site.wording()));
         StringWriter out = new StringWriter();
         try {
             Template template = config.getTemplate(name);

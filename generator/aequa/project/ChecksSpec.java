@@ -22,9 +22,11 @@ public record ChecksSpec(Double areaTolerance, MissingFigures missingFigures, Do
      * of the regions empty; measured on the US counties file, FIPS codes without leading zeros match 90.7 %.
      */
     public static final double DEFAULT_MIN_MATCHED_PERCENT = 95;
+    /** The default largest relative difference between a region's drawn and geodesic area. */
+    public static final double DEFAULT_AREA_TOLERANCE = 1e-4;
 
     public ChecksSpec {
-        areaTolerance = areaTolerance == null ? 1e-4 : areaTolerance;
+        areaTolerance = areaTolerance == null ? DEFAULT_AREA_TOLERANCE : areaTolerance;
         missingFigures = missingFigures == null ? MissingFigures.WARNING : missingFigures;
         unreliableBelow = unreliableBelow == null ? 0.0 : unreliableBelow;
         marginAbove = marginAbove == null ? 0.0 : marginAbove;

@@ -29,14 +29,24 @@ import java.util.List;
  * @param range       the declared valid range {@code [min, max]} of the values as given (for example
  *                    {@code [0, 100]} for shares in percent), or empty for no check
  * @param insets      how detached parts are drawn; null to follow the region source's setting
+ * @param outlines    a property of the regions to draw group outlines by (for example {@code state} on a
+ *                    county map: the counties of one state dissolved into one outline over the fills), or empty
+ * @param largestCircleMm the diameter of the largest circle of a circle map in print, millimetres
+ *                    ({@value #MIN_CIRCLE_MM} to {@value #MAX_CIRCLE_MM}), or null for the size the map's
+ *                    extent suggests
  */
 public record MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
                       Measure measure, Normalisation normalise, String per, Double multiplier, String unit,
                       MapDisplay display, ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
                       String marginColumn, String notes, String source, String asOf, List<Double> range,
-                      InsetsSpec insets) {
+                      InsetsSpec insets, String outlines, Double largestCircleMm) {
+
+    /** Bounds of {@code largest-circle-mm}: a 2 mm circle is still seen, a 40 mm one covers a two-column map's width. */
+    public static final double MIN_CIRCLE_MM = 2;
+    public static final double MAX_CIRCLE_MM = 40;
 
     public MapSpec {
+        outlines = outlines == null ? "" : outlines.strip();
         title = title == null ? id : title;
         periods = periods == null ? List.of() : List.copyOf(periods);
         measure = measure == null ? Measure.UNDECLARED : measure;
@@ -53,6 +63,15 @@ public record MapSpec(String id, String title, String regions, String figures, S
         source = source == null ? "" : source;
         asOf = asOf == null ? "" : asOf;
         range = range == null ? List.of() : List.copyOf(range);
+    }
+
+    /** A map without outlines and with circles sized by the map (the record's shape before those settings). */
+    public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
+                   Measure measure, Normalisation normalise, String per, Double multiplier, String unit, MapDisplay display,
+                   ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
+                   String marginColumn, String notes, String source, String asOf, List<Double> range, InsetsSpec insets) {
+        this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
+                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, range, insets, null, null);
     }
 
     /** A map that follows its region source's {@code insets} setting (the record's shape before insets). */

@@ -56,6 +56,11 @@ final class ProjectChecks {
         onlyFor(at + "/object", source.object(), source.file(), List.of(".topojson", ".json"), "object",
                 "the object of a TopoJSON topology");
         InsetsChecks.check(at + "/insets", source.insets(), this::error);
+        if (NamePattern.isPattern(source.name()) && NamePattern.parse(source.name()).isEmpty()) {
+            error("project-bad-name-pattern", at + "/name", "The name pattern '" + source.name() + "' does not pair its braces"
+                            + " around property names.",
+                    "Write each property in braces, for example \"{name}, {state}\"; text outside braces is kept as it is.");
+        }
         if (source.key().isBlank()) {
             error("project-missing-key", at + "/key", "The region source has an empty 'key'.",
                     "Name the property that holds each region's code, or '" + RegionSourceSpec.FEATURE_ID + "' for the feature id.");
@@ -103,6 +108,15 @@ final class ProjectChecks {
         if (map.normalise() == Normalisation.COLUMN && map.per().isBlank()) {
             error("project-missing-key", at + "/per", "Map '" + map.id() + "' normalises by a column but names none.",
                     "Set 'per' to the denominator column, for example 'population'.");
+        }
+        if (map.largestCircleMm() != null && !(map.largestCircleMm() >= MapSpec.MIN_CIRCLE_MM
+                && map.largestCircleMm() <= MapSpec.MAX_CIRCLE_MM)) {
+            error("project-bad-value", at + "/largest-circle-mm", String.format(java.util.Locale.ROOT,
+                            "'largest-circle-mm' must be from %.0f to %.0f millimetres.", MapSpec.MIN_CIRCLE_MM, MapSpec.MAX_CIRCLE_MM),
+                    "It is the diameter of the largest circle in print; leave it out to size circles by the map.");
+        } else if (map.largestCircleMm() != null && map.display() != MapDisplay.CIRCLES) {
+            error("project-bad-value", at + "/largest-circle-mm", "'largest-circle-mm' applies only to 'display: circles'.",
+                    "Remove it, or set 'display: circles' for a map of counts.");
         }
         checkClasses(at + "/classes", map.classes());
         if (map.insets() != null) {

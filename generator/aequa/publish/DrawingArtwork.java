@@ -14,6 +14,7 @@ import aequa.drawing.PrintSize;
 import aequa.drawing.Theme;
 import aequa.drawing.WebSize;
 import aequa.findings.Finding;
+import aequa.wording.Wording;
 
 /**
  * The pictures of each map, drawn by the drawing stage in one theme. Every print drawing passes the print
@@ -26,6 +27,7 @@ public final class DrawingArtwork implements MapArtwork {
     private final Theme printTheme;
     private final PrintSize printSize;
     private final String version;
+    private final Wording wording;
     /** What the print preflight found, by map id (maps are drawn in parallel; the order stays stable). */
     private final Map<String, List<Finding>> preflight = new ConcurrentSkipListMap<>();
     private volatile String fingerprint;
@@ -38,38 +40,50 @@ public final class DrawingArtwork implements MapArtwork {
      *                   release or build redraws every map
      */
     public DrawingArtwork(Theme theme, Theme printTheme, PrintSize printSize, String version) {
+        this(theme, printTheme, printSize, version, Wording.english());
+    }
+
+    private DrawingArtwork(Theme theme, Theme printTheme, PrintSize printSize, String version, Wording wording) {
         this.theme = theme;
         this.printTheme = printTheme;
         this.printSize = printSize;
         this.version = version;
+        this.wording = wording;
+    }
+
+    /** The same themes and sizes in another language; the print preflight's findings are gathered apart. */
+    @Override
+    public DrawingArtwork inLanguage(Wording other) {
+        return new DrawingArtwork(theme, printTheme, printSize, version, other);
     }
 
     @Override
     public String webSvg(MapModel map) {
-        return new String(MapDrawings.webSvg(map, theme, WebSize.STANDARD).bytes(), StandardCharsets.UTF_8);
+        return new String(MapDrawings.webSvg(map, theme, WebSize.STANDARD, DrawOptions.web().inLanguage(wording)).bytes(),
+                StandardCharsets.UTF_8);
     }
 
     @Override
     public byte[] printSvg(MapModel map) {
-        DrawnMap drawn = MapDrawings.printSvg(map, printTheme, printSize);
+        DrawnMap drawn = MapDrawings.printSvg(map, printTheme, printSize, DrawOptions.print().inLanguage(wording));
         preflight.put(map.id(), PrintPreflight.check(map, printTheme, drawn, "maps/" + map.id() + "/" + map.id() + ".svg"));
         return drawn.bytes();
     }
 
     @Override
     public byte[] pdf(MapModel map) {
-        return MapDrawings.pdf(map, printTheme, printSize, DrawOptions.print()).bytes();
+        return MapDrawings.pdf(map, printTheme, printSize, DrawOptions.print().inLanguage(wording)).bytes();
     }
 
     @Override
     public byte[] png(MapModel map, int widthPx, int scale) {
-        return MapDrawings.png(map, theme, widthPx, scale).bytes();
+        return MapDrawings.png(map, theme, widthPx, scale, DrawOptions.web().withTitle(true).inLanguage(wording)).bytes();
     }
 
     /** The 2x PNG, and the 1x made from it ({@link MapDrawings#pngPair}): the map is painted once for both. */
     @Override
     public byte[][] pngs(MapModel map, int widthPx) {
-        List<DrawnMap> pair = MapDrawings.pngPair(map, theme, widthPx);
+        List<DrawnMap> pair = MapDrawings.pngPair(map, theme, widthPx, DrawOptions.web().withTitle(true).inLanguage(wording));
         return new byte[][] {pair.get(0).bytes(), pair.get(1).bytes()};
     }
 
@@ -77,7 +91,7 @@ public final class DrawingArtwork implements MapArtwork {
     public String fingerprint() {
         if (fingerprint == null) {
             fingerprint = new Sha256().add(version).add(DrawingCode.fingerprint()).add(theme.toString())
-                    .add(printTheme.toString()).add(printSize.toString()).hex();
+                    .add(printTheme.toString()).add(printSize.toString()).add(wording.fingerprint()).hex();
         }
         return fingerprint;
     }

@@ -94,7 +94,7 @@ public final class LastPublish {
         names.add(ProjectFile.FILE_NAME);
         project.file().regions().values().stream().map(RegionSourceSpec::file).forEach(names::add);
         project.file().figures().values().stream().map(FigureSourceSpec::file).forEach(names::add);
-        for (String folder : List.of("themes", "templates")) {
+        for (String folder : List.of("themes", "templates", "wording")) {
             Path dir = project.dir().resolve(folder);
             if (Files.isDirectory(dir)) {
                 try (Stream<Path> files = Files.walk(dir)) {

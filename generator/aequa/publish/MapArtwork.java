@@ -1,6 +1,7 @@
 package aequa.publish;
 
 import aequa.atlas.MapModel;
+import aequa.wording.Wording;
 
 /**
  * What publishing needs from the drawing stage: the pictures of one map. The publisher asks for them only
@@ -37,6 +38,14 @@ public interface MapArtwork {
      */
     default byte[][] pngs(MapModel map, int widthPx) {
         return new byte[][] {png(map, widthPx, 1), png(map, widthPx, 2)};
+    }
+
+    /**
+     * The same artwork with every word and number in {@code wording}'s language. The default (for artwork
+     * without words) is this artwork itself.
+     */
+    default MapArtwork inLanguage(Wording wording) {
+        return this;
     }
 
     /**

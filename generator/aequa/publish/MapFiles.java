@@ -10,10 +10,20 @@ record MapFiles(String fileId, String page, String figures, String printSvg, Str
                 String pngDouble, String csv, String embed, String fragment) {
 
     static MapFiles of(String fileId) {
-        String dir = "maps/" + fileId + "/";
+        return of("", fileId);
+    }
+
+    /** The files of a map in one language's folder: {@code prefix} is "" for the first language, else "TAG/". */
+    static MapFiles of(String prefix, String fileId) {
+        String dir = prefix + "maps/" + fileId + "/";
         return new MapFiles(fileId, dir + "index.html", dir + "figures.html", dir + fileId + ".svg", dir + fileId + ".pdf",
                 dir + fileId + "-web.svg", dir + fileId + ".png", dir + fileId + "-2x.png", dir + fileId + ".csv",
                 dir + "embed.html", dir + fileId + "-fragment.html");
+    }
+
+    /** The language folder these files are in: "" for the first language, else "TAG/". */
+    String languagePrefix() {
+        return page.substring(0, page.length() - ("maps/" + fileId + "/index.html").length());
     }
 
     /** The files the drawing stage makes. */

@@ -79,6 +79,7 @@ final class MapFingerprint {
                 }
                 wkb.write(region.planarM(), (buf, len) -> out.write(buf, 0, len));
             }
+            wkb.write(map.outlinesM(), (buf, len) -> out.write(buf, 0, len));
         } catch (IOException e) {
             throw new UncheckedIOException("hashing in memory failed", e);
         }

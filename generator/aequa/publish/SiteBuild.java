@@ -27,6 +27,7 @@ import aequa.pages.MapPageView;
 import aequa.pages.PageRenderer;
 import aequa.pages.SiteView;
 import aequa.publish.PublishProgress.Stage;
+import aequa.wording.Wording;
 
 /** One run of {@link SitePublisher#publish}: holds the state of a single build; used once, under the lock. */
 final class SiteBuild {
@@ -72,14 +73,16 @@ final class SiteBuild {
         }
         previous = OutputManifest.read(out, json);
         List<String> ids = atlas.maps().stream().map(MapModel::id).toList();
-        List<MapFiles> files = SafePaths.distinctFileSafeIds(ids).stream().map(MapFiles::of).toList();
+        List<String> fileIds = SafePaths.distinctFileSafeIds(ids);
+        List<SiteLanguage> languages = SiteLanguage.of(atlas.wordings());
         byte[] themeCss = ThemeStyles.find(atlas.projectDir(), atlas.project().site().theme());
         // templates and assets read once: the hash and the copied assets come from the same bytes
         Map<String, byte[]> sources = new LinkedHashMap<>();
         Stream.concat(PageRenderer.TEMPLATE_NAMES.stream(), PageRenderer.ASSET_NAMES.stream())
                 .forEach(name -> sources.put(name, renderer.source(name)));
-        String siteHash = siteHash(sources, themeCss);
-        SiteView site = SiteViews.site(atlas.project().site());
+        Sha256 wordingHash = new Sha256();
+        atlas.wordings().forEach(w -> wordingHash.add(w.fingerprint()));
+        String siteHash = new Sha256().add(siteHash(sources, themeCss)).add(wordingHash.hex()).hex();
         progress.step(Stage.PREPARE, 1, 1);
 
         try (StagingFolder folder = StagingFolder.create(out, lock.runId())) {
@@ -88,43 +91,61 @@ final class SiteBuild {
             Sha256 edition = new Sha256();
             List<String> fingerprints = IntStream.range(0, count).parallel()
                     .mapToObj(i -> MapFingerprint.of(atlas.maps().get(i))).toList();
-            List<String> drawHashes = fingerprints.stream().map(this::drawHash).toList();
-            int atOnce = MapPictures.mapsAtOnce();
-            for (int first = 0; first < count; first += atOnce) {
-                // the maps of a batch are drawn at the same time; their files are written one map after another
-                List<Optional<MapPictures>> pictures = IntStream.range(first, Math.min(count, first + atOnce)).parallel()
-                        .mapToObj(i -> reusable(files.get(i).drawn(), drawHashes.get(i)) ? Optional.<MapPictures>empty()
-                                : Optional.of(MapPictures.draw(artwork, atlas.maps().get(i), options.pngWidthPx())))
-                        .toList();
-                for (int i = first; i < Math.min(count, first + atOnce); i++) {
-                    progress.step(Stage.MAPS, i, count);
-                    edition.add(files.get(i).fileId()).add(fingerprints.get(i));
-                    buildMap(atlas.maps().get(i), drawHashes.get(i), pictures.get(i - first), files.get(i),
-                            renderer, site, siteHash);
+            for (int i = 0; i < count; i++) {
+                edition.add(fileIds.get(i)).add(fingerprints.get(i));
+            }
+            int steps = count * languages.size();
+            for (int l = 0; l < languages.size(); l++) {
+                SiteLanguage language = languages.get(l);
+                SiteView site = SiteViews.site(atlas.project().site(), language, languages);
+                MapArtwork artwork = this.artwork.inLanguage(language.wording());
+                List<MapFiles> files = fileIds.stream().map(id -> MapFiles.of(language.prefix(), id)).toList();
+                List<String> drawHashes = fingerprints.stream().map(f -> drawHash(f, artwork)).toList();
+                int atOnce = MapPictures.mapsAtOnce();
+                for (int first = 0; first < count; first += atOnce) {
+                    // the maps of a batch are drawn at the same time; their files are written one map after another
+                    List<Optional<MapPictures>> pictures = IntStream.range(first, Math.min(count, first + atOnce)).parallel()
+                            .mapToObj(i -> reusable(files.get(i).drawn(), drawHashes.get(i)) ? Optional.<MapPictures>empty()
+                                    : Optional.of(MapPictures.draw(artwork, atlas.maps().get(i), options.pngWidthPx())))
+                            .toList();
+                    for (int i = first; i < Math.min(count, first + atOnce); i++) {
+                        progress.step(Stage.MAPS, l * count + i, steps);
+                        buildMap(atlas.maps().get(i), drawHashes.get(i), pictures.get(i - first), files.get(i),
+                                renderer, site, siteHash);
+                    }
                 }
             }
-            progress.step(Stage.MAPS, count, count);
+            progress.step(Stage.MAPS, steps, steps);
 
             progress.step(Stage.REPORT, 0, 1);
             String digest = edition.hex();
             String pagesHash = new Sha256().add(siteHash).add(digest).add(CanonicalBytes.of(findings)).hex();
-            List<String> sitePages = List.of(SiteReport.FILE_NAME, "index.html", "method.html", "changes.html");
+            List<String> sitePages = new ArrayList<>(List.of(SiteReport.FILE_NAME));
+            languages.forEach(language -> sitePages.addAll(language.sitePages()));
             int changedMaps;
             if (reusable(sitePages, pagesHash)) {
                 sitePages.forEach(path -> carryOver(path, pagesHash));
                 changedMaps = -1;
                 progress.step(Stage.REPORT, 1, 1);
             } else {
-                ArrayNode maps = SiteReport.maps(atlas, files, json);
+                List<MapFiles> rootFiles = fileIds.stream().map(MapFiles::of).toList();
+                ArrayNode maps = SiteReport.maps(atlas, rootFiles, json);
                 Optional<JsonNode> previousReport = SiteReport.readPrevious(out, json);
                 JsonNode changes = EditionChanges.compare(previousReport, maps, digest, json);
                 changedMaps = changes.path("maps").size();
                 put(SiteReport.FILE_NAME, SiteReport.write(atlas, maps, digest, findings, changes, json), pagesHash);
                 progress.step(Stage.REPORT, 1, 1);
                 progress.step(Stage.PAGES, 0, 1);
-                put("index.html", utf8(renderer.renderIndex(site, SiteViews.index(atlas, files))), pagesHash);
-                put("method.html", utf8(renderer.renderMethod(site, SiteViews.method(atlas, files))), pagesHash);
-                put("changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files))), pagesHash);
+                for (SiteLanguage language : languages) {
+                    SiteView site = SiteViews.site(atlas.project().site(), language, languages);
+                    Wording wording = language.wording();
+                    // links from a language's site pages to its map pages are relative to that language's root
+                    List<MapFiles> files = fileIds.stream().map(MapFiles::of).toList();
+                    String p = language.prefix();
+                    put(p + "index.html", utf8(renderer.renderIndex(site, SiteViews.index(atlas, files, wording))), pagesHash);
+                    put(p + "method.html", utf8(renderer.renderMethod(site, SiteViews.method(atlas, files, wording))), pagesHash);
+                    put(p + "changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files, wording))), pagesHash);
+                }
             }
             for (String asset : PageRenderer.ASSET_NAMES) {
                 put(asset, sources.get(asset), siteHash);
@@ -153,7 +174,7 @@ final class SiteBuild {
         }
     }
 
-    private String drawHash(String fingerprint) {
+    private String drawHash(String fingerprint, MapArtwork artwork) {
         return new Sha256().add(fingerprint).add(artwork.fingerprint()).add(Integer.toString(options.pngWidthPx())).hex();
     }
 
@@ -163,7 +184,9 @@ final class SiteBuild {
         String webSvg = null;
         if (drawn.isEmpty()) {
             files.drawn().forEach(path -> carryOver(path, drawHash));
-            mapsReused.add(map.id());
+            if (files.languagePrefix().isEmpty()) {
+                mapsReused.add(map.id()); // counted once, in the first language: every language draws the same maps
+            }
         } else {
             MapPictures pictures = drawn.get();
             webSvg = pictures.webSvg();
@@ -175,7 +198,9 @@ final class SiteBuild {
             write(files.pdf(), pictures.pdf(), drawHash);
             write(files.png(), pictures.png(), drawHash);
             write(files.pngDouble(), pictures.pngDouble(), drawHash);
-            mapsDrawn.add(map.id());
+            if (files.languagePrefix().isEmpty()) {
+                mapsDrawn.add(map.id());
+            }
         }
         if (reusable(files.written(), pageHash)) {
             files.written().forEach(path -> carryOver(path, pageHash));
@@ -184,12 +209,15 @@ final class SiteBuild {
         if (webSvg == null) {
             webSvg = Files.readString(out.resolve(files.webSvg()), StandardCharsets.UTF_8);
         }
-        MapPageView page = MapViews.page(map, files, webSvg);
+        String prefix = files.languagePrefix();
+        MapPageView page = MapViews.page(map, files, webSvg, site.wording());
         EmbedView embed = MapViews.embed(map, files, webSvg);
-        write(files.page(), utf8(renderer.renderMap(site, page, embed)), pageHash);
-        write(files.embed(), utf8(renderer.renderEmbed(site, page, embed)), pageHash);
-        write(files.fragment(), utf8(renderer.renderFragment(site, page, embed, FragmentSvg.of(webSvg))), pageHash);
-        write(files.figures(), utf8(renderer.renderFigures(site, MapViews.figures(map, files))), pageHash);
+        write(files.page(), utf8(renderer.renderMap(site, page, files.page().substring(prefix.length()), embed)), pageHash);
+        write(files.embed(), utf8(renderer.renderEmbed(site, page, files.embed().substring(prefix.length()), embed)), pageHash);
+        write(files.fragment(), utf8(renderer.renderFragment(site, page, files.fragment().substring(prefix.length()), embed,
+                FragmentSvg.of(webSvg))), pageHash);
+        write(files.figures(), utf8(renderer.renderFigures(site, MapViews.figures(map, files, site.wording()),
+                files.figures().substring(prefix.length()))), pageHash);
         write(files.csv(), FiguresCsv.write(map), pageHash);
     }
 

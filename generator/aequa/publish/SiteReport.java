@@ -29,7 +29,8 @@ import aequa.projection.ProjectionParameter;
  * {@value #FILE_NAME} at the output root: the machine-readable account of a publish.
  *
  * <p>Layout (keys in this order, always): {@code format}, {@code site}, {@code editionDigest} (SHA-256 of
- * the {@code maps} section, so scripts and the next publish can tell whether the figures changed),
+ * the {@code maps} section, so scripts and the next publish can tell whether the figures changed; {@code site}
+ * lists the {@code languages} published, first at the root),
  * {@code maps}, {@code findings} (at most {@value #FINDINGS_PER_KIND} of each code, then one entry per code
  * with the number {@code omitted}), {@code changes}. Per map: id, title, unit, asOf, periods, source, files,
  * projection (family, name, parameters, wkt2, omegaMaxDeg, omegaMeanDeg, worst point and where it is in words,
@@ -92,6 +93,9 @@ final class SiteReport {
         site.put("title", atlas.project().site().title());
         site.put("publisher", atlas.project().site().publisher());
         site.put("notice", atlas.project().site().notice());
+        // the languages published: the first at the root, each other in the folder named by its tag
+        ArrayNode languages = site.putArray("languages");
+        atlas.wordings().forEach(w -> languages.add(w.language().tag()));
         root.put("editionDigest", digest);
         root.set("maps", maps);
         writeFindings(root.putArray("findings"), findings);

@@ -31,6 +31,8 @@ import aequa.project.MissingFigures;
  *   <li>{@code join-indicator-missing} (error): an indicator the map uses is not in the source;</li>
  *   <li>{@code join-key-unmatched} (warning): a key in the statistics matches no region, each listed,
  *       with a hint when it would match under relaxed key matching;</li>
+ *   <li>{@code join-region-dropped} (warning): a key whose region was in the geometry file but left out
+ *       (for example an outline enclosing no area), with the reason; not counted as unmatched;</li>
  *   <li>{@code join-relaxed-match} (note): under relaxed matching, each key that matched only in its
  *       relaxed form;</li>
  *   <li>{@code join-duplicate-key} (error): a second cell for the same region, indicator and period (the
@@ -61,7 +63,7 @@ final class FigureJoin {
     }
 
     static FigureJoin join(MapFigureSettings settings, FigureTable table, List<String> periods,
-                           List<RegionArea> regions, Findings findings) {
+                           List<RegionArea> regions, Map<String, String> droppedRegions, Findings findings) {
         List<String> regionKeys = regions.stream().map(RegionArea::key).toList();
         KeyMatcher matcher = new KeyMatcher(regionKeys);
         Map<Slot, FigureCell> joined = new HashMap<>();
@@ -113,11 +115,18 @@ final class FigureJoin {
                 }
             }
         }
+        Map<String, FigureCell> ofDropped = new LinkedHashMap<>();
+        unmatched.keySet().stream().filter(droppedRegions::containsKey).toList()
+                .forEach(key -> ofDropped.put(key, unmatched.remove(key)));
         if (table.hasIndicator(settings.indicator())) {
             reportLowMatch(table, settings, matcher, regionKeys, joined, unmatched.keySet(), findings);
         }
         reportRelaxedMatches(table, relaxedMatches, findings);
         reportUnmatched(table, matcher, unmatched, findings);
+        ofDropped.forEach((key, cell) -> findings.add(Finding.warning("join-region-dropped", table.file(), "row " + cell.row(),
+                "The statistics key \"" + key + "\" belongs to a region of the geometry that was left out: "
+                        + droppedRegions.get(key) + "; its figure is not shown.",
+                "Fix that region's outline in the geometry file (its own finding says what is wrong).")));
         if (table.hasIndicator(settings.indicator())) {
             reportMissingRegions(table, settings, periods, regionKeys, joined, findings);
         }

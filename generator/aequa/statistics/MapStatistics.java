@@ -40,9 +40,20 @@ public final class MapStatistics {
      */
     public static MapFigures compute(MapSpec map, FigureTable table, List<RegionArea> regions, ChecksSpec checks,
                                      Findings findings) {
+        return compute(map, table, regions, java.util.Map.of(), checks, findings);
+    }
+
+    /**
+     * As {@link #compute(MapSpec, FigureTable, List, ChecksSpec, Findings)}, knowing which regions of the geometry
+     * file were left out and why, so a figure keyed to one is reported as such, not as matching no region.
+     *
+     * @param droppedRegions why each left-out region was left out, by key (for example "its outline encloses no area")
+     */
+    public static MapFigures compute(MapSpec map, FigureTable table, List<RegionArea> regions,
+                                     java.util.Map<String, String> droppedRegions, ChecksSpec checks, Findings findings) {
         MapFigureSettings settings = MapFigureSettings.parse(map, checks, findings);
         List<String> periods = choosePeriods(settings, table, findings);
-        FigureJoin join = FigureJoin.join(settings, table, periods, regions, findings);
+        FigureJoin join = FigureJoin.join(settings, table, periods, regions, droppedRegions, findings);
         Normaliser normaliser = new Normaliser(settings, table, findings);
         TreeMap<String, List<RegionFigure>> byRegion = new TreeMap<>();
         List<Double> reportedValues = new ArrayList<>();

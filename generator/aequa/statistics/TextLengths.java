@@ -60,7 +60,7 @@ public final class TextLengths {
                         String.format(Locale.ROOT, "The name \"%s\" is too long; it is shortened to %d characters.",
                                 Excerpt.of(region.name()), MAX_NAME_CHARS),
                         "Check that the name property is the right one."));
-                region = new Region(region.key(), shorten(region.name()), region.lonLat());
+                region = region.withName(shorten(region.name()));
             }
             kept.add(region);
         }

@@ -25,11 +25,11 @@ final class CellInterpreter {
     static final double EXACT_LIMIT = 9_007_199_254_740_992.0;
 
     private final FigureSourceSettings settings;
-    private final NumberText numbers;
+    private final NumberParser numbers;
 
     CellInterpreter(FigureSourceSettings settings) {
         this.settings = settings;
-        this.numbers = new NumberText(settings.decimal(), settings.thousands());
+        this.numbers = new NumberParser(settings.decimal(), settings.thousands());
     }
 
     Reading read(SourceField field) {

@@ -179,7 +179,11 @@ final class GeoJsonRegionReader {
             }
             boolean isKey = name.equals(spec.key());
             boolean isName = name.equals(spec.name());
-            if ((isKey || isName) && (value == JsonToken.VALUE_STRING || value.isNumeric())) {
+            boolean scalar = value == JsonToken.VALUE_STRING || value.isNumeric();
+            if (scalar && !isKey && !isName) {
+                Region.keep(feature.attributes, name, parser.getText());
+            }
+            if ((isKey || isName) && scalar) {
                 if (isKey) {
                     feature.keyProperty = parser.getText();
                 }
@@ -276,7 +280,7 @@ final class GeoJsonRegionReader {
             return;
         }
         var geometry = feature.polygons == null ? RegionGeometries.empty() : rings.assemble(feature.polygons, place);
-        regions.add(new Region(key, feature.name, geometry));
+        regions.add(new Region(key, feature.name, geometry, feature.attributes));
     }
 
     /** RFC 7946 (section 4) dropped the crs member; older files may still name a CRS other than WGS 84 lon/lat. */
@@ -314,6 +318,7 @@ final class GeoJsonRegionReader {
         String keyProperty;
         String keyWrongType;
         String name;
+        final java.util.Map<String, String> attributes = new java.util.HashMap<>();
         String geometryType;
         List<List<DoubleList>> polygons;
         boolean unusable;

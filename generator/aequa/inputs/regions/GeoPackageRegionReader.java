@@ -140,12 +140,27 @@ final class GeoPackageRegionReader {
         return transform;
     }
 
+    /** The row's other text and number columns (after the three named ones, {@code SELECT *} repeats the row). */
+    private static java.util.Map<String, String> otherColumns(ResultSet rs, String... skipped) throws SQLException {
+        java.util.Map<String, String> kept = new java.util.HashMap<>();
+        var meta = rs.getMetaData();
+        for (int c = 4; c <= meta.getColumnCount(); c++) {
+            String column = meta.getColumnName(c);
+            Object value = rs.getObject(c);
+            if (List.of(skipped).contains(column) || !(value instanceof String || value instanceof Number)) {
+                continue;
+            }
+            Region.keep(kept, column, value.toString());
+        }
+        return kept;
+    }
+
     private List<Region> readFeatures(Connection connection, String layer, String geometryColumn,
                                       CoordinateSequenceFilter toLonLat) throws SQLException {
         String keyColumn = RegionSourceSpec.FEATURE_ID.equals(spec.key()) ? primaryKey(connection, layer) : spec.key();
         String nameColumn = spec.name().isEmpty() ? keyColumn : spec.name();
-        String sql = "SELECT " + SqliteColumns.quote(keyColumn) + ", " + SqliteColumns.quote(nameColumn) + ", " + SqliteColumns.quote(geometryColumn)
-                + " FROM " + SqliteColumns.quote(layer) + " ORDER BY rowid";
+        String sql = "SELECT " + SqliteColumns.quote(keyColumn) + ", " + SqliteColumns.quote(nameColumn)  + ", " + SqliteColumns.quote(geometryColumn)
+                + ", * FROM " + SqliteColumns.quote(layer) + " ORDER BY rowid";
         WKBReader wkb = new WKBReader(RegionGeometries.FACTORY);
         List<Region> regions = new ArrayList<>();
         try (Statement s = connection.createStatement(); ResultSet rs = s.executeQuery(sql)) {
@@ -168,7 +183,7 @@ final class GeoPackageRegionReader {
                     geometry.apply(toLonLat);
                     geometry.geometryChanged();
                 }
-                regions.add(new Region(key, rs.getString(2), geometry));
+                regions.add(new Region(key, rs.getString(2), geometry, otherColumns(rs, keyColumn, nameColumn, geometryColumn)));
             }
         }
         return regions;

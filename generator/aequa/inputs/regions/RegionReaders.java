@@ -12,6 +12,7 @@ import java.util.regex.Pattern;
 
 import aequa.findings.Finding;
 import aequa.findings.Findings;
+import aequa.project.NamePattern;
 import aequa.project.RegionSourceSpec;
 
 /**
@@ -62,6 +63,15 @@ public final class RegionReaders {
 
     /** As {@link #read(Path, RegionSourceSpec, SourceCrsResolver, Findings)}, saying whether borders are shared. */
     public static RegionSource readSource(Path projectDir, RegionSourceSpec spec, SourceCrsResolver crs, Findings findings) {
+        if (NamePattern.isPattern(spec.name())) {
+            RegionSourceSpec unnamed = new RegionSourceSpec(spec.file(), spec.key(), "", spec.layer(), spec.object(), spec.insets());
+            RegionSource read = readFile(projectDir, unnamed, crs, findings);
+            return new RegionSource(RegionNames.named(read.regions(), spec, findings), read.bordersShared());
+        }
+        return readFile(projectDir, spec, crs, findings);
+    }
+
+    private static RegionSource readFile(Path projectDir, RegionSourceSpec spec, SourceCrsResolver crs, Findings findings) {
         Path path = projectDir.resolve(spec.file());
         String file = spec.file();
         String name = path.getFileName().toString().toLowerCase(Locale.ROOT);

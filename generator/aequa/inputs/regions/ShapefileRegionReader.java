@@ -144,7 +144,13 @@ final class ShapefileRegionReader {
                 geometry.apply(toLonLat);
                 geometry.geometryChanged();
             }
-            regions.add(new Region(key, nameField == -1 ? key : attributes[nameField], geometry));
+            java.util.Map<String, String> kept = new java.util.HashMap<>();
+            for (int f = 0; f < attributes.length; f++) {
+                if (f != keyField && f != nameField) {
+                    Region.keep(kept, table.fieldNames().get(f), attributes[f]);
+                }
+            }
+            regions.add(new Region(key, nameField == -1 ? key : attributes[nameField], geometry, kept));
         }
         if (table.declaredRecords() > records.recordsRead()) {
             findings.add(Finding.warning("shapefile-dbf-long", file, files.name(Member.DBF),

@@ -132,6 +132,12 @@ final class TopoJsonRegionReader {
             }
             rings.add(polygonRings);
         }
-        return Optional.of(new Region(key, name, assembler.assemble(rings, featurePlace)));
+        java.util.Map<String, String> attributes = new java.util.HashMap<>();
+        geometry.path("properties").fields().forEachRemaining(p -> {
+            if ((p.getValue().isTextual() || p.getValue().isNumber()) && !p.getKey().equals(spec.key()) && !p.getKey().equals(spec.name())) {
+                Region.keep(attributes, p.getKey(), p.getValue().asText());
+            }
+        });
+        return Optional.of(new Region(key, name, assembler.assemble(rings, featurePlace), attributes));
     }
 }

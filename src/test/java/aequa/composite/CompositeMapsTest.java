@@ -48,6 +48,7 @@ class CompositeMapsTest {
     private static MapModel counties;
     private static MapModel countiesOneProjection;
     private static MapModel statesScaled;
+    private static MapModel countiesCircles;
 
     @BeforeAll
     static void load(@TempDir Path project) throws IOException {
@@ -76,6 +77,7 @@ class CompositeMapsTest {
                 "    insets:",
                 "      - { name: Alaska, regions: [\"02\"], scale: 0.25, corner: bottom-left }",
                 "      - { name: Hawaii, box: [-161, 18, -154, 23] }",
+                "  - { id: counties-circles, regions: counties, figures: counties, indicator: code_number, measure: count, display: circles }",
                 ""));
         Findings findings = new Findings();
         LoadedProject loaded = ProjectLoader.load(project, findings).orElseThrow(() -> new AssertionError(findings.list()));
@@ -84,6 +86,7 @@ class CompositeMapsTest {
         counties = atlas.maps().get(0);
         countiesOneProjection = atlas.maps().get(1);
         statesScaled = atlas.maps().get(2);
+        countiesCircles = atlas.maps().get(3);
     }
 
     @Test
@@ -172,6 +175,80 @@ class CompositeMapsTest {
         assertEquals(0.25, drawn.planarM().getArea() / 1e6 / drawn.geodesicAreaKm2(), 0.005);
         assertEquals(List.of("15"), statesScaled.parts().get(2).keys());
         assertEquals(3, statesScaled.parts().size(), "the other territories stay in the main part of a listed map");
+    }
+
+    /**
+     * Circle maps and small multiples draw the same composite: a circle map of the counties has the choropleth's
+     * parts and frames, and every panel of small multiples draws every part's regions and frame.
+     */
+    @Test
+    void circleMapsAndSmallMultiplesUseTheSameComposite() {
+        assertEquals(counties.parts().stream().map(p -> p.name() + p.keys() + p.frame()).toList(),
+                countiesCircles.parts().stream().map(p -> p.name() + p.keys() + p.frame()).toList());
+        String circles = new String(aequa.drawing.MapDrawings.webSvg(countiesCircles, aequa.drawing.Themes.bundled("daylight"),
+                aequa.drawing.WebSize.STANDARD).bytes(), java.nio.charset.StandardCharsets.UTF_8);
+        assertTrue(circles.contains("id='frame-part-1'") && circles.contains("id='regions-part-1'") && circles.contains("id='symbols'"));
+        List<String> periods = List.of("2020", "2021");
+        List<MapRegion> twice = counties.regions().stream().map(r -> new MapRegion(r.key(), r.name(), r.geodesicAreaKm2(),
+                r.mapAreaRatio(), r.planarM(), List.of(r.values().get(0), r.values().get(0)))).toList();
+        MapModel multiples = new MapModel(counties.spec(), periods, counties.projection(), twice, counties.classification(),
+                counties.ramp(), counties.areaAudit(), counties.notices(), counties.parts(), counties.outlinesM());
+        String svg = new String(aequa.drawing.MapDrawings.webSvg(multiples, aequa.drawing.Themes.bundled("daylight"),
+                aequa.drawing.WebSize.STANDARD).bytes(), java.nio.charset.StandardCharsets.UTF_8);
+        for (MapPart part : counties.parts()) {
+            long layers = java.util.regex.Pattern.compile("id='regions-" + part.id() + "-").matcher(svg).results().count();
+            assertEquals(2, layers, part.name() + ": a layer per panel");
+            if (!part.main()) {
+                assertEquals(2, java.util.regex.Pattern.compile("id='frame-" + part.id() + "-").matcher(svg).results().count(),
+                        part.name() + ": a frame per panel");
+            }
+        }
+    }
+
+    /**
+     * A part at its own area scale carries its own area-scale square: in the print SVG, the square in Alaska's
+     * frame and the main map's square state areas in the ratio of their labels times the part's declared scale
+     * (an equal-area drawing's page area is proportional to ground area times the scale: Snyder 1987, p. 4).
+     */
+    @Test
+    void aPartAtItsOwnAreaScaleHasItsOwnSquare() {
+        MapPart alaska = statesScaled.parts().get(1);
+        assertTrue(alaska.scaleBandM() > 0);
+        assertTrue(counties.parts().stream().allMatch(p -> p.scaleBandM() == 0), "parts at the main scale need no square");
+        String svg = new String(aequa.drawing.MapDrawings.printSvg(statesScaled, aequa.drawing.Themes.bundled("newsprint"),
+                aequa.drawing.PrintSize.of(aequa.drawing.PrintPreset.TWO_COLUMNS)).bytes(), java.nio.charset.StandardCharsets.UTF_8);
+        double[] own = square(group(svg, "frame-part-1"));
+        double[] main = square(group(svg, "area-scale"));
+        assertEquals(alaska.areaScale() * own[1] / main[1], own[0] * own[0] / (main[0] * main[0]), 1e-3);
+        assertTrue(!group(svg, "frame-part-2").contains("km²"), "Hawaii, at the main scale, has no square");
+    }
+
+    private static String group(String svg, String id) {
+        int start = svg.indexOf("<g id='" + id + "'>");
+        assertTrue(start >= 0, id);
+        int depth = 0;
+        int i = start;
+        do {
+            int open = svg.indexOf("<g", i + 1);
+            int close = svg.indexOf("</g>", i + 1);
+            if (open >= 0 && open < close) {
+                depth++;
+                i = open;
+            } else {
+                depth--;
+                i = close;
+            }
+        } while (depth >= 0);
+        return svg.substring(start, i);
+    }
+
+    /** The side of the group's filled square (page units) and the area its label states, km². */
+    private static double[] square(String group) {
+        var rect = java.util.regex.Pattern.compile("<rect x='[^']*' y='[^']*' width='([0-9.]+)' height='([0-9.]+)' style='fill:").matcher(group);
+        assertTrue(rect.find(), group);
+        var label = java.util.regex.Pattern.compile(">([0-9,]+) km²<").matcher(group);
+        assertTrue(label.find(), group);
+        return new double[] {Double.parseDouble(rect.group(1)), Double.parseDouble(label.group(1).replace(",", ""))};
     }
 
     /**

@@ -31,7 +31,7 @@ record RealRegions(List<Region> regions, Map<String, Double> areaKm2ByKey) {
         List<Region> densified = new ArrayList<>();
         Map<String, Double> areas = new LinkedHashMap<>();
         for (Region r : valid) {
-            Region fine = new Region(r.key(), r.name(), LonLatDensifier.densify(r.lonLat(), LonLatDensifier.MAX_STEP_DEG));
+            Region fine = r.withLonLat(LonLatDensifier.densify(r.lonLat(), LonLatDensifier.MAX_STEP_DEG));
             densified.add(fine);
             areas.put(r.key(), GeodesicArea.areaKm2(fine.lonLat()));
         }

@@ -8,6 +8,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 import aequa.atlas.MapModel;
+import aequa.wording.Wording;
 
 /** What the words under the map may carry: source, date, the author's notes; never the checks' findings. */
 class CaptionTest {
@@ -18,9 +19,9 @@ class CaptionTest {
         String finding = "The statistics key \"02275\" matches no region.";
         MapModel withFinding = new MapModel(base.spec(), base.periods(), base.projection(), base.regions(),
                 base.classification(), base.ramp(), base.areaAudit(), List.of(finding));
-        String credits = Caption.credits(withFinding);
+        String credits = Caption.credits(withFinding, Wording.english());
         // the fixture has no notes: the credits are the source and the date, nothing else
         assertEquals("Source: Invented survey of the Ostmark health office. Figures: 2024.", credits);
-        assertFalse(Caption.caption(withFinding, null).contains("matches no region"));
+        assertFalse(Caption.caption(withFinding, null, Wording.english()).contains("matches no region"));
     }
 }

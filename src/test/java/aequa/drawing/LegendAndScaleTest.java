@@ -12,6 +12,7 @@ import org.w3c.dom.Element;
 
 import aequa.atlas.MapModel;
 import aequa.project.ClassMethod;
+import aequa.wording.Wording;
 
 /** The legend's counts and the area scale, read back from the drawn SVG. */
 class LegendAndScaleTest {
@@ -70,7 +71,7 @@ class LegendAndScaleTest {
             double heightMm = Double.parseDouble(rect.getAttribute("height"));
             double drawnKm2 = widthMm * heightMm / Math.pow(map.scaleUnitsPerM(), 2) / 1e6;
             assertEquals(1.0, drawnKm2 / scale.areaKm2(), 1e-3, preset + ": drawn square " + drawnKm2 + " km2");
-            assertTrue(SvgDoc.texts(svg.byId("area-scale")).contains(scale.label()));
+            assertTrue(SvgDoc.texts(svg.byId("area-scale")).contains(scale.label(Wording.english().numbers())));
 
             Element square = svg.byId(Ids.of("r", MapFixtures.SQUARE_KEY));
             double squarePathMm2 = SvgDoc.pathArea(SvgDoc.elements(square, "path").get(0).getAttribute("d"));
@@ -87,8 +88,8 @@ class LegendAndScaleTest {
         assertEquals(10, exact.sideU(), 1e-9);
         AreaScale rounded = AreaScale.choose(1e-3, 9);   // 81 km2 -> 50 km2
         assertEquals(50, rounded.areaKm2(), 1e-9);
-        assertEquals("50 km\u00b2", rounded.label());
+        assertEquals("50 km\u00b2", rounded.label(Wording.english().numbers())); // CLDR English: "{0} km²"
         AreaScale big = AreaScale.choose(1e-6, 8);      // 64,000,000 km2 -> 50,000,000 km2
-        assertEquals("50,000,000 km\u00b2", big.label());
+        assertEquals("50,000,000 km\u00b2", big.label(Wording.english().numbers()));
     }
 }

@@ -46,7 +46,7 @@ class OutputFilesTest {
     void thePublishedPairIsOnePaintingAtTwiceTheWidthAndItsTwoByTwoMean() throws IOException {
         MapModel model = MapFixtures.choropleth(14, 12);
         Theme theme = Themes.bundled("daylight");
-        List<DrawnMap> pair = MapDrawings.pngPair(model, theme, 800);
+        List<DrawnMap> pair = MapDrawings.pngPair(model, theme, 800, DrawOptions.web().withTitle(true));
         // javax.imageio is the reference PNG decoder here (ISO/IEC 15948 reader in the JDK)
         BufferedImage single = ImageIO.read(new ByteArrayInputStream(pair.get(0).bytes()));
         BufferedImage twice = ImageIO.read(new ByteArrayInputStream(pair.get(1).bytes()));

@@ -216,9 +216,23 @@ class DemoPublishTest {
             assertTrue(part.path("projection").path("wkt2").asText().startsWith("PROJCRS"));
         }
         String svg = Files.readString(site.resolve("maps/library-cards/library-cards.svg"));
-        assertTrue(svg.contains("id='regions-part-2'") && svg.contains("areas at 4 \u00d7 the main map"), "a layer and a stated scale per part");
+        assertTrue(svg.contains("id='regions-part-2'") && svg.contains("(areas at 4 \u00d7 the main map)"), "a layer and a stated scale per part");
         String method = Files.readString(site.resolve("method.html"));
         assertTrue(method.contains("Drawn at 4 \u00d7 the main map"), "the method page states the scale");
+        assertTrue(group(svg, "frame-part-2").contains("km\u00b2"), "the enlarged part has its own area-scale square");
+        assertTrue(!group(svg, "frame-part-1").contains("km\u00b2"), "a part at the main scale has none");
+        String table = Files.readString(site.resolve("maps/library-cards/figures.html"));
+        assertTrue(table.contains("<th scope=\"col\">Map part</th>"), "the figures table names the parts");
+        assertTrue(table.matches("(?s).*<td>MR-29</td>\\s*<th scope=\"row\">[^<]*</th>\\s*<td>Gannet Isles</td>.*"),
+                "a region of the island group is listed in its part");
+    }
+
+    /** An SVG group by id, up to the next group with an id (its own text sits in groups without one). */
+    private static String group(String svg, String id) {
+        int start = svg.indexOf("<g id='" + id + "'>");
+        assertTrue(start >= 0, id);
+        int next = svg.indexOf("<g id=", start + 1);
+        return svg.substring(start, next < 0 ? svg.length() : next);
     }
 
     private String family(String mapId) {

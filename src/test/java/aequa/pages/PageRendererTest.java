@@ -11,13 +11,15 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
+import aequa.wording.Wording;
+
 /** Escaping guard, project overrides and the site notice on every page. */
 class PageRendererTest {
 
     @TempDir
     Path tmp;
 
-    private static final SiteView SITE = new SiteView("Atlas & <Co>", "", "The data is invented.", "en");
+    private static final SiteView SITE = new SiteView("Atlas & <Co>", "", "The data is invented.", Wording.english());
 
     @Test
     void noBundledTemplateSwitchesEscapingOff() throws IOException {
@@ -51,21 +53,13 @@ class PageRendererTest {
         List<String> pages = List.of(renderer.renderIndex(SITE, new IndexView(List.of())),
                 renderer.renderMethod(SITE, new MethodView(List.of())),
                 renderer.renderChanges(SITE, new ChangesView("First.", List.of(), 0)),
-                renderer.renderFigures(SITE, new FiguresView("m", "T", "u", List.of("2031"), List.of(), "index.html", "m.csv", false)),
+                renderer.renderFigures(SITE, new FiguresView("m", "T", "u", List.of("2031"), List.of(), "index.html", "m.csv", false),
+                        "maps/m/figures.html"),
                 renderer.renderMap(SITE, new MapPageView("m", "T", "u", "2031", "c", "s", "<svg xmlns=\"http://www.w3.org/2000/svg\"/>",
-                        "", "", List.of(), "", List.of(), "figures.html")));
+                        "", "", List.of(), "", List.of(), "figures.html"), "maps/m/index.html"));
         for (String page : pages) {
             assertTrue(page.contains("The data is invented."), page);
-            assertTrue(page.startsWith("<!DOCTYPE html>") && page.contains("<html lang=\"en\">"), page);
+            assertTrue(page.startsWith("<!DOCTYPE html>") && page.contains("<html lang=\"en\" dir=\"ltr\">"), page);
         }
-    }
-
-    @Test
-    void numbersAreFormattedTheSameWhateverTheLocale() {
-        assertEquals("1,234,570", NumberText.of(1_234_567.891));
-        assertEquals("0.000123457", NumberText.of(0.0001234567));
-        assertEquals("-12.5", NumberText.of(-12.5));
-        assertEquals("", NumberText.of(Double.NaN));
-        assertEquals("0.05", NumberText.fixed(0.049999, 2));
     }
 }

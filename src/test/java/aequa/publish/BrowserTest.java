@@ -207,6 +207,63 @@ class BrowserTest {
         return pages;
     }
 
+    /**
+     * The French and Arabic editions of the demo (the project publishes English, French and Arabic): the
+     * page declares its language, the words are French or Arabic, and the Arabic page is laid out right to
+     * left (the site's name moves to the right edge of the masthead, as mirrored layouts place it).
+     */
+    @Test
+    void theFrenchAndArabicEditionsReadInTheirLanguage() throws IOException {
+        String id = report.at("/maps/0/id").asText();
+        JavascriptExecutor js = (JavascriptExecutor) driver;
+        open("fr/maps/" + id + "/index.html");
+        assertEquals("fr", js.executeScript("return document.documentElement.lang"));
+        assertEquals("ltr", js.executeScript("return getComputedStyle(document.body).direction"));
+        assertTrue(driver.findElement(By.cssSelector(".key-block h2, .take-away h2")).getText().matches("Légende des couleurs|Légende des cercles|Téléchargements"));
+        assertTrue(driver.findElement(By.cssSelector(".map-frame svg")).isDisplayed());
+        screenshot("edition-fr.png");
+        open("ar/maps/" + id + "/index.html");
+        assertEquals("ar", js.executeScript("return document.documentElement.lang"));
+        assertEquals("rtl", js.executeScript("return getComputedStyle(document.body).direction"));
+        assertTrue(driver.findElement(By.cssSelector(".take-away h2")).getText().equals("التنزيلات"));
+        Number nameLeft = (Number) js.executeScript("return document.querySelector('.masthead-name').getBoundingClientRect().left");
+        Number width = (Number) js.executeScript("return document.documentElement.clientWidth");
+        assertTrue(nameLeft.doubleValue() > width.doubleValue() / 2, "the site's name sits at the right in Arabic: " + nameLeft);
+        assertTrue(driver.findElement(By.cssSelector(".map-frame svg")).isDisplayed());
+        assertEquals("ltr", js.executeScript("return getComputedStyle(document.querySelector('.map-frame svg')).direction"),
+                "the drawn map keeps its left-to-right layout; its Arabic lines carry their own direction");
+        screenshot("edition-ar.png");
+    }
+
+    /**
+     * axe-core (npm, pinned in .ci/axe/package-lock.json; {@code npm ci --prefix .ci/axe} installs it) run on
+     * English and Arabic pages: no violation of impact serious or critical (axe's WCAG 2 A/AA rules).
+     */
+    @Test
+    void englishAndArabicPagesHaveNoSeriousAccessibilityViolation() throws IOException {
+        Path axe = Path.of(".ci/axe/node_modules/axe-core/axe.min.js");
+        assertTrue(Files.isRegularFile(axe), "axe-core missing: run npm ci --prefix .ci/axe");
+        String axeSource = Files.readString(axe);
+        String id = report.at("/maps/0/id").asText();
+        List<String> problems = new ArrayList<>();
+        driver.manage().timeouts().scriptTimeout(java.time.Duration.ofSeconds(120));
+        for (String page : List.of("index.html", "maps/" + id + "/index.html", "maps/" + id + "/figures.html", "method.html",
+                "ar/index.html", "ar/maps/" + id + "/index.html", "ar/maps/" + id + "/figures.html", "ar/method.html")) {
+            open(page);
+            JavascriptExecutor js = (JavascriptExecutor) driver;
+            js.executeScript(axeSource);
+            Object found = js.executeAsyncScript("const done = arguments[arguments.length - 1];"
+                    + "axe.run(document, {runOnly: {type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']}})"
+                    + ".then(r => done(r.violations.filter(v => v.impact === 'serious' || v.impact === 'critical')"
+                    + ".map(v => v.id + ' (' + v.impact + '): ' + v.nodes.slice(0, 3).map(n => n.target.join(' ')).join(', '))))"
+                    + ".catch(e => done(['axe failed: ' + e]));");
+            for (Object violation : (List<?>) found) {
+                problems.add(page + ": " + violation);
+            }
+        }
+        assertEquals(List.of(), problems);
+    }
+
     private static void open(String page) {
         driver.get(site.resolve(page).toUri().toString());
     }

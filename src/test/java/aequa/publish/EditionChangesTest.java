@@ -159,6 +159,6 @@ class EditionChangesTest {
         var choice = new aequa.projection.ProjectionChoice(aequa.projection.Projections.lambertAzimuthal(centreLonDeg, 52),
                 1, 1, 0, 0, List.of(), "fitted");
         return new aequa.atlas.MapPart(id, name, keys, id.equals("main"), 1, choice,
-                new aequa.planar.AreaAudit(1e-9, "", 1e-4), 100, 0, new aequa.atlas.MapPart.Frame(0, 0, 1, 1), 0);
+                new aequa.planar.AreaAudit(1e-9, "", 1e-4), 100, 0, new aequa.atlas.MapPart.Frame(0, 0, 1, 1), 0, 0, 0);
     }
 }

@@ -15,6 +15,7 @@ import aequa.drawing.Themes;
 import aequa.drawing.PrintPreset;
 import aequa.drawing.PrintSize;
 import aequa.pages.MapPageView;
+import aequa.wording.Wording;
 
 /**
  * The drawn legend and the page's key name each class with the same words, and those words say where a value
@@ -26,7 +27,7 @@ class LegendWordsTest {
     @Test
     void theDrawnLegendAndThePageKeySayTheSameRangesAndABreakValueIsInTheUpperClass() {
         MapModel map = SiteFixtures.map("key-words", SiteFixtures.Texts.plain(), 12, 0.5);
-        List<MapPageView.LegendRow> rows = MapViews.legend(map);
+        List<MapPageView.LegendRow> rows = MapViews.legend(map, Wording.english());
         // the print legend lists every class (the web one may draw a histogram with the end limits only)
         String svg = new String(MapDrawings.printSvg(map, Themes.bundled("newsprint"), PrintSize.of(PrintPreset.TWO_COLUMNS))
                 .bytes(), StandardCharsets.UTF_8);

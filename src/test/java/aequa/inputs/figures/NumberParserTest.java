@@ -12,7 +12,7 @@ import org.junit.jupiter.params.provider.CsvSource;
  * the SI Brochure's rule (BIPM, The International System of Units, 9th ed. 2019, section 5.4.4: digits
  * "may be divided into groups of three").
  */
-class NumberTextTest {
+class NumberParserTest {
 
     @ParameterizedTest(name = "[{0}] decimal {1} thousands [{2}] -> {3}")
     @CsvSource(delimiter = '|', quoteCharacter = '\'', value = {
@@ -32,7 +32,7 @@ class NumberTextTest {
     })
     void accepted(String text, DecimalMark decimal, String thousands, double expected) {
         String separator = thousands.equals("\\'") ? "'" : thousands;
-        assertEquals(expected, new NumberText(decimal, separator).parse(text));
+        assertEquals(expected, new NumberParser(decimal, separator).parse(text));
     }
 
     @ParameterizedTest(name = "[{0}] decimal {1} thousands [{2}] is not a number")
@@ -50,7 +50,7 @@ class NumberTextTest {
             "12.5       | COMMA | ''",
     })
     void refused(String text, DecimalMark decimal, String thousands) {
-        assertTrue(Double.isNaN(new NumberText(decimal, thousands).parse(text)));
+        assertTrue(Double.isNaN(new NumberParser(decimal, thousands).parse(text)));
     }
 
     @ParameterizedTest(name = "hint for [{0}] mentions [{2}]")
@@ -63,7 +63,7 @@ class NumberTextTest {
             "n/a       | POINT | marker",
     })
     void hints(String text, DecimalMark decimal, String mention) {
-        String hint = new NumberText(decimal, "").hint(text);
+        String hint = new NumberParser(decimal, "").hint(text);
         assertTrue(hint.contains(mention), hint);
     }
 }

@@ -17,7 +17,7 @@ import java.util.regex.Pattern;
  * and sign is {@code +}, {@code -} or U+2212 MINUS SIGN. The value is then converted by
  * {@link Double#parseDouble}, which rounds correctly to the nearest double. Infinite results are refused.
  */
-final class NumberText {
+final class NumberParser {
 
     /** Digits grouped by three with a space, no-break space, narrow no-break space or apostrophe. */
     private static final Pattern SPACE_GROUPED = Pattern.compile(
@@ -29,7 +29,7 @@ final class NumberText {
     private final Pattern digitsOtherMarkDigits;
     private final Pattern groupedByOtherMark;
 
-    NumberText(DecimalMark decimal, String thousands) {
+    NumberParser(DecimalMark decimal, String thousands) {
         this.decimal = decimal;
         this.thousands = thousands;
         String d = Pattern.quote(String.valueOf(decimal.character()));

@@ -1,0 +1,50 @@
+package aequa.composite;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.GeometryFactory;
+
+/**
+ * Frame sizes of the layout, on an invented main part (a 1,000 km square, labelled as invented): a long name
+ * takes two lines instead of widening its frame to the whole name, and a part at its own area scale gets a
+ * band for its own square.
+ */
+class PartLayoutTest {
+
+    private static final GeometryFactory GEOMETRY = new GeometryFactory();
+    private static final Envelope MAIN = new Envelope(0, 1_000_000, 0, 1_000_000);
+    private static final List<Geometry> MAIN_REGIONS = List.of(GEOMETRY.toGeometry(MAIN));
+
+    @Test
+    void aLongNameTakesTwoLinesNotTheWholeWidth() {
+        String name = "Guam and Commonwealth of the Northern Mariana Islands";
+        double nameWidthM = PartLayout.nameWidthM(name, MAIN);
+        Envelope islands = new Envelope(0, 20_000, 0, 200_000);
+        PartLayout.Placement placed = PartLayout.place(MAIN_REGIONS,
+                List.of(new PartLayout.Inset(islands, nameWidthM, "", false))).get(0);
+        assertEquals(2, placed.nameLines());
+        assertTrue(placed.frameM().getWidth() < 0.7 * nameWidthM, placed.frameM().getWidth() + " for a name of " + nameWidthM);
+        PartLayout.Placement shortName = PartLayout.place(MAIN_REGIONS,
+                List.of(new PartLayout.Inset(islands, PartLayout.nameWidthM("Guam", MAIN), "", false))).get(0);
+        assertEquals(1, shortName.nameLines());
+        assertEquals(0, shortName.scaleBandM());
+    }
+
+    @Test
+    void aPartAtItsOwnScaleHasRoomForItsSquareBelowItsRegions() {
+        Envelope part = new Envelope(0, 300_000, 0, 300_000);
+        PartLayout.Placement placed = PartLayout.place(MAIN_REGIONS,
+                List.of(new PartLayout.Inset(part, PartLayout.nameWidthM("Far Isle", MAIN), "", true))).get(0);
+        assertTrue(placed.scaleBandM() > 0);
+        // the regions, moved, start above the band
+        assertTrue(part.getMinY() + placed.dyM() >= placed.frameM().getMinY() + placed.scaleBandM() - 1e-6);
+        // and end below the name band
+        assertTrue(part.getMaxY() + placed.dyM() <= placed.frameM().getMaxY() - placed.nameBandM() + 1e-6);
+    }
+}
