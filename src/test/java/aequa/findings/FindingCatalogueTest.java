@@ -30,10 +30,6 @@ class FindingCatalogueTest {
      * fixture is added.
      */
     private static final Map<String, String> WITHOUT_FIXTURE = Map.ofEntries(
-            Map.entry("projection-domain-clips-region",
-                    "needs a forced projection over world-wide regions; ForcedProjectionTest on Natural Earth countries"),
-            Map.entry("projection-pole-inside-region",
-                    "needs a forced oblique aspect over world-wide regions; ForcedProjectionTest on Natural Earth countries"),
             Map.entry("file-type-unknown",
                     "the region readers' guard for `aequa explain`, which hands them any file a user names; a project's"
                             + " checks report project-file-type first; GeoJsonRegionReaderTest names it"),
