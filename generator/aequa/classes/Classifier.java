@@ -18,13 +18,14 @@ import aequa.project.ClassesSpec;
  *
  * <p>Contract:
  * <ul>
- *   <li>NaN means "not classified" (no data, suppressed, not applicable) and is skipped silently; an
- *       infinite value is skipped with a warning (it usually means a division by zero upstream).</li>
- *   <li>Errors in the spec (fewer than 2 classes, manual breaks missing or not strictly
- *       ascending, diverging without a midpoint) are returned as ERROR findings, never thrown; the
- *       classification is then empty. Codes: {@code classes-count-too-small},
- *       {@code classes-manual-breaks-missing}, {@code classes-manual-breaks-not-ascending},
- *       {@code classes-midpoint-missing}.</li>
+ *   <li>NaN means "not classified" (no data, suppressed, not applicable) and is skipped silently. Every
+ *       other value is finite: the normaliser reports a quotient beyond a double's range, with its row, and
+ *       leaves it out; an infinite value here is an {@link IllegalArgumentException}.</li>
+ *   <li>The spec is one the project file's checks accepted ({@code aequa.project.ProjectChecks}, which report
+ *       a bad one with its line and stop before any input is read): at least 2 classes unless unclassed,
+ *       manual breaks given, finite and strictly ascending, a finite midpoint for diverging classes. Any
+ *       other spec is a programming error, an {@link IllegalArgumentException}.</li>
+ *   <li>No value to classify gives the WARNING {@code classes-no-values} and no classification.</li>
  *   <li>When fewer classes than asked for are made (all values equal, fewer distinct values than classes,
  *       ties that make quantile breaks coincide) a NOTE {@code classes-fewer-than-requested} says why.</li>
  *   <li>The limits of quantile, equal-interval and natural-breaks classes are rounded by the rules of
@@ -48,11 +49,8 @@ public final class Classifier {
     public static Classified classify(double[] values, ClassesSpec spec, String file, String place) {
         List<Finding> findings = new ArrayList<>();
         ClassMethod method = spec.method();
-        checkSpec(method, spec, file, place, findings);
-        if (!findings.isEmpty()) {
-            return new Classified(Optional.empty(), findings);
-        }
-        double[] sorted = finiteSorted(values, file, place, findings);
+        requireCheckedSpec(method, spec);
+        double[] sorted = finiteSorted(values);
         if (sorted.length == 0) {
             findings.add(Finding.warning("classes-no-values", file, place,
                     "There is no value to classify.", "Check the join report: no region has a figure."));
@@ -70,45 +68,33 @@ public final class Classifier {
         return new Classified(Optional.of(classification), findings);
     }
 
-    private static void checkSpec(ClassMethod method, ClassesSpec spec, String file, String place,
-                                  List<Finding> findings) {
+    /** The checks of {@code aequa.project.ProjectChecks}, which report a failing spec with its line first. */
+    private static void requireCheckedSpec(ClassMethod method, ClassesSpec spec) {
         if (method == ClassMethod.MANUAL) {
             List<Double> breaks = spec.breaks();
-            if (breaks.isEmpty()) {
-                findings.add(Finding.error("classes-manual-breaks-missing", file, place,
-                        "Manual classes need breaks, and none are given.",
-                        "List the inner class limits under breaks, for example [10, 20, 50]."));
-            }
             for (int i = 0; i < breaks.size(); i++) {
-                Double b = breaks.get(i);
-                boolean bad = b == null || !Double.isFinite(b) || (i > 0 && !(breaks.get(i - 1) < b));
-                if (bad) {
-                    findings.add(Finding.error("classes-manual-breaks-not-ascending", file, place,
-                            "Manual break " + (i + 1) + " (" + b + ") is not a number greater than the one before.",
-                            "List the breaks as numbers in strictly ascending order."));
-                    return;
+                double b = breaks.get(i);
+                if (!Double.isFinite(b) || i > 0 && !(breaks.get(i - 1) < b)) {
+                    throw new IllegalArgumentException("manual breaks must be finite and strictly ascending: " + breaks);
                 }
             }
+            if (breaks.isEmpty()) {
+                throw new IllegalArgumentException("manual classes need breaks");
+            }
         } else if (method != ClassMethod.UNCLASSED && spec.count() < 2) {
-            findings.add(Finding.error("classes-count-too-small", file, place,
-                    "A map needs at least 2 classes; the count is " + spec.count() + ".",
-                    "Set count to 2 or more, or use method unclassed for a continuous ramp."));
+            throw new IllegalArgumentException("at least 2 classes are needed: " + spec.count());
         }
         if (method == ClassMethod.DIVERGING && (spec.midpoint() == null || !Double.isFinite(spec.midpoint()))) {
-            findings.add(Finding.error("classes-midpoint-missing", file, place,
-                    "Diverging classes need a midpoint, and none is given.",
-                    "Set midpoint to the value the colours diverge from, for example 0 or the national rate."));
+            throw new IllegalArgumentException("diverging classes need a finite midpoint: " + spec.midpoint());
         }
     }
 
-    private static double[] finiteSorted(double[] values, String file, String place, List<Finding> findings) {
-        long infinite = Arrays.stream(values).filter(Double::isInfinite).count();
-        if (infinite > 0) {
-            findings.add(Finding.warning("classes-infinite-value", file, place,
-                    infinite + " value(s) are infinite and were left unclassified.",
-                    "Look for a division by zero, for example a region with no population."));
+    /** The values without NaN, sorted; an infinite value is refused (the normaliser keeps them out). */
+    private static double[] finiteSorted(double[] values) {
+        double[] sorted = Arrays.stream(values).filter(v -> !Double.isNaN(v)).toArray();
+        if (Arrays.stream(sorted).anyMatch(Double::isInfinite)) {
+            throw new IllegalArgumentException("values must be finite or NaN");
         }
-        double[] sorted = Arrays.stream(values).filter(Double::isFinite).toArray();
         Arrays.sort(sorted);
         return sorted;
     }

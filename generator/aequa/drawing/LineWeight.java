@@ -29,8 +29,8 @@ public record LineWeight(double pt) {
         }
     }
 
-    /** A preset name or a number of points, as written in a theme file. */
-    @JsonCreator(mode = JsonCreator.Mode.DELEGATING)
+    /** A preset name or a number of points, as written in a theme file ({@code hairline}, {@code "0.3"}, {@code "0.3pt"}). */
+    @JsonCreator
     public static LineWeight parse(String text) {
         String t = text.trim().toLowerCase(Locale.ROOT);
         switch (t) {
@@ -49,6 +49,12 @@ public record LineWeight(double pt) {
                     throw new IllegalArgumentException("not a line weight (hairline, fine, medium, strong or points): " + text, e);
                 }
         }
+    }
+
+    /** A number of points, as a theme file gives it unquoted ({@code border: 0.3}). */
+    @JsonCreator
+    public static LineWeight ofPoints(double pt) {
+        return new LineWeight(pt);
     }
 
     @JsonValue

@@ -91,7 +91,7 @@ public final class CoverageChecks {
             if (work + cost > workBudget) {
                 findings.add(Finding.warning("coverage-check-bounded", file, "",
                         String.format(Locale.ROOT, "The check for gaps and overlaps between neighbours stopped after"
-                                + " %d of %d regions: the regions overlap so much that checking them all would compare"
+                                + " %d of %d regions: their bounding boxes overlap so much that checking them all would compare"
                                 + " more than %,d vertices.", r, regions.size(), workBudget),
                         "Check that the file holds one layer of neighbouring regions, not features piled on top of each other."));
                 return;

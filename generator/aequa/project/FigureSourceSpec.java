@@ -28,6 +28,15 @@ public record FigureSourceSpec(String file, String table, String key, TableLayou
                                String thousands, List<String> missing, List<String> suppressed,
                                List<String> notApplicable, KeyMatching keyMatching, String sheet, Integer headerRow) {
 
+    /** The file name endings read as delimited text, lower case: the one list the checks and the readers share. */
+    public static final List<String> TEXT_TYPES = List.of(".csv", ".tsv", ".txt");
+    /** The file name endings read as workbooks. */
+    public static final List<String> WORKBOOK_TYPES = List.of(".xlsx", ".xlsm");
+    /** The file name endings read as SQLite databases (a GeoPackage is one). */
+    public static final List<String> DATABASE_TYPES = List.of(".sqlite", ".sqlite3", ".db", ".gpkg");
+    /** Every file name ending a statistics source may have. */
+    public static final List<String> FILE_TYPES = List.of(".csv", ".tsv", ".txt", ".xlsx", ".xlsm", ".sqlite", ".sqlite3", ".db", ".gpkg");
+
     public FigureSourceSpec {
         table = table == null ? "" : table;
         key = key == null ? "key" : key;

@@ -69,12 +69,12 @@ final class ProjectChecks {
     }
 
     private void checkFigureSource(String at, FigureSourceSpec source) {
-        checkFile(at, source.file(), List.of(".csv", ".tsv", ".txt", ".xlsx", ".xlsm", ".sqlite", ".db", ".gpkg"));
-        onlyFor(at + "/table", source.table(), source.file(), List.of(".sqlite", ".db", ".gpkg"), "table",
+        checkFile(at, source.file(), FigureSourceSpec.FILE_TYPES);
+        onlyFor(at + "/table", source.table(), source.file(), FigureSourceSpec.DATABASE_TYPES, "table",
                 "a table or view of a database");
-        onlyFor(at + "/sheet", source.sheet(), source.file(), List.of(".xlsx", ".xlsm"), "sheet", "a sheet of a workbook");
+        onlyFor(at + "/sheet", source.sheet(), source.file(), FigureSourceSpec.WORKBOOK_TYPES, "sheet", "a sheet of a workbook");
         onlyFor(at + "/header-row", source.headerRow() == null ? "" : source.headerRow().toString(), source.file(),
-                List.of(".xlsx", ".xlsm"), "header-row", "the header row of a workbook sheet");
+                FigureSourceSpec.WORKBOOK_TYPES, "header-row", "the header row of a workbook sheet");
         oneOf(at + "/decimal", source.decimal(), List.of(".", ","));
         oneOf(at + "/delimiter", source.delimiter(), List.of("", ",", ";", "\t", "|"));
     }
@@ -133,17 +133,28 @@ final class ProjectChecks {
             error("project-bad-value", at + "/count", "'count' must be between 2 and 9 classes.",
                     "Readers tell apart at most about seven shades of one hue (common practice).");
         }
-        if (classes.method() == ClassMethod.MANUAL) {
-            List<Double> breaks = classes.breaks();
-            boolean ascending = !breaks.isEmpty();
-            for (int i = 1; i < breaks.size(); i++) {
-                ascending &= breaks.get(i) > breaks.get(i - 1);
-            }
-            if (!ascending) {
-                error("project-bad-value", at + "/breaks", "Manual classes need 'breaks' in ascending order.",
-                        "List the inner class limits, for example [10, 20, 50].");
+        if (classes.method() == ClassMethod.MANUAL && !finiteAndAscending(classes.breaks())) {
+            error("project-bad-value", at + "/breaks", "Manual classes need 'breaks': numbers in strictly ascending order.",
+                    "List the inner class limits, for example [10, 20, 50].");
+        }
+        if (classes.method() == ClassMethod.DIVERGING && classes.midpoint() == null) {
+            error("project-missing-key", at + "/midpoint", "Diverging classes need a 'midpoint'.",
+                    "Set midpoint to the value the colours diverge from, for example 0 or the national rate.");
+        } else if (classes.method() == ClassMethod.DIVERGING && !Double.isFinite(classes.midpoint())) {
+            error("project-bad-value", at + "/midpoint", "The 'midpoint' must be a finite number.",
+                    "Set midpoint to the value the colours diverge from, for example 0 or the national rate.");
+        }
+    }
+
+    /** Whether {@code breaks} holds at least one number, each finite and greater than the one before. */
+    private static boolean finiteAndAscending(List<Double> breaks) {
+        for (int i = 0; i < breaks.size(); i++) {
+            double b = breaks.get(i);
+            if (!Double.isFinite(b) || i > 0 && !(breaks.get(i - 1) < b)) {
+                return false;
             }
         }
+        return !breaks.isEmpty();
     }
 
     private void reference(String at, String id, Map<String, ?> section, String sectionName) {

@@ -1,6 +1,7 @@
 package aequa.project;
 
 import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -55,9 +56,14 @@ public final class ProjectLoader {
             // the real path, so that '.' and links compare with the paths of data files (ProjectChecks)
             dir = projectDir.toRealPath();
             yaml = Files.readString(file, StandardCharsets.UTF_8);
+        } catch (CharacterCodingException e) {
+            findings.add(Finding.error("project-file-unreadable", ProjectFile.FILE_NAME, "",
+                    "The project file is not UTF-8 text; it was perhaps saved in another encoding (such as Latin-1).",
+                    "Save it as UTF-8, the encoding aequa reads."));
+            return Optional.empty();
         } catch (IOException e) {
             findings.add(Finding.error("project-file-unreadable", ProjectFile.FILE_NAME, "",
-                    "The project file cannot be read: " + e.getMessage(), "Check the file's permissions and encoding (UTF-8)."));
+                    "The project file cannot be read: " + e.getMessage(), "Check the file's permissions."));
             return Optional.empty();
         }
         if (yaml.lines().allMatch(line -> line.isBlank() || line.strip().startsWith("#") || line.strip().equals("---"))) {

@@ -28,8 +28,11 @@ public final class DrawingArtwork implements MapArtwork {
     private final PrintSize printSize;
     private final String version;
     private final Wording wording;
-    /** What the print preflight found, by map id (maps are drawn in parallel; the order stays stable). */
-    private final Map<String, List<Finding>> preflight = new ConcurrentSkipListMap<>();
+    /**
+     * What the print preflight found, by map id (maps are drawn in parallel; the order stays stable); shared
+     * with the copies in other languages, the first drawing of a map giving its findings.
+     */
+    private final Map<String, List<Finding>> preflight;
     private volatile String fingerprint;
 
     /**
@@ -40,10 +43,12 @@ public final class DrawingArtwork implements MapArtwork {
      *                   release or build redraws every map
      */
     public DrawingArtwork(Theme theme, Theme printTheme, PrintSize printSize, String version) {
-        this(theme, printTheme, printSize, version, Wording.english());
+        this(theme, printTheme, printSize, version, Wording.english(), new ConcurrentSkipListMap<>());
     }
 
-    private DrawingArtwork(Theme theme, Theme printTheme, PrintSize printSize, String version, Wording wording) {
+    private DrawingArtwork(Theme theme, Theme printTheme, PrintSize printSize, String version, Wording wording,
+                           Map<String, List<Finding>> preflight) {
+        this.preflight = preflight;
         this.theme = theme;
         this.printTheme = printTheme;
         this.printSize = printSize;
@@ -51,10 +56,15 @@ public final class DrawingArtwork implements MapArtwork {
         this.wording = wording;
     }
 
-    /** The same themes and sizes in another language; the print preflight's findings are gathered apart. */
+    /**
+     * The same themes and sizes in another language. Its print preflight's findings join this artwork's
+     * {@link #preflightFindings()}: a site's editions are drawn each by such a copy, the first language first,
+     * and a map's findings are those of its first print drawing (its type, lines and colours are the same in
+     * every language).
+     */
     @Override
     public DrawingArtwork inLanguage(Wording other) {
-        return new DrawingArtwork(theme, printTheme, printSize, version, other);
+        return new DrawingArtwork(theme, printTheme, printSize, version, other, preflight);
     }
 
     @Override
@@ -66,7 +76,7 @@ public final class DrawingArtwork implements MapArtwork {
     @Override
     public byte[] printSvg(MapModel map) {
         DrawnMap drawn = MapDrawings.printSvg(map, printTheme, printSize, DrawOptions.print().inLanguage(wording));
-        preflight.put(map.id(), PrintPreflight.check(map, printTheme, drawn, "maps/" + map.id() + "/" + map.id() + ".svg"));
+        preflight.putIfAbsent(map.id(), PrintPreflight.check(map, printTheme, drawn, "maps/" + map.id() + "/" + map.id() + ".svg"));
         return drawn.bytes();
     }
 

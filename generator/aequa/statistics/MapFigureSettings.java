@@ -21,7 +21,8 @@ import aequa.project.ProjectFile;
  * @param periods              the periods asked for; empty for the latest
  * @param measure              rate, count, or undeclared
  * @param normalisation        none, per km2, or per a denominator
- * @param denominator          the denominator indicator, for {@link Normalisation#COLUMN}; else empty
+ * @param denominator          the denominator indicator, for {@link Normalisation#COLUMN} (never blank then:
+ *                             the project file's checks report a missing {@code per}); else empty
  * @param multiplier           what a normalised value is multiplied by (positive, finite)
  * @param display              choropleth or circles
  * @param eventsIndicator      the indicator holding the number of events behind each rate, or empty
@@ -49,12 +50,6 @@ public record MapFigureSettings(String mapId, String indicator, List<String> per
         Normalisation normalisation = map.normalise();
         MapDisplay display = map.display();
         MissingFigures missing = checks.missingFigures();
-        if (normalisation == Normalisation.COLUMN && map.per().isBlank()) {
-            findings.add(Finding.error("project-missing-setting", ProjectFile.FILE_NAME, where + "per",
-                    "normalise: column needs the denominator column.",
-                    "Name it with per:, for example per: population."));
-            normalisation = Normalisation.NONE;
-        }
         double multiplier = map.multiplier();
         if (!(multiplier > 0) || Double.isInfinite(multiplier)) {
             findings.add(Finding.error("project-unknown-value", ProjectFile.FILE_NAME, where + "multiplier",

@@ -16,9 +16,10 @@ import aequa.project.Normalisation;
  * <p>Normalised value: {@link Normalisation#NONE} the value itself; {@link Normalisation#AREA}
  * value / geodesic area in km2 x multiplier; {@link Normalisation#COLUMN} value / denominator x multiplier.
  * A reported value that cannot be normalised (no positive area; a denominator that is absent, not
- * reported, zero or negative) is not mapped: the figure takes the denominator's status (suppressed stays
- * suppressed, not applicable stays not applicable) or else no data, with a warning
- * {@code normalise-impossible}. A negative margin of error is ignored with a warning.
+ * reported, zero or negative; a quotient times the multiplier beyond the range of a double) is not mapped:
+ * the figure takes the denominator's status (suppressed stays suppressed, not applicable stays not
+ * applicable) or else no data, with a warning {@code normalise-impossible}. Every normalised value of a
+ * reported figure is therefore finite. A negative margin of error is ignored with a warning.
  *
  * <p>Reliability (common practice in official statistics, for example flagging rates based on fewer than
  * 20 events, or estimates whose relative error exceeds 30 %; thresholds from the project file): a figure is
@@ -55,8 +56,7 @@ final class Normaliser {
                             FigureStatus.NO_DATA);
                     return RegionFigure.withoutFigure(FigureStatus.NO_DATA);
                 }
-                return new RegionFigure(FigureStatus.REPORTED, value,
-                        value / region.geodesicAreaKm2() * settings.multiplier(), margin, unreliable);
+                return normalised(cell, value / region.geodesicAreaKm2() * settings.multiplier(), margin, unreliable);
             case COLUMN:
                 Optional<FigureCell> denominator = join.cell(FigureRole.DENOMINATOR, period, region.key());
                 if (denominator.isEmpty() || denominator.get().status() != CellStatus.REPORTED) {
@@ -72,11 +72,23 @@ final class Normaliser {
                             + " at " + table.place(denominator.get()), FigureStatus.NO_DATA);
                     return RegionFigure.withoutFigure(FigureStatus.NO_DATA);
                 }
-                return new RegionFigure(FigureStatus.REPORTED, value, value / per * settings.multiplier(), margin,
-                        unreliable);
+                return normalised(cell, value / per * settings.multiplier(), margin, unreliable);
             default:
                 return new RegionFigure(FigureStatus.REPORTED, value, value, margin, unreliable);
         }
+    }
+
+    /**
+     * The normalised figure, or no data with {@code normalise-impossible} when the quotient times the
+     * multiplier overflows the range of a double (above about 1.8e308): only finite values leave this class.
+     */
+    private RegionFigure normalised(FigureCell cell, double normalisedValue, double margin, boolean unreliable) {
+        if (Double.isInfinite(normalisedValue)) {
+            cannotNormalise(cell, "the normalised value is beyond the largest number aequa can hold (about 1.8e308)",
+                    FigureStatus.NO_DATA, "check the multiplier and the denominator");
+            return RegionFigure.withoutFigure(FigureStatus.NO_DATA);
+        }
+        return new RegionFigure(FigureStatus.REPORTED, cell.value(), normalisedValue, margin, unreliable);
     }
 
     private double margin(FigureJoin join, String period, String regionKey) {
@@ -112,11 +124,14 @@ final class Normaliser {
     }
 
     private void cannotNormalise(FigureCell cell, String reason, FigureStatus shownAs) {
+        cannotNormalise(cell, reason, shownAs, "supply the missing figure to map it");
+    }
+
+    private void cannotNormalise(FigureCell cell, String reason, FigureStatus shownAs, String remedy) {
         findings.add(Finding.warning("normalise-impossible", table.file(), table.place(cell),
                 "The figure of region \"" + cell.key() + "\" cannot be normalised for map \"" + settings.mapId()
                         + "\": " + reason + ".",
-                "It is drawn as " + (shownAs == FigureStatus.NO_DATA ? "no data" : describe(shownAs))
-                        + "; supply the missing figure to map it."));
+                "It is drawn as " + (shownAs == FigureStatus.NO_DATA ? "no data" : describe(shownAs)) + "; " + remedy + "."));
     }
 
     private static String describe(FigureStatus status) {

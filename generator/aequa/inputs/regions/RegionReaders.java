@@ -21,6 +21,10 @@ import aequa.project.RegionSourceSpec;
  * {@code .gpkg}: GeoPackage; {@code .shp} or {@code .zip}: Shapefile) and returns the regions in file order. Problems in the
  * file are added to {@code findings}; this never throws for bad data. The regions are as read: rings are
  * closed but otherwise unchecked; pass them to {@code aequa.ellipsoid.RegionValidator} next.
+ *
+ * <p>A project's files have passed the project file's checks (a file that exists, of a type read here, each
+ * problem reported with its line); {@code aequa explain} hands over any file a user names, so a file of
+ * another type is reported here ({@code file-type-unknown}); one that cannot be opened, {@code file-unreadable}.
  */
 public final class RegionReaders {
 
@@ -70,11 +74,6 @@ public final class RegionReaders {
     private static RegionSource readFile(Path projectDir, RegionSourceSpec spec, SourceCrsResolver crs, Findings findings) {
         Path path = projectDir.resolve(spec.file());
         String file = spec.file();
-        if (!Files.isRegularFile(path)) {
-            findings.add(Finding.error("file-missing", file, "", "The geometry file does not exist.",
-                    "Check the file name in the project file; paths are relative to the project folder."));
-            return RegionSource.of(List.of());
-        }
         String name = path.getFileName().toString().toLowerCase(Locale.ROOT);
         if (name.endsWith(".gpkg")) {
             return RegionSource.of(new GeoPackageRegionReader(file, spec, crs, findings).read(path));

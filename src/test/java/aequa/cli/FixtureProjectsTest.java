@@ -22,13 +22,18 @@ import org.junit.jupiter.api.TestFactory;
 import org.junit.jupiter.api.io.TempDir;
 
 import aequa.findings.Finding;
+import aequa.findings.Findings;
 import aequa.findings.Severity;
 import aequa.publish.CheckStep;
+import aequa.publish.DrawingArtwork;
+import aequa.publish.DrawingSettings;
 
 /**
  * The fixture projects of {@code src/test/resources/aequa/fixtures} (its README says how one is made): each
  * produces the one finding code it names and no other error or warning, and {@code audit} and {@code publish} print the same errors
- * and warnings and exit with the same code, because both run the same check step.
+ * and warnings and exit with the same code, because both run the same check step. {@code publish} then draws
+ * (step 2) and prints what the print preflight of its drawings found, which {@code audit}, drawing nothing,
+ * cannot see: those lines follow the check step's, and a fixture may expect a code of the preflight.
  */
 class FixtureProjectsTest {
 
@@ -76,30 +81,45 @@ class FixtureProjectsTest {
         String expected = expectedCode(fixture);
 
         CheckStep.Result checked = CheckStep.run(project, site);
+        List<Finding> drawing = checked.outcome() == CheckStep.Outcome.CHECKED ? printPreflight(checked) : List.of();
         Set<String> loud = new TreeSet<>();
         Set<String> all = new TreeSet<>();
-        for (Finding f : checked.findings().list()) {
+        for (Finding f : Stream.concat(checked.findings().list().stream(), drawing.stream()).toList()) {
             all.add(f.code());
             if (f.severity() != Severity.NOTE) {
                 loud.add(f.code());
             }
         }
         boolean clean = expected.equals("none");
-        assertTrue(clean || all.contains(expected), () -> fixture.getFileName() + " gives " + checked.findings().list());
+        assertTrue(clean || all.contains(expected), () -> fixture.getFileName() + " gives " + checked.findings().list() + drawing);
         // a fixture shows one problem: no error or warning but the expected one and the ones its also: lines
         // name as following from it (notes of other kinds may come)
         loud.removeAll(followingCodes(fixture));
         Set<String> wanted = clean || !loud.contains(expected) ? Set.of() : Set.of(expected);
-        assertEquals(wanted, loud, () -> "errors and warnings of " + fixture.getFileName() + ": " + checked.findings().list());
+        assertEquals(wanted, loud, () -> "errors and warnings of " + fixture.getFileName() + ": " + checked.findings().list() + drawing);
 
         Run audit = Run.of("audit", project.toString(), "--out", site.toString());
         Run publish = Run.of("publish", project.toString(), "--out", site.toString());
         assertEquals(audit.code, publish.code, () -> "exit codes differ:\naudit: " + audit.err + "\npublish: " + publish.err);
-        assertEquals(audit.errorsAndWarnings(), publish.errorsAndWarnings(), "printed findings differ");
+        List<String> drawingLines = drawing.stream().filter(f -> f.severity() != Severity.NOTE)
+                .sorted(Comparator.comparing(Finding::severity)).map(Finding::toLine).toList();
+        assertEquals(Stream.concat(audit.errorsAndWarnings().stream(), drawingLines.stream()).toList(), publish.errorsAndWarnings(),
+                "publish prints audit's findings, then those of its drawings' print preflight");
         assertEquals(expected.equals("none") || checked.findings().count(Severity.ERROR) == 0,
                 publish.code == ExitCode.OK.code, publish.err);
         assertEquals(publish.code == ExitCode.OK.code, Files.isRegularFile(site.resolve("index.html")),
                 "a site is written exactly when publish succeeds");
+    }
+
+    /**
+     * What step 2 of publish adds to the findings: the print preflight of each map's print drawing, drawn
+     * with the project's drawing settings as publish draws it ({@link DrawingArtwork}).
+     */
+    private static List<Finding> printPreflight(CheckStep.Result checked) {
+        DrawingSettings settings = CheckStep.readSettings(checked.project().orElseThrow(), new Findings()).orElseThrow();
+        DrawingArtwork artwork = new DrawingArtwork(settings.theme(), settings.printTheme(), settings.printSize(), "fixture");
+        checked.atlas().orElseThrow().maps().forEach(artwork::printSvg);
+        return artwork.preflightFindings();
     }
 
     /** The starter project with the fixture's files copied over it and the paths of its remove.txt deleted. */

@@ -86,6 +86,23 @@ class ThemesTest {
     }
 
     @Test
+    void aThemeGivesLineWeightsAsNamesTextOrBareNumbers(@TempDir Path project) throws IOException {
+        // themes/README.md: "lines (points, or a preset name ...)"; YAML reads 0.3 unquoted as a number
+        Path folder = Files.createDirectories(project.resolve("themes/weights"));
+        String yaml = new String(Themes.class.getResourceAsStream("/themes/daylight/theme.yaml").readAllBytes())
+                .replace("name: daylight", "name: weights")
+                .replace("border: fine", "border: 0.3")
+                .replace("outline: medium", "outline: \"0.6pt\"");
+        Files.writeString(folder.resolve("theme.yaml"), yaml);
+        Findings findings = new Findings();
+        Theme theme = Themes.load(project, "weights", findings);
+        assertTrue(findings.list().isEmpty(), findings.list().toString());
+        assertEquals(0.3, theme.lines().border().pt());
+        assertEquals(0.6, theme.lines().outline().pt());
+        assertEquals(0.25, theme.lines().graticule().pt(), "hairline");
+    }
+
+    @Test
     void lineWeightPresetsAndNumbers() {
         assertEquals(0.25, LineWeight.parse("hairline").pt());
         assertEquals(0.35, LineWeight.parse("fine").pt());

@@ -21,7 +21,7 @@ class SourceVocabularyTest {
     Path dir;
 
     private List<Finding> load(String sources) throws IOException {
-        for (String file : List.of("a.topojson", "b.zip", "c.xlsx", "d.csv", "e.geojson")) {
+        for (String file : List.of("a.topojson", "b.zip", "c.xlsx", "d.csv", "e.geojson", "g.sqlite3", "h.ods")) {
             Files.writeString(dir.resolve(file), "");
         }
         Files.writeString(dir.resolve("aequa.yaml"), sources
@@ -37,6 +37,16 @@ class SourceVocabularyTest {
                 + "  s: { file: b.zip, key: GEOID, layer: cb_2017_us_state }\n"
                 + "figures:\n  f: { file: c.xlsx, key: GEOID, sheet: Counties, header-row: 4 }\n");
         assertEquals(List.of(), fine);
+    }
+
+    @Test
+    void theFileTypesTheReadersReadAndNoOthers() throws IOException {
+        // README, "Input formats": SQLite files end in .sqlite, .sqlite3, .db or .gpkg
+        assertEquals(List.of(), load("regions:\n  r: { file: e.geojson, key: code }\n"
+                + "figures:\n  f: { file: g.sqlite3, key: code, table: rates }\n"));
+        List<Finding> ods = load("regions:\n  r: { file: e.geojson, key: code }\nfigures:\n  f: { file: h.ods, key: code }\n");
+        assertEquals(List.of("project-file-type"), ods.stream().map(Finding::code).toList());
+        assertEquals(FigureSourceSpec.FILE_TYPES.size(), ods.get(0).hint().split(", ").length, ods.get(0).hint());
     }
 
     @Test

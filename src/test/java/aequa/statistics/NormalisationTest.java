@@ -96,6 +96,19 @@ class NormalisationTest {
     }
 
     @Test
+    void aQuotientBeyondTheRangeOfADoubleIsNotMapped() {
+        // the largest binary64 number is about 1.797e308 (IEEE 754-2008, section 3.6): 1000 per km2 times
+        // 1e306 is 1e309, beyond it; 1 per km2 times 1e306 is within it
+        StatisticsFixture project = new StatisticsFixture(dir).region("BIG", 1).region("SMALL", 1)
+                .csv("key,n\nBIG,1000\nSMALL,1\n");
+        MapFigures figures = project.compute(mapOf("n").measure("count").normalise("area").multiplier(1e306).build());
+        assertEquals(FigureStatus.NO_DATA, figures.figures("BIG").get(0).status());
+        assertEquals(FigureStatus.REPORTED, figures.figures("SMALL").get(0).status());
+        assertEquals(1e306, figures.figures("SMALL").get(0).normalisedValue(), 1e292);
+        assertEquals(List.of("normalise-impossible"), project.codes());
+    }
+
+    @Test
     void regionWithoutAreaCannotBeNormalisedPerKm2() {
         StatisticsFixture project = new StatisticsFixture(dir).region("E", 0).csv("key,n\nE,3\n");
         MapFigures figures = project.compute(mapOf("n").normalise("area").build());

@@ -197,13 +197,20 @@ class GeoJsonRegionReaderTest {
     }
 
     @Test
-    void aBareGeometryOrAMissingFileIsReported() throws IOException {
+    void aBareGeometryAFileThatCannotBeReadOrOfAnotherTypeIsReported() throws IOException {
         Findings findings = new Findings();
         read("{\"type\": \"Polygon\", \"coordinates\": []}", byProperty("@id"), findings);
         assertEquals("geojson-not-features", only(findings).code());
-        Findings missing = new Findings();
-        RegionReaders.read(dir, new RegionSourceSpec("nowhere.geojson", null, null, null), missing);
-        assertEquals("file-missing", only(missing).code());
+        // a project's missing file is reported by its checks first (project-file-not-found); one that goes
+        // between the checks and the read cannot be read
+        Findings gone = new Findings();
+        RegionReaders.read(dir, new RegionSourceSpec("nowhere.geojson", null, null, null), gone);
+        assertEquals("file-unreadable", only(gone).code());
+        // `aequa explain` hands the reader any file a user names; a project's checks refuse such a type first
+        Files.writeString(dir.resolve("regions.csv"), "code,name\n");
+        Findings otherType = new Findings();
+        RegionReaders.read(dir, new RegionSourceSpec("regions.csv", null, null, null), otherType);
+        assertEquals("file-type-unknown", only(otherType).code());
     }
 
     private static Finding only(Findings findings) {
