@@ -1,6 +1,9 @@
 package aequa.project;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * One map as the project file describes it.
@@ -40,7 +43,7 @@ public record MapSpec(String id, String title, String regions, String figures, S
                       Measure measure, Normalisation normalise, String per, Double multiplier, String unit,
                       MapDisplay display, ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
                       String marginColumn, String notes, String source, String asOf, List<Double> range,
-                      InsetsSpec insets, String outlines, Double largestCircleMm, java.util.Map<String, MapTexts> translations) {
+                      InsetsSpec insets, String outlines, Double largestCircleMm, Map<String, MapTexts> translations) {
 
     /** Bounds of {@code largest-circle-mm}: a 2 mm circle is still seen, a 40 mm one covers a two-column map's width. */
     public static final double MIN_CIRCLE_MM = 2;
@@ -64,19 +67,7 @@ public record MapSpec(String id, String title, String regions, String figures, S
         source = source == null ? "" : source;
         asOf = asOf == null ? "" : asOf;
         range = range == null ? List.of() : List.copyOf(range);
-        translations = translations == null ? java.util.Map.of()
-                : java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(translations));
-    }
-
-    /** A map without translations of its own words (the record's shape before {@code translations}). */
-    public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
-                   Measure measure, Normalisation normalise, String per, Double multiplier, String unit, MapDisplay display,
-                   ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
-                   String marginColumn, String notes, String source, String asOf, List<Double> range,
-                   InsetsSpec insets, String outlines, Double largestCircleMm) {
-        this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
-                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, range, insets, outlines,
-                largestCircleMm, null);
+        translations = translations == null ? Map.of() : Collections.unmodifiableMap(new LinkedHashMap<>(translations));
     }
 
     /**
@@ -84,10 +75,8 @@ public record MapSpec(String id, String title, String regions, String figures, S
      * project translates them; every other setting, and every word not translated, stays as written.
      */
     public MapSpec inLanguage(String tag) {
-        return Translations.of(translations, tag).map(t -> new MapSpec(id, or(t.title(), title), regions, figures,
-                indicator, periods, measure, normalise, per, multiplier, or(t.unit(), unit), display, classes, colours,
-                projection, eventsColumn, marginColumn, or(t.notes(), notes), or(t.source(), source), or(t.asOf(), asOf),
-                range, insets, outlines, largestCircleMm, translations)).orElse(this);
+        return Translations.of(translations, tag).map(t -> toBuilder().title(or(t.title(), title)).unit(or(t.unit(), unit))
+                .notes(or(t.notes(), notes)).source(or(t.source(), source)).asOf(or(t.asOf(), asOf)).build()).orElse(this);
     }
 
     private static String or(String translated, String written) {
@@ -129,6 +118,7 @@ public record MapSpec(String id, String title, String regions, String figures, S
         b.insets = insets;
         b.outlines = outlines;
         b.largestCircleMm = largestCircleMm;
+        b.translations = translations;
         return b;
     }
 
@@ -161,6 +151,7 @@ public record MapSpec(String id, String title, String regions, String figures, S
         private InsetsSpec insets;
         private String outlines;
         private Double largestCircleMm;
+        private Map<String, MapTexts> translations;
 
         private Builder() {
         }
@@ -189,12 +180,13 @@ public record MapSpec(String id, String title, String regions, String figures, S
         public Builder insets(InsetsSpec value) { insets = value; return this; }
         public Builder outlines(String value) { outlines = value; return this; }
         public Builder largestCircleMm(Double value) { largestCircleMm = value; return this; }
+        public Builder translations(Map<String, MapTexts> value) { translations = value; return this; }
 
         /** The map, with the canonical constructor's defaults for the settings left null. */
         public MapSpec build() {
             return new MapSpec(id, title, regions, figures, indicator, periods,
                     measure, normalise, per, multiplier, unit, display, classes, colours, projection,
-                    eventsColumn, marginColumn, notes, source, asOf, range, insets, outlines, largestCircleMm);
+                    eventsColumn, marginColumn, notes, source, asOf, range, insets, outlines, largestCircleMm, translations);
         }
     }
 }

@@ -16,7 +16,8 @@ class MapSpecTest {
             Measure.COUNT, Normalisation.COLUMN, "people", 1000.0, "per 1,000 people", MapDisplay.CIRCLES,
             new ClassesSpec(ClassMethod.QUANTILE, 4, null, null), new ColoursSpec(null, 200.0, null),
             new ProjectionSpec("albers-conic", Map.of("centre-lon", 10.0)), "events", "margin", "notes", "source",
-            "2024", List.of(0.0, 100.0), new InsetsSpec("off", List.of()), "state", 12.0);
+            "2024", List.of(0.0, 100.0), new InsetsSpec("off", List.of()), "state", 12.0,
+            Map.of("fr", new MapTexts("Titre", null, null, null, null)));
 
     @Test
     void aCopyKeepsEverySetting() {
@@ -35,7 +36,7 @@ class MapSpecTest {
     @Test
     void unsetSettingsTakeTheCanonicalDefaults() {
         MapSpec canonical = new MapSpec("m", null, null, null, null, null, null, null, null, null, null, null, null,
-                null, null, null, null, null, null, null, null, null, null, null);
+                null, null, null, null, null, null, null, null, null, null, null, null);
         assertEquals(canonical, MapSpec.builder("m").build());
         assertEquals("m", canonical.title(), "the title defaults to the id");
     }
