@@ -188,8 +188,7 @@ public final class MapDrawings {
         MapPainter painter = new MapPainter(model, theme, options);
         Layout layout = painter.layout(type, medium, size.widthMm(), size.heightMm());
         double ptPerMm = 72.0 / 25.4; // 1 inch = 25.4 mm = 72 pt
-        PDFDocument document = new PDFDocument();
-        document.setTitle(model.spec().title());
+        PDFDocument document = new PDFDocument(); // no setTitle: PdfInformation adds the title, escaped
         Page page = document.createPage(new java.awt.geom.Rectangle2D.Double(0, 0, size.widthMm() * ptPerMm, layout.heightU() * ptPerMm));
         Graphics2D g = page.getGraphics2D();
         g.setRenderingHint(PDFHints.KEY_DRAW_STRING_TYPE, PDFHints.VALUE_DRAW_STRING_TYPE_VECTOR);

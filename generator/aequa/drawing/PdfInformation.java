@@ -9,9 +9,12 @@ import java.util.regex.Pattern;
 
 /**
  * Rewrites the document information dictionary JFreePDF writes: the clock dates become one fixed instant in
- * UTC, so a PDF depends on neither the clock, the time zone nor the locale of the machine; and the title
- * becomes a Unicode text string, so "km²" or any script survives (JFreePDF writes it as a literal string
- * in a single-byte encoding and turns other characters into "?").
+ * UTC, so a PDF depends on neither the clock, the time zone nor the locale of the machine; and the title is
+ * added as a Unicode text string, so "km²" or any script survives and any bracket or backslash in it stays
+ * text. The title must not be given to JFreePDF: 2.0 writes it as a literal string without escaping
+ * {@code (}, {@code )} or {@code \} (ISO 32000-1, section 7.3.4.2 requires unbalanced ones to be escaped), so
+ * a title such as "Rate (per 1,000" or "a) b" ends the string early and every PDF reader reports a syntax
+ * error in the information dictionary; and it turns characters outside its single-byte encoding into "?".
  *
  * <p>JFreePDF 2.0 stamps {@code /CreationDate} and {@code /ModDate} with the current time in the JVM's default
  * zone and calendar, offset included ({@code D:20261204152200+14'0'} on Kiritimati), and offers no way to set
@@ -28,7 +31,8 @@ final class PdfInformation {
      */
     static final String FIXED = "D:20000101000000Z00'00'";
 
-    private static final Pattern ENTRY = Pattern.compile("/(CreationDate|ModDate) \\(D:[^)]*\\)|/Title \\((?:[^)\\\\]|\\\\.)*\\)");
+    private static final Pattern DATE = Pattern.compile("/(CreationDate|ModDate) \\(D:[^)]*\\)");
+    private static final String INFO_TYPE = "/Type /Info";
     private static final Pattern XREF_ENTRY = Pattern.compile("(\\d{10}) (\\d{5}) n");
     private static final Pattern START_XREF = Pattern.compile("startxref(\\s+)(\\d+)");
 
@@ -36,29 +40,35 @@ final class PdfInformation {
     }
 
     /**
-     * {@code pdf} with its information dates set to {@link #FIXED} and its title set to {@code title}; a PDF
-     * without such entries is returned as it is.
+     * {@code pdf} (written by JFreePDF without a title) with its information dates set to {@link #FIXED} and
+     * {@code title} added to its information dictionary; a PDF without an information dictionary is returned as
+     * it is. Every cross-reference offset and {@code startxref} still point at their objects.
      */
     static byte[] rewritten(byte[] pdf, String title) {
         // ISO-8859-1 maps every byte to one char and back, so binary streams survive and offsets stay byte offsets
         String text = new String(pdf, StandardCharsets.ISO_8859_1);
-        Matcher entry = ENTRY.matcher(text);
+        int info = text.indexOf(INFO_TYPE);
+        if (info < 0) {
+            return pdf;
+        }
         StringBuilder out = new StringBuilder(text.length());
         List<int[]> shifts = new ArrayList<>(); // {position in the original, change in length there}
-        int copied = 0;
-        while (entry.find()) {
-            String replacement = entry.group(1) == null ? "/Title " + unicodeText(title)
-                    : "/" + entry.group(1) + " (" + FIXED + ")";
-            out.append(text, copied, entry.start()).append(replacement);
-            shifts.add(new int[] {entry.start(), replacement.length() - (entry.end() - entry.start())});
-            copied = entry.end();
-        }
-        if (shifts.isEmpty()) {
-            return pdf;
+        int afterType = info + INFO_TYPE.length();
+        String titleEntry = "\n/Title " + unicodeText(title);
+        out.append(text, 0, afterType).append(titleEntry);
+        shifts.add(new int[] {afterType, titleEntry.length()});
+        int copied = afterType;
+        Matcher date = DATE.matcher(text);
+        date.region(afterType, Math.max(afterType, text.indexOf("endobj", afterType)));
+        while (date.find()) {
+            String replacement = "/" + date.group(1) + " (" + FIXED + ")";
+            out.append(text, copied, date.start()).append(replacement);
+            shifts.add(new int[] {date.start(), replacement.length() - (date.end() - date.start())});
+            copied = date.end();
         }
         int xref = text.lastIndexOf("\nxref");
         if (xref < copied) {
-            throw new IllegalStateException("the PDF's cross-reference table does not follow its information dates");
+            throw new IllegalStateException("the PDF's cross-reference table does not follow its information dictionary");
         }
         out.append(text, copied, xref);
         out.append(shiftedXref(text.substring(xref), shifts));

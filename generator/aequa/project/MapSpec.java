@@ -1,6 +1,9 @@
 package aequa.project;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * One map as the project file describes it.
@@ -40,7 +43,7 @@ public record MapSpec(String id, String title, String regions, String figures, S
                       Measure measure, Normalisation normalise, String per, Double multiplier, String unit,
                       MapDisplay display, ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
                       String marginColumn, String notes, String source, String asOf, List<Double> range,
-                      InsetsSpec insets, String outlines, Double largestCircleMm, java.util.Map<String, MapTexts> translations) {
+                      InsetsSpec insets, String outlines, Double largestCircleMm, Map<String, MapTexts> translations) {
 
     /** Bounds of {@code largest-circle-mm}: a 2 mm circle is still seen, a 40 mm one covers a two-column map's width. */
     public static final double MIN_CIRCLE_MM = 2;
@@ -64,19 +67,7 @@ public record MapSpec(String id, String title, String regions, String figures, S
         source = source == null ? "" : source;
         asOf = asOf == null ? "" : asOf;
         range = range == null ? List.of() : List.copyOf(range);
-        translations = translations == null ? java.util.Map.of()
-                : java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(translations));
-    }
-
-    /** A map without translations of its own words (the record's shape before {@code translations}). */
-    public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
-                   Measure measure, Normalisation normalise, String per, Double multiplier, String unit, MapDisplay display,
-                   ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
-                   String marginColumn, String notes, String source, String asOf, List<Double> range,
-                   InsetsSpec insets, String outlines, Double largestCircleMm) {
-        this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
-                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, range, insets, outlines,
-                largestCircleMm, null);
+        translations = translations == null ? Map.of() : Collections.unmodifiableMap(new LinkedHashMap<>(translations));
     }
 
     /**
@@ -84,40 +75,118 @@ public record MapSpec(String id, String title, String regions, String figures, S
      * project translates them; every other setting, and every word not translated, stays as written.
      */
     public MapSpec inLanguage(String tag) {
-        return Translations.of(translations, tag).map(t -> new MapSpec(id, or(t.title(), title), regions, figures,
-                indicator, periods, measure, normalise, per, multiplier, or(t.unit(), unit), display, classes, colours,
-                projection, eventsColumn, marginColumn, or(t.notes(), notes), or(t.source(), source), or(t.asOf(), asOf),
-                range, insets, outlines, largestCircleMm, translations)).orElse(this);
+        return Translations.of(translations, tag).map(t -> toBuilder().title(or(t.title(), title)).unit(or(t.unit(), unit))
+                .notes(or(t.notes(), notes)).source(or(t.source(), source)).asOf(or(t.asOf(), asOf)).build()).orElse(this);
     }
 
     private static String or(String translated, String written) {
         return translated == null ? written : translated;
     }
 
-    /** A map without outlines and with circles sized by the map (the record's shape before those settings). */
-    public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
-                   Measure measure, Normalisation normalise, String per, Double multiplier, String unit, MapDisplay display,
-                   ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
-                   String marginColumn, String notes, String source, String asOf, List<Double> range, InsetsSpec insets) {
-        this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
-                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, range, insets, null, null);
+    /**
+     * A builder for a map with identifier {@code id} and every other setting unset, so the canonical constructor
+     * gives it its default (the project file's reader calls that constructor directly).
+     */
+    public static Builder builder(String id) {
+        return new Builder().id(id);
     }
 
-    /** A map that follows its region source's {@code insets} setting (the record's shape before insets). */
-    public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
-                   Measure measure, Normalisation normalise, String per, Double multiplier, String unit, MapDisplay display,
-                   ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
-                   String marginColumn, String notes, String source, String asOf, List<Double> range) {
-        this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
-                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, range, null);
+    /** A builder holding every setting of this map, to make a copy that differs in a few. */
+    public Builder toBuilder() {
+        Builder b = new Builder();
+        b.id = id;
+        b.title = title;
+        b.regions = regions;
+        b.figures = figures;
+        b.indicator = indicator;
+        b.periods = periods;
+        b.measure = measure;
+        b.normalise = normalise;
+        b.per = per;
+        b.multiplier = multiplier;
+        b.unit = unit;
+        b.display = display;
+        b.classes = classes;
+        b.colours = colours;
+        b.projection = projection;
+        b.eventsColumn = eventsColumn;
+        b.marginColumn = marginColumn;
+        b.notes = notes;
+        b.source = source;
+        b.asOf = asOf;
+        b.range = range;
+        b.insets = insets;
+        b.outlines = outlines;
+        b.largestCircleMm = largestCircleMm;
+        b.translations = translations;
+        return b;
     }
 
-    /** A map without a declared range (the record's shape before {@code range} was added). */
-    public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
-                   Measure measure, Normalisation normalise, String per, Double multiplier, String unit, MapDisplay display,
-                   ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
-                   String marginColumn, String notes, String source, String asOf) {
-        this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
-                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, null, null);
+    /**
+     * Makes a {@link MapSpec} in code, setting by setting; a setting left unset (or set to null) takes the
+     * default the canonical constructor gives it. Not thread-safe; {@link #build()} may be called again.
+     */
+    public static final class Builder {
+        private String id;
+        private String title;
+        private String regions;
+        private String figures;
+        private String indicator;
+        private List<String> periods;
+        private Measure measure;
+        private Normalisation normalise;
+        private String per;
+        private Double multiplier;
+        private String unit;
+        private MapDisplay display;
+        private ClassesSpec classes;
+        private ColoursSpec colours;
+        private ProjectionSpec projection;
+        private String eventsColumn;
+        private String marginColumn;
+        private String notes;
+        private String source;
+        private String asOf;
+        private List<Double> range;
+        private InsetsSpec insets;
+        private String outlines;
+        private Double largestCircleMm;
+        private Map<String, MapTexts> translations;
+
+        private Builder() {
+        }
+
+        public Builder id(String value) { id = value; return this; }
+        public Builder title(String value) { title = value; return this; }
+        public Builder regions(String value) { regions = value; return this; }
+        public Builder figures(String value) { figures = value; return this; }
+        public Builder indicator(String value) { indicator = value; return this; }
+        public Builder periods(List<String> value) { periods = value; return this; }
+        public Builder measure(Measure value) { measure = value; return this; }
+        public Builder normalise(Normalisation value) { normalise = value; return this; }
+        public Builder per(String value) { per = value; return this; }
+        public Builder multiplier(Double value) { multiplier = value; return this; }
+        public Builder unit(String value) { unit = value; return this; }
+        public Builder display(MapDisplay value) { display = value; return this; }
+        public Builder classes(ClassesSpec value) { classes = value; return this; }
+        public Builder colours(ColoursSpec value) { colours = value; return this; }
+        public Builder projection(ProjectionSpec value) { projection = value; return this; }
+        public Builder eventsColumn(String value) { eventsColumn = value; return this; }
+        public Builder marginColumn(String value) { marginColumn = value; return this; }
+        public Builder notes(String value) { notes = value; return this; }
+        public Builder source(String value) { source = value; return this; }
+        public Builder asOf(String value) { asOf = value; return this; }
+        public Builder range(List<Double> value) { range = value; return this; }
+        public Builder insets(InsetsSpec value) { insets = value; return this; }
+        public Builder outlines(String value) { outlines = value; return this; }
+        public Builder largestCircleMm(Double value) { largestCircleMm = value; return this; }
+        public Builder translations(Map<String, MapTexts> value) { translations = value; return this; }
+
+        /** The map, with the canonical constructor's defaults for the settings left null. */
+        public MapSpec build() {
+            return new MapSpec(id, title, regions, figures, indicator, periods,
+                    measure, normalise, per, multiplier, unit, display, classes, colours, projection,
+                    eventsColumn, marginColumn, notes, source, asOf, range, insets, outlines, largestCircleMm, translations);
+        }
     }
 }

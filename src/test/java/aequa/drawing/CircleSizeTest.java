@@ -12,9 +12,7 @@ import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 
 import aequa.atlas.MapModel;
-import aequa.atlas.MapRegion;
 import aequa.project.ClassMethod;
-import aequa.project.MapSpec;
 
 /**
  * The size of proportional circles in print (SVG units are millimetres): the map's {@code largest-circle-mm}
@@ -69,12 +67,6 @@ class CircleSizeTest {
     }
 
     private static MapModel withLargestCircle(MapModel m, double mm) {
-        MapSpec s = m.spec();
-        MapSpec sized = new MapSpec(s.id(), s.title(), s.regions(), s.figures(), s.indicator(), s.periods(), s.measure(),
-                s.normalise(), s.per(), s.multiplier(), s.unit(), s.display(), s.classes(), s.colours(), s.projection(),
-                s.eventsColumn(), s.marginColumn(), s.notes(), s.source(), s.asOf(), s.range(), s.insets(), s.outlines(), mm);
-        List<MapRegion> regions = m.regions();
-        return new MapModel(sized, m.periods(), m.projection(), regions, m.classification(), m.ramp(), m.areaAudit(),
-                m.notices(), m.parts(), m.outlinesM());
+        return MapFixtures.withSpec(m, m.spec().toBuilder().largestCircleMm(mm).build());
     }
 }

@@ -105,13 +105,20 @@ public final class MapFixtures {
 
     static MapModel model(String display, List<String> periods, List<MapRegion> regions, Classification classes, ColourRamp ramp,
                           EqualAreaProjection projection) {
-        MapSpec spec = new MapSpec("clinics", "Clinics within reach, per 1,000 km\u00b2", "r", "f", "clinics", periods,
-                display.equals("circles") ? Measure.COUNT : Measure.RATE, Normalisation.NONE, null, null,
-                display.equals("circles") ? "clinics" : "per 1,000 km\u00b2", Words.of(MapDisplay.class, display), null, null, null, null, null,
-                "", "Invented survey of the Ostmark health office", periods.get(periods.size() - 1));
+        MapSpec spec = MapSpec.builder("clinics").title("Clinics within reach, per 1,000 km\u00b2").regions("r").figures("f")
+                .indicator("clinics").periods(periods).measure(display.equals("circles") ? Measure.COUNT : Measure.RATE)
+                .normalise(Normalisation.NONE).unit(display.equals("circles") ? "clinics" : "per 1,000 km\u00b2")
+                .display(Words.of(MapDisplay.class, display)).source("Invented survey of the Ostmark health office")
+                .asOf(periods.get(periods.size() - 1)).build();
         ProjectionChoice choice = new ProjectionChoice(projection, 2.4, 0.9, 12, 58, List.of(), "fixture");
         return new MapModel(spec, periods, choice, regions, classes, ramp, new AreaAudit(2e-9, "K001", 1e-6),
                 List.of("Figures for 3 regions are missing."));
+    }
+
+    /** {@code map} with {@code spec} in place of its own; everything else as it is. */
+    static MapModel withSpec(MapModel map, MapSpec spec) {
+        return new MapModel(spec, map.periods(), map.projection(), map.regions(), map.classification(), map.ramp(),
+                map.areaAudit(), map.notices(), map.parts(), map.outlinesM());
     }
 
     /** Fills generated for the fixture: lightness falls evenly from a pale to a deep blue-green. */

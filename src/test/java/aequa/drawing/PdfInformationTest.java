@@ -19,13 +19,13 @@ import org.junit.jupiter.api.Test;
 class PdfInformationTest {
 
     /**
-     * A three-object PDF laid out as JFreePDF lays it out (information dictionary first, then a stream
-     * with binary bytes, then the xref table with ten-digit offsets), with the given date text.
+     * A three-object PDF laid out as JFreePDF lays it out when given no title (information dictionary first,
+     * then a stream with binary bytes, then the xref table with ten-digit offsets), with the given date text.
      */
     private static byte[] pdfDated(String date) {
         List<String> objects = List.of(
                 "<< /Type /Catalog >>",
-                "<< /Type /Info\n/ModDate (" + date + ")\n/CreationDate (" + date + ")\n/Title (t)\n>>",
+                "<< /Type /Info\n/ModDate (" + date + ")\n/CreationDate (" + date + ")\n>>",
                 "<< /Length 4 >>\nstream\n\u0000\u00ff\n)\nendstream");
         StringBuilder pdf = new StringBuilder("%PDF-1.4\n%\u0080\u0081\n");
         List<Integer> offsets = new ArrayList<>();
@@ -60,7 +60,7 @@ class PdfInformationTest {
     }
 
     @Test
-    void aPdfWithoutDatesIsLeftAsItIs() {
+    void aPdfWithoutInformationIsLeftAsItIs() {
         byte[] undated = "%PDF-1.4\n1 0 obj\n<< >>\nendobj\n".getBytes(StandardCharsets.ISO_8859_1);
         assertArrayEquals(undated, PdfInformation.rewritten(undated, "t"));
     }
@@ -70,6 +70,14 @@ class PdfInformationTest {
         String text = new String(PdfInformation.rewritten(pdfDated("D:2026"), "km\u00b2"), StandardCharsets.ISO_8859_1);
         // ISO 32000-1, 7.9.2.2: UTF-16BE after the byte order mark FE FF; k = 006B, m = 006D, superscript two = 00B2
         assertTrue(text.contains("/Title <FEFF006B006D00B2>"), text);
-        assertTrue(!text.contains("/Title (t)"));
+        assertEquals(3, PdfXref.assertPointsAtEveryObject(text));
+    }
+
+    @Test
+    void bracketsAndBackslashesInTheTitleStayInsideTheString() {
+        // ISO 32000-1, 7.3.4.2: an unbalanced ")" or a "\" ends or escapes a literal string; a hexadecimal
+        // string (7.3.4.3) holds any byte; ")" = 0029, "(" = 0028, "\" = 005C
+        String text = new String(PdfInformation.rewritten(pdfDated("D:2026"), "a) (b\\"), StandardCharsets.ISO_8859_1);
+        assertTrue(text.contains("/Title <FEFF00610029002000280062005C>\n"), text);
     }
 }

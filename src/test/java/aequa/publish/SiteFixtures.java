@@ -85,9 +85,10 @@ final class SiteFixtures {
 
     /** As {@link #map(String, Texts, int, double)}, drawn as {@code display} (choropleth or circles). */
     static MapModel map(String id, Texts texts, int regionCount, double shift, String display) {
-        MapSpec spec = new MapSpec(id, texts.mapTitle() + " " + id, "units", "figures", "clinics", List.of("2031"),
-                Measure.RATE, Normalisation.COLUMN, "people", 1000.0, "clinics per 1,000 people", Words.of(MapDisplay.class, display), null, null, null,
-                null, null, texts.notes(), texts.source(), "March 2031");
+        MapSpec spec = MapSpec.builder(id).title(texts.mapTitle() + " " + id).regions("units").figures("figures")
+                .indicator("clinics").periods(List.of("2031")).measure(Measure.RATE).normalise(Normalisation.COLUMN)
+                .per("people").multiplier(1000.0).unit("clinics per 1,000 people").display(Words.of(MapDisplay.class, display))
+                .notes(texts.notes()).source(texts.source()).asOf("March 2031").build();
         List<MapRegion> regions = new ArrayList<>();
         List<Double> reported = new ArrayList<>();
         for (int i = 0; i < regionCount; i++) {

@@ -8,7 +8,7 @@ import aequa.project.Measure;
 import aequa.project.Normalisation;
 import aequa.project.Words;
 
-/** Builds {@link MapSpec}s for tests; null fields take the record's defaults. */
+/** Builds {@link MapSpec}s for the statistics tests from the project file's words; null fields take the record's defaults. */
 final class MapSpecBuilder {
 
     private final String indicator;
@@ -41,7 +41,9 @@ final class MapSpecBuilder {
     MapSpecBuilder range(double min, double max) { range = List.of(min, max); return this; }
 
     MapSpec build() {
-        return new MapSpec("m", null, "regions", "figures", indicator, periods, Words.of(Measure.class, measure),
-                Words.of(Normalisation.class, normalise), per, multiplier, null, Words.of(MapDisplay.class, display), null, null, null, eventsColumn, marginColumn, null, null, null, range);
+        return MapSpec.builder("m").regions("regions").figures("figures").indicator(indicator).periods(periods)
+                .measure(Words.of(Measure.class, measure)).normalise(Words.of(Normalisation.class, normalise)).per(per)
+                .multiplier(multiplier).display(Words.of(MapDisplay.class, display)).eventsColumn(eventsColumn)
+                .marginColumn(marginColumn).range(range).build();
     }
 }
