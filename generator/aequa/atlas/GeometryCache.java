@@ -51,7 +51,8 @@ import aequa.projection.Projections;
  */
 final class GeometryCache {
 
-    private static final int FORMAT = 4;
+    /** 5: a projection choice stores its reason as facts (basis, setting, comparison), not as an English sentence. */
+    private static final int FORMAT = 5;
 
     private final Optional<Path> folder;
     private final boolean writable;

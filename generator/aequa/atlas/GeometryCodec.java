@@ -19,6 +19,7 @@ import aequa.inputs.CacheFile;
 import aequa.inputs.regions.Region;
 import aequa.planar.AreaAudit;
 import aequa.planar.CoverageSimplification;
+import aequa.projection.ChoiceReason;
 import aequa.projection.DistortionSpread;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionFamily;
@@ -179,7 +180,9 @@ final class GeometryCodec {
             out.writeDouble(c.omegaMaxDeg());
             out.writeDouble(c.omegaMeanDeg());
         }
-        CacheFile.writeText(out, choice.reason());
+        CacheFile.writeText(out, choice.why().basis().name());
+        CacheFile.writeText(out, choice.why().setting().name());
+        CacheFile.writeText(out, choice.why().comparison().name());
         DistortionSpread spread = choice.spread();
         out.writeDouble(spread.shareBelow1Deg());
         out.writeDouble(spread.shareBelow5Deg());
@@ -191,7 +194,7 @@ final class GeometryCodec {
     /** What {@link #writeChoice} wrote: the projection as family, parameters and WKT 2. */
     record StoredChoice(ProjectionFamily family, List<ProjectionParameter> parameters, String wkt2, double omegaMaxDeg,
                         double omegaMeanDeg, double worstLonDeg, double worstLatDeg,
-                        List<ProjectionChoice.Candidate> runnersUp, String reason, DistortionSpread spread) {
+                        List<ProjectionChoice.Candidate> runnersUp, ChoiceReason reason, DistortionSpread spread) {
     }
 
     static StoredChoice readChoice(DataInputStream in) throws IOException {
@@ -208,7 +211,8 @@ final class GeometryCodec {
             runnersUp.add(new ProjectionChoice.Candidate(ProjectionFamily.valueOf(CacheFile.readText(in)), parameters(in),
                     in.readDouble(), in.readDouble()));
         }
-        String reason = CacheFile.readText(in);
+        ChoiceReason reason = new ChoiceReason(ChoiceReason.Basis.valueOf(CacheFile.readText(in)),
+                ChoiceReason.Setting.valueOf(CacheFile.readText(in)), ChoiceReason.Comparison.valueOf(CacheFile.readText(in)));
         DistortionSpread spread = new DistortionSpread(in.readDouble(), in.readDouble(), in.readDouble(), in.readDouble(),
                 CacheFile.readText(in));
         return new StoredChoice(family, parameters, wkt2, omegaMax, omegaMean, worstLon, worstLat, runnersUp, reason, spread);

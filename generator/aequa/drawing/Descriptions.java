@@ -28,13 +28,13 @@ final class Descriptions {
         if (periods.size() > 1) {
             text = w.text("draw.describePanels", "text", text, "first", w.numbers().period(periods.get(0)),
                     "last", w.numbers().period(periods.get(periods.size() - 1)));
-        } else if (periods.size() == 1) {
+        } else if (periods.size() == 1 && !periods.get(0).isEmpty()) {
             text = w.text("draw.describePeriod", "text", text, "period", w.numbers().period(periods.get(0)));
         }
         if (!circles) {
             text = model.classification().method() == ClassMethod.UNCLASSED ? w.text("draw.describeUnclassed", "text", text)
                     : w.text("draw.describeClasses", "text", text, "count", model.classification().classCount(),
-                    "method", model.classification().method().configName());
+                    "method", w.text("draw.methodName", "method", methodWord(model.classification().method())));
         }
         String projection = w.sentence(w.text("caption.projection", "family",
                 ProjectionWords.family(model.projection().projection().family(), w)));
@@ -43,5 +43,18 @@ final class Descriptions {
         }
         return w.text("draw.describeEndParts", "text", text, "projection", projection, "count", model.parts().size() - 1,
                 "mixed", model.mixedAreaScales() ? "yes" : "no");
+    }
+
+    /** The {@code draw.methodName} select word of a classification method. */
+    private static String methodWord(ClassMethod method) {
+        return switch (method) {
+            case QUANTILE -> "quantile";
+            case EQUAL_INTERVAL -> "equalInterval";
+            case NATURAL_BREAKS -> "naturalBreaks";
+            case STANDARD_DEVIATION -> "standardDeviation";
+            case DIVERGING -> "diverging";
+            case MANUAL -> "manual";
+            case UNCLASSED -> "unclassed";
+        };
     }
 }

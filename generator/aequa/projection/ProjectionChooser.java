@@ -106,7 +106,7 @@ public final class ProjectionChooser {
                         e.score.omegaMaxDeg(), e.score.omegaMeanDeg()));
             }
         }
-        String reason = ChoiceReason.sentence(chosen.projection, chosen.score, footprint, basis,
+        ChoiceReason reason = ChoiceReason.of(chosen.projection, chosen.score.omegaMaxDeg(), footprint, basis,
                 runnersUp.isEmpty() ? null : runnersUp.get(0));
         return new ProjectionChoice(chosen.projection, chosen.score.omegaMaxDeg(), chosen.score.omegaMeanDeg(),
                 chosen.score.worstLonDeg(), chosen.score.worstLatDeg(), runnersUp, reason,

@@ -42,6 +42,14 @@ public enum ProjectionFamily {
         return displayName;
     }
 
+    /**
+     * The readable (EPSG) name of this family's parameter {@code key} ({@code centre-lat} of Lambert azimuthal:
+     * "Latitude of natural origin"), or empty when the family has no such parameter.
+     */
+    public Optional<String> parameterName(String key) {
+        return Optional.ofNullable(FamilyDefinitions.find(this, key)).map(ParameterDefinition::name);
+    }
+
     public static Optional<ProjectionFamily> fromConfigName(String name) {
         String wanted = name.trim().toLowerCase(Locale.ROOT);
         return Arrays.stream(values()).filter(f -> f.configName.equals(wanted)).findFirst();

@@ -19,6 +19,7 @@ import aequa.project.Measure;
 import aequa.project.Normalisation;
 import aequa.project.SiteSpec;
 import aequa.projection.ProjectionChoice;
+import aequa.projection.ProjectionFamily;
 import aequa.wording.NumberWriter;
 import aequa.wording.ProjectionWords;
 import aequa.wording.Wording;
@@ -62,10 +63,10 @@ final class SiteViews {
             ProjectionChoice choice = map.projection();
             List<String> parameters = choice.projection().parameters().stream().map(p -> MapViews.parameterText(p, w))
                     .collect(Collectors.toList());
-            List<String> runnersUp = choice.runnersUp().stream()
+            String runnersUp = w.clauseList(choice.runnersUp().stream()
                     .map(c -> w.text("method.runnerUp", "family", ProjectionWords.family(c.family(), w),
                             "max", numbers.degrees(c.omegaMaxDeg(), 2)))
-                    .collect(Collectors.toList());
+                    .toList());
             List<Double> limitValues = map.classification().limits();
             List<String> limits = limitValues.stream().map(l -> numbers.limit(l, limitValues)).collect(Collectors.toList());
             List<Integer> counts = map.classification().counts();
@@ -76,7 +77,7 @@ final class SiteViews {
                 countTexts.add(numbers.integer(counts.get(c)));
             }
             sections.add(new MethodView.MapMethod(files.get(i).fileId(), map.spec().title(),
-                    ProjectionWords.family(choice.projection().family(), w), choice.reason(), parameters,
+                    ProjectionWords.familyWithAspect(choice, w), ProjectionWords.reason(choice, w), parameters,
                     numbers.degrees(choice.omegaMaxDeg(), 2), numbers.degrees(choice.omegaMeanDeg(), 2), runnersUp,
                     MapViews.errorPercent(map.areaAudit().maxRelativeError(), w), map.areaAudit().worstKey(),
                     MapViews.errorPercent(map.areaAudit().tolerance(), w), map.areaAudit().passed(),
@@ -139,7 +140,7 @@ final class SiteViews {
                     c.path("name").asText(), figureText(c.path("from"), w), figureText(c.path("to"), w))));
             maps.add(new ChangesView.MapChange(index < 0 ? SafePaths.fileSafeId(id) : files.get(index).fileId(),
                     m.path("title").asText(), m.path("state").asText(), fromTo(m.path("asOf"), numbers),
-                    projectionText(m.path("projection"), numbers), breaksText(m.path("breaks"), numbers), moved, edited,
+                    projectionText(m.path("projection"), w), breaksText(m.path("breaks"), numbers), moved, edited,
                     texts(m.path("regionsAdded")), texts(m.path("regionsRemoved")), href, texts(m.path("parts"))));
         }
         return new ChangesView(basis, maps, changes.path("unchangedMaps").asInt());
@@ -157,18 +158,29 @@ final class SiteViews {
         return pair.isMissingNode() ? "" : numbers.period(pair.path("from").asText()) + " → " + numbers.period(pair.path("to").asText());
     }
 
-    /** Family names and parameter keys as report.json writes them (configuration words), numbers in the language. */
-    private static String projectionText(JsonNode pair, NumberWriter numbers) {
+    /**
+     * A projection change from report.json (family by its configuration name, parameters by key, in degrees), in
+     * the page's language: family and parameter names as the captions write them.
+     */
+    private static String projectionText(JsonNode pair, Wording w) {
         if (pair.isMissingNode()) {
             return "";
         }
-        return projectionLine(pair.path("from"), numbers) + " → " + projectionLine(pair.path("to"), numbers);
+        return projectionLine(pair.path("from"), w) + " → " + projectionLine(pair.path("to"), w);
     }
 
-    private static String projectionLine(JsonNode p, NumberWriter numbers) {
+    private static String projectionLine(JsonNode p, Wording w) {
+        String configName = p.path("family").asText();
+        java.util.Optional<ProjectionFamily> family = ProjectionFamily.fromConfigName(configName);
         List<String> params = new ArrayList<>();
-        p.path("parameters").forEach(x -> params.add(x.path("key").asText() + " " + numbers.significant(x.path("value").asDouble())));
-        return p.path("family").asText() + (params.isEmpty() ? "" : " (" + String.join(", ", params) + ")");
+        p.path("parameters").forEach(x -> {
+            String key = x.path("key").asText();
+            String name = family.flatMap(f -> f.parameterName(key)).map(n -> ProjectionWords.parameter(n, w)).orElse(key);
+            params.add(w.text("parameter.value", "name", name, "value", w.numbers().degrees(x.path("value").asDouble(), 4)));
+        });
+        String familyName = family.map(f -> ProjectionWords.family(f, w)).orElse(configName);
+        return params.isEmpty() ? w.text("caption.projection", "family", familyName)
+                : w.text("caption.projectionWithParameters", "family", familyName, "parameters", w.unitList(params));
     }
 
     private static String breaksText(JsonNode pair, NumberWriter numbers) {

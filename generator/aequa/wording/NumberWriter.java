@@ -7,6 +7,7 @@ import java.util.List;
 import com.ibm.icu.number.LocalizedNumberFormatter;
 import com.ibm.icu.number.NumberFormatter;
 import com.ibm.icu.number.Precision;
+import com.ibm.icu.text.NumberingSystem;
 import com.ibm.icu.util.MeasureUnit;
 import com.ibm.icu.util.NoUnit;
 import com.ibm.icu.util.ULocale;
@@ -39,10 +40,31 @@ public final class NumberWriter {
 
     private final ULocale locale;
     private final LocalizedNumberFormatter plain;
+    private final String[] digits;
 
     NumberWriter(ULocale locale) {
         this.locale = locale;
         this.plain = NumberFormatter.withLocale(locale).roundingMode(RoundingMode.HALF_EVEN);
+        this.digits = digitsOf(locale);
+    }
+
+    /** The ten digits of the locale's default numbering system (CLDR), or the ASCII digits for an algorithmic one. */
+    private static String[] digitsOf(ULocale locale) {
+        NumberingSystem system = NumberingSystem.getInstance(locale);
+        String description = system.getDescription();
+        String[] digits = new String[10];
+        boolean decimal = !system.isAlgorithmic() && system.getRadix() == 10
+                && description.codePointCount(0, description.length()) == 10;
+        for (int d = 0, i = 0; d < 10; d++) {
+            if (decimal) {
+                int cp = description.codePointAt(i);
+                digits[d] = new String(Character.toChars(cp));
+                i += Character.charCount(cp);
+            } else {
+                digits[d] = String.valueOf((char) ('0' + d));
+            }
+        }
+        return digits;
     }
 
     /** {@code value} with exactly {@code decimals} decimals, grouped: "12,345.6" in English, "12 345,6" in French. */
@@ -137,15 +159,24 @@ public final class NumberWriter {
     }
 
     /**
-     * A period or date label from the project (a year such as "2021", or words): a label of ASCII digits only
-     * is written in the language's digits without grouping; any other label is the author's text, kept as is.
+     * A period or date label from the project: a label of ASCII digits and punctuation only (a year "2021", a
+     * range "2021–2023", a month "2024-03") is written in the language's digits, digit for digit, so nothing is
+     * grouped and leading zeros stay; a label with any letter ("Q1 2024", "spring") is the author's text, kept
+     * as is.
      */
     public String period(String label) {
-        if (label.isEmpty() || label.length() > 9 || !label.chars().allMatch(c -> c >= '0' && c <= '9')) {
+        boolean asciiDigits = label.chars().anyMatch(NumberWriter::isAsciiDigit);
+        boolean otherLettersOrDigits = label.chars().anyMatch(c -> Character.isLetter(c) || Character.isDigit(c) && !isAsciiDigit(c));
+        if (!asciiDigits || otherLettersOrDigits) {
             return label;
         }
-        return plain.grouping(NumberFormatter.GroupingStrategy.OFF).precision(Precision.integer())
-                .format(Long.parseLong(label)).toString();
+        StringBuilder out = new StringBuilder(label.length());
+        label.chars().forEach(c -> out.append(isAsciiDigit(c) ? digits[c - '0'] : String.valueOf((char) c)));
+        return out.toString();
+    }
+
+    private static boolean isAsciiDigit(int c) {
+        return c >= '0' && c <= '9';
     }
 
     /** The CLDR locale whose conventions this writer follows. */

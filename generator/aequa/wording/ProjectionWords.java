@@ -4,6 +4,7 @@ import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
+import aequa.projection.ChoiceReason;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionFamily;
 import aequa.projection.ProjectionParameter;
@@ -55,6 +56,64 @@ public final class ProjectionWords {
             return w.text("place.edge", "wind", camel(edge.group(1).split("-")));
         }
         return englishPlace;
+    }
+
+    /**
+     * The family's name with its aspect where the family has one ("Lambert azimuthal equal-area, north polar
+     * aspect"), as the method page names a map's projection.
+     */
+    public static String familyWithAspect(ProjectionChoice choice, Wording w) {
+        String family = family(choice.projection().family(), w);
+        return switch (ChoiceReason.aspect(choice.projection())) {
+            case NONE -> family;
+            case NORTH_POLAR -> w.text("projection.aspect", "family", family, "aspect", "northPolar");
+            case SOUTH_POLAR -> w.text("projection.aspect", "family", family, "aspect", "southPolar");
+            case EQUATORIAL -> w.text("projection.aspect", "family", family, "aspect", "equatorial");
+            case OBLIQUE -> w.text("projection.aspect", "family", family, "aspect", "oblique");
+        };
+    }
+
+    /**
+     * Why the projection was chosen, in the reader's language: the sentence that follows the projection's
+     * name on the method page (the English one of report.json is {@link ProjectionChoice#reason()}). Omegas
+     * with the decimals of {@link ChoiceReason#degreeDecimals}.
+     */
+    public static String reason(ProjectionChoice choice, Wording w) {
+        ChoiceReason why = choice.why();
+        NumberWriter numbers = w.numbers();
+        String distortion = w.text("reason.distortion", "max", degrees(choice.omegaMaxDeg(), numbers),
+                "mean", degrees(choice.omegaMeanDeg(), numbers));
+        ProjectionChoice.Candidate other = choice.runnersUp().isEmpty() ? null : choice.runnersUp().get(0);
+        ChoiceReason.Comparison comparison = other == null ? ChoiceReason.Comparison.NONE : why.comparison();
+        String margin = numbers.percent(why.basis() == ChoiceReason.Basis.KEPT_PREVIOUS
+                ? ChoiceReason.STABILITY_MARGIN_PERCENT : ChoiceReason.PREFERENCE_MARGIN_PERCENT, 0);
+        String otherFamily = other == null ? "" : family(other.family(), w);
+        String otherMax = other == null ? "" : degrees(other.omegaMaxDeg(), numbers);
+        return switch (why.basis()) {
+            case FORCED -> w.text("reason.forced", "distortion", distortion);
+            case KEPT_PREVIOUS -> comparison == ChoiceReason.Comparison.NONE
+                    ? w.text("reason.kept", "margin", margin, "distortion", distortion)
+                    : w.text("reason.keptAgainst", "margin", margin, "distortion", distortion, "other", otherMax,
+                    "family", otherFamily);
+            case AUTOMATIC -> {
+                String setting = w.text("reason.setting", "setting", settingWord(why.setting()));
+                yield switch (comparison) {
+                    case NONE -> w.text("reason.automatic", "setting", setting, "distortion", distortion);
+                    case AGAINST_RUNNER_UP -> w.text("reason.automaticAgainst", "setting", setting,
+                            "distortion", distortion, "other", otherMax, "family", otherFamily);
+                    case PREFERRED_WITHIN_MARGIN -> w.text("reason.automaticPreferred", "setting", setting,
+                            "distortion", distortion, "other", otherMax, "family", otherFamily, "margin", margin);
+                };
+            }
+        };
+    }
+
+    private static String settingWord(ChoiceReason.Setting setting) {
+        return camel(setting.name().split("_"));
+    }
+
+    private static String degrees(double valueDeg, NumberWriter numbers) {
+        return numbers.degrees(valueDeg, ChoiceReason.degreeDecimals(valueDeg));
     }
 
     public static String family(ProjectionFamily family, Wording w) {

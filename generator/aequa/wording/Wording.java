@@ -147,6 +147,15 @@ public final class Wording {
         return joined;
     }
 
+    /** "a; b; c": clauses joined as the language separates them ("a ; b" in French, "a؛ b" in Arabic). */
+    public String clauseList(java.util.List<String> items) {
+        String joined = items.isEmpty() ? "" : items.get(0);
+        for (int i = 1; i < items.size(); i++) {
+            joined = text("list.clause", "list", joined, "item", items.get(i));
+        }
+        return joined;
+    }
+
     /**
      * The range of class {@code i} in words, as every key of a map says it (the drawn legend, the page's key):
      * "1 to under 2" for every class but the last, which holds its upper limit too ("9 to 10"), following

@@ -24,6 +24,7 @@ import aequa.project.MapSpec;
 import aequa.project.Measure;
 import aequa.project.Normalisation;
 import aequa.project.Words;
+import aequa.projection.ChoiceReason;
 import aequa.projection.EqualAreaProjection;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.Projections;
@@ -110,7 +111,8 @@ public final class MapFixtures {
                 .normalise(Normalisation.NONE).unit(display.equals("circles") ? "clinics" : "per 1,000 km\u00b2")
                 .display(Words.of(MapDisplay.class, display)).source("Invented survey of the Ostmark health office")
                 .asOf(periods.get(periods.size() - 1)).build();
-        ProjectionChoice choice = new ProjectionChoice(projection, 2.4, 0.9, 12, 58, List.of(), "fixture");
+        ProjectionChoice choice = new ProjectionChoice(projection, 2.4, 0.9, 12, 58, List.of(),
+                new ChoiceReason(ChoiceReason.Basis.AUTOMATIC, ChoiceReason.Setting.ROUND_AREA, ChoiceReason.Comparison.NONE));
         return new MapModel(spec, periods, choice, regions, classes, ramp, new AreaAudit(2e-9, "K001", 1e-6),
                 List.of("Figures for 3 regions are missing."));
     }

@@ -103,7 +103,7 @@ class EditionChangesTest {
         MapModel map = SiteFixtures.map("a", texts, 10, 0);
         publish(out, List.of(map));
         MapModel moved = new MapModel(map.spec(), map.periods(), new aequa.projection.ProjectionChoice(
-                aequa.projection.Projections.lambertAzimuthal(11, 52), 1, 1, 0, 0, List.of(), "moved"),
+                aequa.projection.Projections.lambertAzimuthal(11, 52), 1, 1, 0, 0, List.of(), SiteFixtures.AUTOMATIC_ROUND),
                 map.regions(), map.classification(), map.ramp(), map.areaAudit(), map.notices());
         JsonNode report = publish(out, List.of(moved));
         assertEquals(10.0, SiteReportTest.parameter(report.at("/changes/maps/0/projection/from/parameters"), "centre-lon"));
@@ -157,7 +157,7 @@ class EditionChangesTest {
 
     private static aequa.atlas.MapPart part(String id, String name, List<String> keys, double centreLonDeg) {
         var choice = new aequa.projection.ProjectionChoice(aequa.projection.Projections.lambertAzimuthal(centreLonDeg, 52),
-                1, 1, 0, 0, List.of(), "fitted");
+                1, 1, 0, 0, List.of(), SiteFixtures.AUTOMATIC_ROUND);
         return new aequa.atlas.MapPart(id, name, keys, id.equals("main"), 1, choice,
                 new aequa.planar.AreaAudit(1e-9, "", 1e-4), 100, 0, new aequa.atlas.MapPart.Frame(0, 0, 1, 1), 0, 0, 0);
     }

@@ -25,6 +25,7 @@ import aequa.project.Normalisation;
 import aequa.project.ProjectFile;
 import aequa.project.SiteSpec;
 import aequa.project.Words;
+import aequa.projection.ChoiceReason;
 import aequa.projection.ProjectionChoice;
 import aequa.projection.Projections;
 import aequa.statistics.FigureStatus;
@@ -35,6 +36,10 @@ import aequa.statistics.FigureStatus;
  * tests check properties of the publish (bytes, files, escaping), not the figures.
  */
 final class SiteFixtures {
+
+    /** The reason of an automatic choice for compact data, with no other candidate. */
+    static final ChoiceReason AUTOMATIC_ROUND = new ChoiceReason(ChoiceReason.Basis.AUTOMATIC,
+            ChoiceReason.Setting.ROUND_AREA, ChoiceReason.Comparison.NONE);
 
     static final String NOTICE = "All places and figures on this site are invented.";
 
@@ -116,7 +121,7 @@ final class SiteFixtures {
         ColourRamp ramp = new ColourRamp(ColourScheme.SEQUENTIAL, List.of(Rgb.fromHex("#dfe9f5"), Rgb.fromHex("#2a5a8c")),
                 List.of(Rgb.fromHex("#000000"), Rgb.fromHex("#ffffff")), List.of());
         ProjectionChoice choice = new ProjectionChoice(Projections.lambertAzimuthal(10, 52), 1.25, 0.5, 12, 55,
-                List.of(), "The regions are compact, so an azimuthal projection centred on them keeps angles closest.");
+                List.of(), AUTOMATIC_ROUND);
         return new MapModel(spec, List.of("2031"), choice, classified, classes, ramp,
                 new AreaAudit(3e-9, "K002", 1e-4), List.of("One region has no figure."));
     }

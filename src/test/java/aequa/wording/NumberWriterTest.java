@@ -69,6 +69,11 @@ class NumberWriterTest {
         assertEquals("\u0661\u066c\u0662\u0663\u0664\u066b\u0665", egypt.fixed(1234.5, 1));
         assertEquals("\u0661\u0662\u066b\u0665\u066a\u061c", egypt.percent(12.5, 1));
         assertEquals("\u0662\u0660\u0662\u0664", egypt.period("2024"), "a year in the language's digits, ungrouped");
+        // CLDR's arab numbering system: U+0660..U+0669 stand for 0..9, digit for digit
+        assertEquals("\u0662\u0660\u0662\u0663\u2013\u0662\u0660\u0662\u0665", egypt.period("2023\u20132025"), "a range of years");
+        assertEquals("\u0662\u0660\u0662\u0664-\u0660\u0663", egypt.period("2024-03"), "a month keeps its leading zero");
+        assertEquals("Q1 2024", egypt.period("Q1 2024"), "a label with words is the author's text");
+        assertEquals("2023\u20132025", ar.period("2023\u20132025"), "CLDR ar writes Latin digits");
     }
 
     @Test
