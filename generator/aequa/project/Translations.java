@@ -26,7 +26,7 @@ public final class Translations {
 
     /** Whether a translation keyed {@code key} serves one of {@code tags}. */
     public static boolean serves(String key, java.util.List<String> tags) {
-        return tags.stream().anyMatch(tag -> of(Map.of(key, key), tag).isPresent());
+        return tags.stream().anyMatch(tag -> key.equalsIgnoreCase(tag) || key.equalsIgnoreCase(tag.split("-", 2)[0]));
     }
 
     private static <T> Optional<T> find(Map<String, T> byTag, String tag) {

@@ -95,11 +95,12 @@ final class SiteBuild {
                 edition.add(fileIds.get(i)).add(fingerprints.get(i));
             }
             int steps = count * languages.size();
+            // each edition: the maps' and the site's own words in its language; fingerprints come from the whole
+            // project file, translations included, so a changed translation redraws
+            List<Atlas> editions = languages.stream().map(language -> atlas.inLanguage(language.wording())).toList();
             for (int l = 0; l < languages.size(); l++) {
                 SiteLanguage language = languages.get(l);
-                // the maps' and the site's own words in this language; fingerprints come from the whole project
-                // file, translations included, so a changed translation redraws
-                Atlas inLanguage = atlas.inLanguage(language.wording());
+                Atlas inLanguage = editions.get(l);
                 SiteView site = SiteViews.site(inLanguage.project().site(), language, languages);
                 MapArtwork artwork = this.artwork.inLanguage(language.wording());
                 List<MapFiles> files = fileIds.stream().map(id -> MapFiles.of(language.prefix(), id)).toList();
@@ -139,8 +140,9 @@ final class SiteBuild {
                 put(SiteReport.FILE_NAME, SiteReport.write(atlas, maps, digest, findings, changes, json), pagesHash);
                 progress.step(Stage.REPORT, 1, 1);
                 progress.step(Stage.PAGES, 0, 1);
-                for (SiteLanguage language : languages) {
-                    Atlas inLanguage = atlas.inLanguage(language.wording());
+                for (int l = 0; l < languages.size(); l++) {
+                    SiteLanguage language = languages.get(l);
+                    Atlas inLanguage = editions.get(l);
                     SiteView site = SiteViews.site(inLanguage.project().site(), language, languages);
                     Wording wording = language.wording();
                     // links from a language's site pages to its map pages are relative to that language's root
