@@ -34,6 +34,9 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
      * A part's planar layer ({@link PlanarLayer#of(RegionLayer, aequa.projection.EqualAreaProjection, Footprint,
      * double, double, double)}); the caller may share them between maps.
      */
+    /** The shipped languages' wording, for frames with room for the label in any of them. */
+    private static final List<aequa.wording.Wording> LANGUAGES = MapPart.everyLanguage();
+
     interface PlanarLayers {
         PlanarLayer of(RegionLayer subset, PartPlan plan, Footprint drawnFootprint, double minDrawnWidthM);
     }
@@ -52,10 +55,17 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
         List<PartLayout.Inset> insets = new ArrayList<>();
         for (int i = 1; i < plans.size(); i++) {
             PartPlan plan = plans.get(i);
-            double nameWidthM = PartLayout.nameWidthM(MapPart.frameLabel(plan.name(), plan.areaScale()), mainExtent);
-            List<String> lines = MapPart.frameLabelLines(plan.name(), plan.areaScale());
-            double twoLineWidthM = lines.isEmpty() ? PartLayout.TWO_LINE_WIDTH * nameWidthM
-                    : lines.stream().mapToDouble(line -> PartLayout.nameWidthM(line, mainExtent)).max().orElse(0);
+            // the same frames in every language: room for the longest label the shipped languages give
+            double nameWidthM = 0;
+            double twoLineWidthM = 0;
+            for (aequa.wording.Wording w : LANGUAGES) {
+                double oneLine = PartLayout.nameWidthM(MapPart.frameLabel(plan.name(), plan.areaScale(), w), mainExtent);
+                List<String> lines = MapPart.frameLabelLines(plan.name(), plan.areaScale(), w);
+                double twoLines = lines.isEmpty() ? PartLayout.TWO_LINE_WIDTH * oneLine
+                        : lines.stream().mapToDouble(line -> PartLayout.nameWidthM(line, mainExtent)).max().orElse(0);
+                nameWidthM = Math.max(nameWidthM, oneLine);
+                twoLineWidthM = Math.max(twoLineWidthM, twoLines);
+            }
             insets.add(new PartLayout.Inset(extent(planar.get(i).simplifiedM().values()), nameWidthM, twoLineWidthM,
                     plan.corner(), plan.areaScale() != 1));
         }
