@@ -34,14 +34,16 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
      * A part's planar layer ({@link PlanarLayer#of(RegionLayer, aequa.projection.EqualAreaProjection, Footprint,
      * double, double, double)}); the caller may share them between maps.
      */
-    /** The shipped languages' wording, for frames with room for the label in any of them. */
-    private static final List<aequa.wording.Wording> LANGUAGES = MapPart.everyLanguage();
-
     interface PlanarLayers {
         PlanarLayer of(RegionLayer subset, PartPlan plan, Footprint drawnFootprint, double minDrawnWidthM);
     }
 
-    static CompositeLayers of(RegionLayer layer, List<PartPlan> plans, PlanarLayers planarLayers) {
+    /**
+     * The parts' layers, the framed parts placed with room for their labels in every language of {@code languages}
+     * (the site's: every edition gets the same frames).
+     */
+    static CompositeLayers of(RegionLayer layer, List<PartPlan> plans, PlanarLayers planarLayers,
+                              List<aequa.wording.Wording> languages) {
         PartPlan mainPlan = plans.get(0);
         double mainWidthM = PlanarLayer.roughWidthM(mainPlan.footprint());
         List<PlanarLayer> planar = new ArrayList<>();
@@ -55,10 +57,10 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
         List<PartLayout.Inset> insets = new ArrayList<>();
         for (int i = 1; i < plans.size(); i++) {
             PartPlan plan = plans.get(i);
-            // the same frames in every language: room for the longest label the shipped languages give
+            // the same frames in every language: room for the longest label the site's languages give
             double nameWidthM = 0;
             double twoLineWidthM = 0;
-            for (aequa.wording.Wording w : LANGUAGES) {
+            for (aequa.wording.Wording w : languages) {
                 double oneLine = PartLayout.nameWidthM(MapPart.frameLabel(plan.name(), plan.areaScale(), w), mainExtent);
                 List<String> lines = MapPart.frameLabelLines(plan.name(), plan.areaScale(), w);
                 double twoLines = lines.isEmpty() ? PartLayout.TWO_LINE_WIDTH * oneLine

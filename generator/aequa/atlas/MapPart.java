@@ -6,7 +6,6 @@ import java.util.List;
 
 import aequa.planar.AreaAudit;
 import aequa.projection.ProjectionChoice;
-import aequa.wording.Language;
 import aequa.wording.NumberWriter;
 import aequa.wording.Wording;
 
@@ -65,14 +64,6 @@ public record MapPart(String id, String name, List<String> keys, boolean main, d
 
     static List<String> frameLabelLines(String name, double areaScale, Wording w) {
         return areaScale == 1 ? List.of() : List.of(name, scaleNote(areaScale, w));
-    }
-
-    /**
-     * The wording of every shipped language, for a layout that must leave room for the frame's text whichever
-     * language the map is drawn in: the layout measures the longest.
-     */
-    static List<Wording> everyLanguage() {
-        return Language.SHIPPED.stream().map(tag -> Wording.of(new Language(tag))).toList();
     }
 
     private static String scaleNote(double areaScale, Wording w) {
