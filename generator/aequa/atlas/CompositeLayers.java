@@ -38,7 +38,12 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
         PlanarLayer of(RegionLayer subset, PartPlan plan, Footprint drawnFootprint, double minDrawnWidthM);
     }
 
-    static CompositeLayers of(RegionLayer layer, List<PartPlan> plans, PlanarLayers planarLayers) {
+    /**
+     * The parts' layers, the framed parts placed with room for their labels in every language of {@code languages}
+     * (the site's: every edition gets the same frames).
+     */
+    static CompositeLayers of(RegionLayer layer, List<PartPlan> plans, PlanarLayers planarLayers,
+                              List<aequa.wording.Wording> languages) {
         PartPlan mainPlan = plans.get(0);
         double mainWidthM = PlanarLayer.roughWidthM(mainPlan.footprint());
         List<PlanarLayer> planar = new ArrayList<>();
@@ -52,10 +57,17 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
         List<PartLayout.Inset> insets = new ArrayList<>();
         for (int i = 1; i < plans.size(); i++) {
             PartPlan plan = plans.get(i);
-            double nameWidthM = PartLayout.nameWidthM(MapPart.frameLabel(plan.name(), plan.areaScale()), mainExtent);
-            List<String> lines = MapPart.frameLabelLines(plan.name(), plan.areaScale());
-            double twoLineWidthM = lines.isEmpty() ? PartLayout.TWO_LINE_WIDTH * nameWidthM
-                    : lines.stream().mapToDouble(line -> PartLayout.nameWidthM(line, mainExtent)).max().orElse(0);
+            // the same frames in every language: room for the longest label the site's languages give
+            double nameWidthM = 0;
+            double twoLineWidthM = 0;
+            for (aequa.wording.Wording w : languages) {
+                double oneLine = PartLayout.nameWidthM(MapPart.frameLabel(plan.name(), plan.areaScale(), w), mainExtent);
+                List<String> lines = MapPart.frameLabelLines(plan.name(), plan.areaScale(), w);
+                double twoLines = lines.isEmpty() ? PartLayout.TWO_LINE_WIDTH * oneLine
+                        : lines.stream().mapToDouble(line -> PartLayout.nameWidthM(line, mainExtent)).max().orElse(0);
+                nameWidthM = Math.max(nameWidthM, oneLine);
+                twoLineWidthM = Math.max(twoLineWidthM, twoLines);
+            }
             insets.add(new PartLayout.Inset(extent(planar.get(i).simplifiedM().values()), nameWidthM, twoLineWidthM,
                     plan.corner(), plan.areaScale() != 1));
         }

@@ -86,7 +86,7 @@ final class MapAssembler {
                     key -> cache.planar(layer, choice.projection(), project.file().checks().areaTolerance(), 1, 0,
                             () -> PlanarLayer.of(layer, choice.projection(), footprint, project.file().checks().areaTolerance())));
         } else {
-            CompositeLayers composite = CompositeLayers.of(layer, plans.get(), this::partLayer);
+            CompositeLayers composite = CompositeLayers.of(layer, plans.get(), this::partLayer, siteLanguages());
             planar = new PlanarLayer(composite.simplifiedM(), composite.mapAreaRatio(), composite.audit(), composite.dropped());
             parts = composite.parts();
         }
@@ -178,5 +178,12 @@ final class MapAssembler {
             }
         }
         return notices;
+    }
+
+    /** The wording of the site's languages (English when none can be read: the project file's check reports it). */
+    private List<aequa.wording.Wording> siteLanguages() {
+        List<aequa.wording.Wording> languages = project.file().site().languages().stream()
+                .map(aequa.wording.Language::parse).flatMap(Optional::stream).map(aequa.wording.Wording::of).toList();
+        return languages.isEmpty() ? List.of(aequa.wording.Wording.english()) : languages;
     }
 }

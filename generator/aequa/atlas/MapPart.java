@@ -1,9 +1,13 @@
 package aequa.atlas;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.List;
 
 import aequa.planar.AreaAudit;
 import aequa.projection.ProjectionChoice;
+import aequa.wording.NumberWriter;
+import aequa.wording.Wording;
 
 /**
  * One part of a composite map: the main part, or a detached part drawn in a frame on its own projection.
@@ -33,41 +37,46 @@ public record MapPart(String id, String name, List<String> keys, boolean main, d
         keys = List.copyOf(keys);
     }
 
-    /**
-     * The text on the part's frame: its name, and for a part at another area scale how its areas compare, for
-     * example "Alaska (areas at 0.25 × the main map)".
-     */
-    public String frameLabel() {
-        return frameLabel(name, areaScale);
+    /** The part's name for readers: the main part is called "Main map" in the reader's language. */
+    public String nameIn(Wording w) {
+        return main ? w.text("part.mainName") : name;
     }
 
-    static String frameLabel(String name, double areaScale) {
-        return areaScale == 1 ? name : name + " " + scaleNote(areaScale);
+    /**
+     * The text on the part's frame in the reader's language: its name, and for a part at another area scale how its
+     * areas compare, for example "Alaska (areas at 0.25 × the main map)".
+     */
+    public String frameLabel(Wording w) {
+        return frameLabel(name, areaScale, w);
     }
 
     /**
      * The frame's text in two lines, for a frame too narrow for one: the name, then how its areas compare; a
      * part at the main scale has its name broken by the drawing instead, so this is empty for it.
      */
-    public List<String> frameLabelLines() {
-        return frameLabelLines(name, areaScale);
+    public List<String> frameLabelLines(Wording w) {
+        return frameLabelLines(name, areaScale, w);
     }
 
-    static List<String> frameLabelLines(String name, double areaScale) {
-        return areaScale == 1 ? List.of() : List.of(name, scaleNote(areaScale));
+    static String frameLabel(String name, double areaScale, Wording w) {
+        return areaScale == 1 ? name : name + " " + scaleNote(areaScale, w);
     }
 
-    private static String scaleNote(double areaScale) {
-        return "(areas at " + factorText(areaScale) + " \u00d7 the main map)";
+    static List<String> frameLabelLines(String name, double areaScale, Wording w) {
+        return areaScale == 1 ? List.of() : List.of(name, scaleNote(areaScale, w));
     }
 
-    /** The area scale as readers see it: at most three significant digits, for example "0.25". */
-    public String areaScaleText() {
-        return factorText(areaScale);
+    private static String scaleNote(double areaScale, Wording w) {
+        return w.text("draw.frameScale", "scale", areaScaleText(areaScale, w.numbers()));
     }
 
-    private static String factorText(double areaScale) {
-        return java.math.BigDecimal.valueOf(areaScale).round(new java.math.MathContext(3)).stripTrailingZeros().toPlainString();
+    /** The area scale as readers of {@code numbers}' language see it: at most three significant digits ("0.25", "0,25"). */
+    public String areaScaleText(NumberWriter numbers) {
+        return areaScaleText(areaScale, numbers);
+    }
+
+    private static String areaScaleText(double areaScale, NumberWriter numbers) {
+        return numbers.significant(BigDecimal.valueOf(areaScale).round(new MathContext(3)).doubleValue());
     }
 
     /** A rectangle on the map's plane, metres. */

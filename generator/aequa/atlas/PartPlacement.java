@@ -9,7 +9,7 @@ import aequa.inputs.regions.Region;
 /**
  * Places planned parts as the load step does, for a caller outside a project ({@code explain}): each part
  * projected, audited and simplified on its own projection and area scale, then the framed parts placed
- * around the main part ({@link CompositeLayers}).
+ * around the main part ({@link CompositeLayers}), with room for English labels.
  */
 public final class PartPlacement {
 
@@ -27,6 +27,6 @@ public final class PartPlacement {
                                       List<PartPlan> plans, double toleranceArea) {
         RegionLayer layer = new RegionLayer("explain", file, regions, areaKm2ByKey);
         return CompositeLayers.of(layer, plans, (subset, plan, drawnFootprint, minDrawnWidthM) -> PlanarLayer.of(subset,
-                plan.choice().projection(), drawnFootprint, toleranceArea, plan.areaScale(), minDrawnWidthM)).parts();
+                plan.choice().projection(), drawnFootprint, toleranceArea, plan.areaScale(), minDrawnWidthM), List.of(aequa.wording.Wording.english())).parts();
     }
 }

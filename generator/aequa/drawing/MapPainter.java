@@ -127,7 +127,7 @@ final class MapPainter {
                 canvas.end();
             }
             if (model.composite()) {
-                PartFrames.paint(canvas, model, theme, panel.fit(), suffix, options.wording().numbers());
+                PartFrames.paint(canvas, model, theme, panel.fit(), suffix, options.wording());
             }
             if (graticule && !wholeGlobe) {
                 canvas.begin("graticule" + suffix);

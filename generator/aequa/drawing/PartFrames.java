@@ -14,6 +14,7 @@ import aequa.atlas.MapModel;
 import aequa.atlas.MapPart;
 import aequa.atlas.MapRegion;
 import aequa.wording.NumberWriter;
+import aequa.wording.Wording;
 
 /**
  * The parts of a composite map on the page: each part's regions as a named group (so print SVG has a layer
@@ -53,10 +54,10 @@ final class PartFrames {
 
     /**
      * The frames and names of the framed parts, one group each; a part at its own area scale also gets its own
-     * area-scale square (true for its areas only) in the band at the bottom of its frame, its label written by
- * {@code numbers}.
+     * area-scale square (true for its areas only) in the band at the bottom of its frame. Every word is in
+     * {@code wording}'s language.
      */
-    static void paint(Canvas canvas, MapModel model, Theme theme, MapFit fit, String suffix, NumberWriter numbers) {
+    static void paint(Canvas canvas, MapModel model, Theme theme, MapFit fit, String suffix, Wording wording) {
         Theme.Colours c = theme.colours();
         for (MapPart part : model.parts()) {
             if (part.main()) {
@@ -71,18 +72,18 @@ final class PartFrames {
             double bandU = part.nameBandM() * scale;
             canvas.begin(Ids.of("frame", part.id()) + suffix);
             canvas.stroke(new Rectangle2D.Double(x, y, w, h), c.textMuted(), theme.lines().border().pt());
-            paintName(canvas, theme, part, x, y, w, bandU);
+            paintName(canvas, theme, part, wording, x, y, w, bandU);
             if (part.scaleBandM() > 0) {
-                paintOwnScale(canvas, theme, numbers, part, scale, x, y + h, part.scaleBandM() * scale, bandU / Math.max(1, part.nameLines()));
+                paintOwnScale(canvas, theme, wording.numbers(), part, scale, x, y + h, part.scaleBandM() * scale, bandU / Math.max(1, part.nameLines()));
             }
             canvas.end();
         }
     }
 
     /** The name in its band: one line, or two when the layout made room for two and one does not fit. */
-    private static void paintName(Canvas canvas, Theme theme, MapPart part, double x, double y, double w, double bandU) {
+    private static void paintName(Canvas canvas, Theme theme, MapPart part, Wording wording, double x, double y, double w, double bandU) {
         Typesetter type = canvas.type();
-        String label = part.frameLabel();
+        String label = part.frameLabel(wording);
         int lines = Math.max(1, part.nameLines());
         double lineBandU = bandU / lines;
         double legend = theme.typePt().legend();
@@ -90,7 +91,7 @@ final class PartFrames {
         double room = w - lineBandU * 0.6;
         List<String> text = List.of(label);
         if (type.width(label, size, false) > room && lines == 2) {
-            List<String> wrapped = part.frameLabelLines().isEmpty() ? type.wrap(label, size, false, room) : part.frameLabelLines();
+            List<String> wrapped = part.frameLabelLines(wording).isEmpty() ? type.wrap(label, size, false, room) : part.frameLabelLines(wording);
             text = wrapped.size() <= 2 ? wrapped : List.of(label);
         }
         double widest = text.stream().mapToDouble(t -> type.width(t, size, false)).max().orElse(0);

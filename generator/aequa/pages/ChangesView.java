@@ -21,7 +21,7 @@ public record ChangesView(String basis, List<MapChange> maps, int unchangedCount
      * @param state          {@code added}, {@code removed} or {@code changed}
      * @param asOfChange     "from -> to" when the date of the figures changed, else empty
      * @param projectionChange "from -> to" when the projection changed, else empty
-     * @param partChanges    one sentence per framed part added, removed or re-projected (composite maps)
+     * @param partChanges    one sentence per part added, removed or changed (composite maps), in the page's language
      * @param breaksChange   "from -> to" when the class limits moved, else empty
      * @param classChanges   regions whose class changed
      * @param valueChanges   regions whose figure changed within the same class (from and to are figures)

@@ -15,7 +15,8 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
  * different, compared map by map (matched on id) from the two reports' {@code maps} sections.
  *
  * <p>Per map it lists: the date of the figures, a projection change (family or parameters), framed parts
- * added, removed or re-projected, class limits that moved, regions whose class (in the latest period)
+ * added, removed or changed (projection family, parameters, largest omega, regions, area scale), class limits
+ * that moved, regions whose class (in the latest period)
  * changed, regions whose figure changed within the same class ({@code valueChanged}: an edited figure must
  * show even when its colour did not), and regions added or removed. Maps
  * without change are counted, not listed. When the figures are identical to the previous edition
@@ -129,30 +130,88 @@ final class EditionChanges {
         return any ? diff : null;
     }
 
+    /** Below this difference (degrees) a part's largest omega counts as unchanged: the pages show it to 0.01 deg. */
+    private static final double OMEGA_STEP_DEG = 0.005;
+
     /**
-     * The framed parts added, removed, re-projected or given other regions or another area scale, matched by
-     * name, as sentences (a map that gained or lost its parts altogether shows as parts added or removed).
+     * The parts added, removed or changed, matched by name (a map that gained or lost its parts altogether shows
+     * as parts added or removed). A changed part says what changed, each as {@code from} and {@code to}:
+     * {@code family} (the projection family's configuration name); else {@code parameters} (each parameter whose
+     * value moved, by key and EPSG name, with its unit); {@code omegaMaxDeg} when its largest angular distortion
+     * moved by {@value #OMEGA_STEP_DEG} deg or more; {@code regions} (their count) when its regions differ;
+     * {@code areaScale}. The pages word these in the reader's language.
      */
     private static ArrayNode partChanges(JsonNode was, JsonNode now, ObjectMapper json) {
         Map<String, JsonNode> before = new LinkedHashMap<>();
         was.forEach(p -> before.put(p.path("name").asText(), p));
         Map<String, JsonNode> after = new LinkedHashMap<>();
         now.forEach(p -> after.put(p.path("name").asText(), p));
-        ArrayNode sentences = json.createArrayNode();
+        ArrayNode changes = json.createArrayNode();
         for (Map.Entry<String, JsonNode> e : after.entrySet()) {
             JsonNode old = before.get(e.getKey());
-            JsonNode part = e.getValue();
             if (old == null) {
-                sentences.add("Part added: " + e.getKey() + ".");
-            } else if (!projectionKey(old.path("projection"), json).equals(projectionKey(part.path("projection"), json))) {
-                sentences.add("Part re-projected: " + e.getKey() + " (" + old.path("projection").path("name").asText() + " → "
-                        + part.path("projection").path("name").asText() + ").");
-            } else if (!old.path("regions").equals(part.path("regions")) || !old.path("areaScale").equals(part.path("areaScale"))) {
-                sentences.add("Part changed: " + e.getKey() + " (its regions or area scale).");
+                changes.addObject().put("name", e.getKey()).put("change", "added");
+                continue;
+            }
+            ObjectNode change = partChange(e.getKey(), old, e.getValue(), json);
+            if (change != null) {
+                changes.add(change);
             }
         }
-        before.keySet().stream().filter(name -> !after.containsKey(name)).forEach(name -> sentences.add("Part removed: " + name + "."));
-        return sentences;
+        before.keySet().stream().filter(name -> !after.containsKey(name))
+                .forEach(name -> changes.addObject().put("name", name).put("change", "removed"));
+        return changes;
+    }
+
+    /** What changed in one part kept from the previous edition, or null when nothing did. */
+    private static ObjectNode partChange(String name, JsonNode old, JsonNode part, ObjectMapper json) {
+        ObjectNode change = json.createObjectNode().put("name", name).put("change", "changed");
+        JsonNode projOld = old.path("projection");
+        JsonNode projNow = part.path("projection");
+        boolean any = false;
+        if (!projOld.path("family").equals(projNow.path("family"))) {
+            fromTo(change, "family", projOld.path("family"), projNow.path("family"));
+            any = true;
+        } else {
+            ArrayNode moved = json.createArrayNode();
+            Map<String, JsonNode> oldParameters = new LinkedHashMap<>();
+            projOld.path("parameters").forEach(p -> oldParameters.put(p.path("key").asText(), p));
+            for (JsonNode p : projNow.path("parameters")) {
+                JsonNode o = oldParameters.get(p.path("key").asText());
+                if (o == null || !o.path("value").equals(p.path("value"))) {
+                    ObjectNode m = moved.addObject().put("key", p.path("key").asText()).put("name", p.path("name").asText())
+                            .put("unit", p.path("unit").asText());
+                    m.set("from", o == null ? json.nullNode() : o.path("value").deepCopy());
+                    m.set("to", p.path("value").deepCopy());
+                }
+            }
+            if (!moved.isEmpty()) {
+                change.put("family", projNow.path("family").asText());
+                change.set("parameters", moved);
+                any = true;
+            }
+        }
+        double omegaOld = old.path("omegaMaxDeg").asDouble(Double.NaN);
+        double omegaNow = part.path("omegaMaxDeg").asDouble(Double.NaN);
+        if (Math.abs(omegaNow - omegaOld) >= OMEGA_STEP_DEG) {
+            fromTo(change, "omegaMaxDeg", old.path("omegaMaxDeg"), part.path("omegaMaxDeg"));
+            any = true;
+        }
+        if (!old.path("regions").equals(part.path("regions"))) {
+            change.putObject("regions").put("from", old.path("regions").size()).put("to", part.path("regions").size());
+            any = true;
+        }
+        if (!old.path("areaScale").equals(part.path("areaScale"))) {
+            fromTo(change, "areaScale", old.path("areaScale"), part.path("areaScale"));
+            any = true;
+        }
+        return any ? change : null;
+    }
+
+    private static void fromTo(ObjectNode change, String field, JsonNode from, JsonNode to) {
+        ObjectNode pair = change.putObject(field);
+        pair.set("from", from.deepCopy());
+        pair.set("to", to.deepCopy());
     }
 
     private static JsonNode projectionKey(JsonNode projection, ObjectMapper json) {

@@ -12,6 +12,7 @@ import aequa.atlas.MapRegion;
 import aequa.atlas.RegionValue;
 import aequa.project.ClassMethod;
 import aequa.classes.Classification;
+import aequa.drawing.PartSentences;
 import aequa.pages.EmbedView;
 import aequa.pages.FiguresView;
 import aequa.pages.IndexView;
@@ -61,7 +62,7 @@ final class MapViews {
         NumberWriter numbers = w.numbers();
         List<FiguresView.Row> rows = new ArrayList<>();
         java.util.Map<String, String> partOf = new java.util.HashMap<>();
-        map.parts().forEach(part -> part.keys().forEach(key -> partOf.put(key, part.name())));
+        map.parts().forEach(part -> part.keys().forEach(key -> partOf.put(key, part.nameIn(w))));
         for (MapRegion region : map.regions()) {
             List<FiguresView.Cell> cells = new ArrayList<>();
             for (int p = 0; p < map.periods().size(); p++) {
@@ -98,6 +99,10 @@ final class MapViews {
         String projection = projectionText(map.projection(), w);
         StringBuilder text = new StringBuilder(w.sentence(w.text(map.areaAudit().passed() ? "caption.onEllipsoid" : "caption.onEllipsoidNotTrue", "projection", projection,
                 "error", errorPercent(map.areaAudit().maxRelativeError(), w))));
+        if (map.composite()) {
+            // parts at another area scale: the areas are true at each part's declared scale, and the caption says so
+            text.append(' ').append(PartSentences.forPage(map, w));
+        }
         String source = map.spec().source();
         String asOf = w.numbers().period(map.spec().asOf());
         if (!source.isEmpty()) {
@@ -233,14 +238,14 @@ final class MapViews {
         List<String> sentences = new ArrayList<>();
         for (MapPart part : map.parts()) {
             ProjectionChoice choice = part.projection();
-            String where = part.main() || !Double.isFinite(part.gapKm()) ? w.text("part.regions", "name", part.name(),
+            String where = part.main() || !Double.isFinite(part.gapKm()) ? w.text("part.regions", "name", part.nameIn(w),
                     "count", part.keys().size(), "area", numbers.areaKm2(Math.round(part.areaKm2()), 0))
                     : w.text("part.regionsAway", "name", part.name(), "count", part.keys().size(),
                     "area", numbers.areaKm2(Math.round(part.areaKm2()), 0), "gap", numbers.distanceKm(part.gapKm()));
-            String projection = w.text("part.projection", "projection", projectionText(choice, w),
+            String projection = w.text("part.projection", "projection", w.sentence(projectionText(choice, w)),
                     "max", numbers.degrees(choice.omegaMaxDeg(), 2), "mean", numbers.degrees(choice.omegaMeanDeg(), 2));
             String scale = part.main() ? w.text("part.mainScale") : part.areaScale() == 1 ? w.text("part.sameScale")
-                    : w.text("part.otherScale", "scale", part.areaScaleText());
+                    : w.text("part.otherScale", "scale", part.areaScaleText(numbers));
             String check = w.text("part.areaCheck", "error", errorPercent(part.areaAudit().maxRelativeError(), w));
             sentences.add(String.join(" ", where, projection, scale, check));
         }

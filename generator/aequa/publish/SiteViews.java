@@ -141,7 +141,7 @@ final class SiteViews {
             maps.add(new ChangesView.MapChange(index < 0 ? SafePaths.fileSafeId(id) : files.get(index).fileId(),
                     m.path("title").asText(), m.path("state").asText(), fromTo(m.path("asOf"), numbers),
                     projectionText(m.path("projection"), w), breaksText(m.path("breaks"), numbers), moved, edited,
-                    texts(m.path("regionsAdded")), texts(m.path("regionsRemoved")), href, texts(m.path("parts"))));
+                    texts(m.path("regionsAdded")), texts(m.path("regionsRemoved")), href, PartChangeWords.sentences(m.path("parts"), w)));
         }
         return new ChangesView(basis, maps, changes.path("unchangedMaps").asInt());
     }

@@ -227,6 +227,33 @@ class DemoPublishTest {
                 "a region of the island group is listed in its part");
     }
 
+    /**
+     * Port Ossory is drawn at 4 times the main map's area scale: its frame says so in the map's language (the words
+     * were English in every language), and the web page's caption says so too (it called the whole map's areas
+     * true without saying the parts differ in scale).
+     */
+    @Test
+    void theEnlargedPartIsStatedInTheReadersLanguageOnTheFrameAndInThePageCaption() throws IOException {
+        String french = group(Files.readString(site.resolve("fr/maps/library-cards/library-cards.svg")), "frame-part-2");
+        assertTrue(french.contains("(superficies à 4 × la carte principale)"), french);
+        String arabic = group(Files.readString(site.resolve("ar/maps/library-cards/library-cards.svg")), "frame-part-2");
+        assertTrue(arabic.contains("المساحات") && !arabic.contains("areas at"), arabic);
+
+        assertTrue(caption("maps/library-cards/index.html").contains("Areas compare only within a part: Port Ossory at 4 × the"
+                + " main map&#39;s area scale; Gannet Isles is at the main map&#39;s."), caption("maps/library-cards/index.html"));
+        assertTrue(caption("fr/maps/library-cards/index.html").contains("Port Ossory à 4 × l&#39;échelle de superficie"),
+                caption("fr/maps/library-cards/index.html"));
+        assertTrue(caption("ar/maps/library-cards/index.html").contains("Port Ossory بـ"), caption("ar/maps/library-cards/index.html"));
+        assertTrue(Files.readString(site.resolve("fr/maps/library-cards/figures.html")).contains("<td>Carte principale</td>"),
+                "the main part is named in the reader's language");
+    }
+
+    private String caption(String page) throws IOException {
+        String html = Files.readString(site.resolve(page));
+        int start = html.indexOf("<figcaption");
+        return html.substring(start, html.indexOf("</figcaption>", start));
+    }
+
     /** An SVG group by id, up to the next group with an id (its own text sits in groups without one). */
     private static String group(String svg, String id) {
         int start = svg.indexOf("<g id='" + id + "'>");

@@ -132,22 +132,66 @@ class EditionChangesTest {
         assertTrue(page.contains("<td class=\"num\">50</td><td class=\"num\">50.5</td>"), page);
     }
 
+    /**
+     * A part whose family stayed the same but whose parameters moved is said to keep its projection with other
+     * parameters (naming them), never "re-projected (A -> A)"; a part with other regions says how many.
+     */
     @Test
-    void aFramedPartAddedOrReprojectedIsReported() throws IOException {
+    void aFramedPartAddedOrGivenOtherParametersIsSaidInPlainWords() throws IOException {
         Path out = tmp.resolve("site");
         MapModel map = SiteFixtures.map("a", texts, 10, 0);
         List<String> keys = map.regions().stream().map(aequa.atlas.MapRegion::key).toList();
-        MapModel oneIsland = withParts(map, part("main", "Main map", keys.subList(1, keys.size()), 10),
-                part("part-1", "Isles", keys.subList(0, 1), 20));
+        MapModel oneIsland = withParts(map, part("main", "Main map", keys.subList(1, keys.size()), laea(10), 1),
+                part("part-1", "Isles", keys.subList(0, 1), laea(20), 1));
         publish(out, List.of(oneIsland));
-        MapModel twoIslands = withParts(map, part("main", "Main map", keys.subList(2, keys.size()), 10),
-                part("part-1", "Isles", keys.subList(0, 1), 25), part("part-2", "Reef", keys.subList(1, 2), 30));
+        MapModel twoIslands = withParts(map, part("main", "Main map", keys.subList(2, keys.size()), laea(10), 1),
+                part("part-1", "Isles", keys.subList(0, 1), laea(25), 1), part("part-2", "Reef", keys.subList(1, 2), laea(30), 1));
         JsonNode report = publish(out, List.of(twoIslands));
-        List<String> said = new java.util.ArrayList<>();
-        report.at("/changes/maps/0/parts").forEach(n -> said.add(n.asText()));
-        assertEquals(List.of("Part changed: Main map (its regions or area scale).",
-                "Part re-projected: Isles (Lambert azimuthal equal-area → Lambert azimuthal equal-area).", "Part added: Reef."), said);
-        assertTrue(Files.readString(out.resolve("changes.html")).contains("Part added: Reef."));
+        JsonNode parts = report.at("/changes/maps/0/parts");
+        assertEquals(3, parts.size(), parts.toString());
+        assertEquals("Main map", parts.at("/0/name").asText());
+        assertEquals(keys.size() - 1, parts.at("/0/regions/from").asInt());
+        assertEquals(keys.size() - 2, parts.at("/0/regions/to").asInt());
+        assertTrue(parts.at("/0/family").isMissingNode() && parts.at("/0/parameters").isMissingNode(), parts.toString());
+        assertEquals("lambert-azimuthal", parts.at("/1/family").asText());
+        assertEquals("centre-lon", parts.at("/1/parameters/0/key").asText());
+        assertEquals(20.0, parts.at("/1/parameters/0/from").asDouble());
+        assertEquals(25.0, parts.at("/1/parameters/0/to").asDouble());
+        assertEquals(1, parts.at("/1/parameters").size(), "only the centre's longitude moved");
+        assertEquals("added", parts.at("/2/change").asText());
+
+        String page = Files.readString(out.resolve("changes.html"));
+        assertTrue(page.contains("Part Main map: now " + (keys.size() - 2) + " regions (before: " + (keys.size() - 1) + ")."), page);
+        assertTrue(page.contains("Part Isles: same projection (Lambert azimuthal equal-area), other parameters: "
+                + "Longitude of natural origin 20° → 25°."), page);
+        assertTrue(page.contains("Part added: Reef."), page);
+        assertFalse(page.contains("equal-area → Lambert"), page);
+    }
+
+    /** A part drawn on another family, with another largest omega, says both, the families by their names. */
+    @Test
+    void aFramedPartOnAnotherFamilySaysWhichAndItsDistortion() throws IOException {
+        Path out = tmp.resolve("site");
+        MapModel map = SiteFixtures.map("a", texts, 10, 0);
+        List<String> keys = map.regions().stream().map(aequa.atlas.MapRegion::key).toList();
+        aequa.projection.EqualAreaProjection albers = aequa.projection.Projections.create(aequa.projection.ProjectionFamily.ALBERS_CONIC,
+                java.util.Map.of("centre-lon", 20.0, "centre-lat", 52.0, "standard-parallel-1", 50.0, "standard-parallel-2", 54.0));
+        publish(out, List.of(withParts(map, part("main", "Main map", keys.subList(1, keys.size()), laea(10), 1),
+                part("part-1", "Isles", keys.subList(0, 1), laea(20), 0.8))));
+        JsonNode report = publish(out, List.of(withParts(map, part("main", "Main map", keys.subList(1, keys.size()), laea(10), 1),
+                part("part-1", "Isles", keys.subList(0, 1), albers, 0.25))));
+        JsonNode isles = report.at("/changes/maps/0/parts/0");
+        assertEquals("Isles", isles.path("name").asText(), report.at("/changes").toString());
+        assertEquals("lambert-azimuthal", isles.at("/family/from").asText());
+        assertEquals("albers-conic", isles.at("/family/to").asText());
+        assertEquals(0.25, isles.at("/omegaMaxDeg/to").asDouble());
+        String page = Files.readString(out.resolve("changes.html"));
+        assertTrue(page.contains("Part Isles: now drawn on the Albers equal-area conic projection instead of the Lambert "
+                + "azimuthal equal-area projection and angular distortion now up to 0.25° (before: 0.8°)."), page);
+    }
+
+    private static aequa.projection.EqualAreaProjection laea(double centreLonDeg) {
+        return aequa.projection.Projections.lambertAzimuthal(centreLonDeg, 52);
     }
 
     private static MapModel withParts(MapModel map, aequa.atlas.MapPart... parts) {
@@ -155,9 +199,9 @@ class EditionChangesTest {
                 map.ramp(), map.areaAudit(), map.notices(), List.of(parts));
     }
 
-    private static aequa.atlas.MapPart part(String id, String name, List<String> keys, double centreLonDeg) {
-        var choice = new aequa.projection.ProjectionChoice(aequa.projection.Projections.lambertAzimuthal(centreLonDeg, 52),
-                1, 1, 0, 0, List.of(), SiteFixtures.AUTOMATIC_ROUND);
+    private static aequa.atlas.MapPart part(String id, String name, List<String> keys,
+                                            aequa.projection.EqualAreaProjection projection, double omegaMaxDeg) {
+        var choice = new aequa.projection.ProjectionChoice(projection, omegaMaxDeg, omegaMaxDeg / 2, 0, 0, List.of(), SiteFixtures.AUTOMATIC_ROUND);
         return new aequa.atlas.MapPart(id, name, keys, id.equals("main"), 1, choice,
                 new aequa.planar.AreaAudit(1e-9, "", 1e-4), 100, 0, new aequa.atlas.MapPart.Frame(0, 0, 1, 1), 0, 0, 0);
     }
