@@ -75,14 +75,6 @@ public final class NumberWriter {
         return write(plain.precision(Precision.fixedFraction(decimals)), value, decimals);
     }
 
-    /** {@code value} with at most {@code maxDecimals} decimals, trailing zeros dropped ("1.5", "2"). */
-    public String upTo(double value, int maxDecimals) {
-        if (!Double.isFinite(value)) {
-            return NOT_A_NUMBER;
-        }
-        return write(plain.precision(Precision.maxFraction(maxDecimals)), value, maxDecimals);
-    }
-
     /** A whole number, grouped as the language groups ("1,234"; Spanish "1234"). */
     public String integer(long value) {
         return write(plain.precision(Precision.integer()), value, 0);
@@ -177,11 +169,6 @@ public final class NumberWriter {
 
     private static boolean isAsciiDigit(int c) {
         return c >= '0' && c <= '9';
-    }
-
-    /** The CLDR locale whose conventions this writer follows. */
-    public String languageTag() {
-        return locale.toLanguageTag();
     }
 
     /**

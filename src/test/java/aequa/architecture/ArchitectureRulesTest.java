@@ -1,6 +1,7 @@
 package aequa.architecture;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -8,9 +9,14 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.stream.Stream;
 
+import org.junit.jupiter.api.Named;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * {@link ArchitectureRules} sees each kind of violation: a small source tree is checked clean, then one
@@ -58,59 +64,42 @@ class ArchitectureRulesTest {
         write("late", "Late", "import aequa.read.shapes.*;\nimport static aequa.base.Base.ORIGIN;\n\nfinal class Late {\n}\n");
     }
 
-    /** The one violation after planting, which must name {@code expected}. */
-    private void assertOnlyViolation(String expected) throws IOException {
-        List<String> found = violations();
-        assertEquals(1, found.size(), found.toString());
-        assertTrue(found.get(0).contains(expected), found.get(0));
-    }
-
     @Test
     void theCleanTreePasses() throws IOException {
         cleanTree();
         assertEquals(List.of(), violations());
     }
 
-    @Test
-    void anImportOfALaterStageFails() throws IOException {
-        cleanTree();
-        write("base", "Planted", "import aequa.late.Late;\n\nfinal class Planted {\n}\n");
-        assertOnlyViolation("'base' uses 'late'");
+    /** Each kind of violation: the package and source planted in the clean tree, and what the one report names. */
+    static Stream<Arguments> plantedViolations() {
+        return Stream.of(
+                planted("an import of a later stage", "base",
+                        "import aequa.late.Late;\n\nfinal class Planted {\n}\n", "'base' uses 'late'"),
+                planted("a fully qualified name into a sub-package", "read.tables",
+                        "final class Planted {\n    Object shape = new aequa.read.shapes . Shape();\n}\n",
+                        "'read.tables' uses 'read.shapes'"),
+                planted("sibling readers using each other", "read.shapes",
+                        "import aequa.read.tables.*;\n\nfinal class Planted {\n}\n", "'read.shapes' uses 'read.tables'"),
+                planted("a library outside its homes", "late",
+                        "final class Planted {\n    com.fasterxml.jackson.databind.JsonNode node;\n}\n",
+                        "com.fasterxml.jackson is used in 'late'"),
+                planted("JDBC outside its homes", "read.shapes",
+                        "import java.sql.DriverManager;\n\nfinal class Planted {\n}\n", "java.sql is used in 'read.shapes'"),
+                planted("a package without a row", "extra", "final class Planted {\n}\n", "package 'extra' has no row"));
     }
 
-    @Test
-    void aFullyQualifiedNameIntoASubPackageFails() throws IOException {
-        cleanTree();
-        write("read.tables", "Planted", "final class Planted {\n    Object shape = new aequa.read.shapes . Shape();\n}\n");
-        assertOnlyViolation("'read.tables' uses 'read.shapes'");
+    private static Arguments planted(String kind, String pkg, String source, String expected) {
+        return Arguments.of(Named.of(kind, pkg), source, expected);
     }
 
-    @Test
-    void siblingReadersMayNotUseEachOtherEitherWay() throws IOException {
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("plantedViolations")
+    void eachPlantedViolationIsTheOneReported(String pkg, String source, String expected) throws IOException {
         cleanTree();
-        write("read.shapes", "Planted", "import aequa.read.tables.*;\n\nfinal class Planted {\n}\n");
-        assertOnlyViolation("'read.shapes' uses 'read.tables'");
-    }
-
-    @Test
-    void aLibraryOutsideItsHomesFails() throws IOException {
-        cleanTree();
-        write("late", "Planted", "final class Planted {\n    com.fasterxml.jackson.databind.JsonNode node;\n}\n");
-        assertOnlyViolation("com.fasterxml.jackson is used in 'late'");
-    }
-
-    @Test
-    void jdbcOutsideItsHomesFails() throws IOException {
-        cleanTree();
-        write("read.shapes", "Planted", "import java.sql.DriverManager;\n\nfinal class Planted {\n}\n");
-        assertOnlyViolation("java.sql is used in 'read.shapes'");
-    }
-
-    @Test
-    void aPackageWithoutARowFails() throws IOException {
-        cleanTree();
-        write("extra", "Planted", "final class Planted {\n}\n");
-        assertOnlyViolation("package 'extra' has no row");
+        write(pkg, "Planted", source);
+        List<String> found = violations();
+        assertEquals(1, found.size(), found.toString());
+        assertTrue(found.get(0).contains(expected), found.get(0));
     }
 
     @Test
@@ -141,7 +130,7 @@ class ArchitectureRulesTest {
 
     @Test
     void aLostTableIsAnErrorNotAnEmptyRuleSet() {
-        org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+        assertThrows(IllegalArgumentException.class,
                 () -> ArchitectureRules.fromMarkdown("| package | may use |\n|---|---|\n| `a` | |\n"));
     }
 }

@@ -18,9 +18,6 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-
 import aequa.composite.PartPlan;
 import aequa.findings.Findings;
 import aequa.project.LoadedProject;
@@ -29,6 +26,7 @@ import aequa.project.RegionSourceSpec;
 import aequa.projection.Footprint;
 import aequa.projection.ProjectionParameter;
 import aequa.projection.ProjectionRequest;
+import aequa.testing.RealProject;
 
 /**
  * The monthly rebuild of a composite map takes the map's parts (the detached-part search and each part's
@@ -48,23 +46,15 @@ class CompositePlanCacheTest {
     static void publishOnceIntoACache(@TempDir Path tmp) throws IOException {
         project = tmp.resolve("project");
         cacheFolder = project.resolve(".aequa-cache");
-        Files.createDirectories(project.resolve("regions"));
-        Files.createDirectories(project.resolve("figures"));
-        Files.copy(Path.of("src/test/resources/geometry/us-states-2017.geojson"), project.resolve("regions/states.geojson"));
-        StringBuilder csv = new StringBuilder("code,value\n");
-        for (JsonNode feature : new ObjectMapper().readTree(project.resolve("regions/states.geojson").toFile()).path("features")) {
-            String id = feature.path("properties").path("id").asText();
-            csv.append(id).append(',').append(Integer.parseInt(id) % 13).append('\n');
-        }
-        Files.writeString(project.resolve("figures/states.csv"), csv);
-        Files.writeString(project.resolve("aequa.yaml"), String.join("\n",
+        RealProject.in(project).regions("states", "us-states-2017.geojson")
+                .figures("states", "id", "value", RealProject.codeModulo("id", 13))
+                .projectFile(
                 "regions:",
                 "  states: { file: regions/states.geojson, key: id, name: name, insets: auto }",
                 "figures:",
                 "  states: { file: figures/states.csv, key: code }",
                 "maps:",
-                "  - { id: states, regions: states, figures: states, indicator: value, measure: rate }",
-                ""));
+                "  - { id: states, regions: states, figures: states, indicator: value, measure: rate }");
         Findings findings = new Findings();
         loaded = ProjectLoader.load(project, findings).orElseThrow(() -> new AssertionError(findings.list()));
         firstLoad = load(Map.of());

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 
@@ -16,13 +15,11 @@ import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.index.strtree.STRtree;
 
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-
 import aequa.findings.Finding;
 import aequa.findings.Findings;
 import aequa.project.LoadedProject;
 import aequa.project.ProjectLoader;
+import aequa.testing.RealProject;
 
 /**
  * Context for a county map: region names from a pattern of properties and state outlines dissolved from the
@@ -32,7 +29,6 @@ import aequa.project.ProjectLoader;
  */
 class ContextLayersTest {
 
-    private static final ObjectMapper JSON = new ObjectMapper();
     private static final GeometryFactory GEOMETRY = new GeometryFactory();
 
     private static MapModel counties;
@@ -145,16 +141,8 @@ class ContextLayersTest {
     }
 
     private static void write(Path project, List<String> yaml) throws IOException {
-        Files.createDirectories(project.resolve("regions"));
-        Files.createDirectories(project.resolve("figures"));
-        Path geojson = project.resolve("regions/counties.geojson");
-        Files.copy(Path.of("src/test/resources/geometry/us-counties-2017.geojson"), geojson);
-        StringBuilder csv = new StringBuilder("code,code_number\n");
-        for (JsonNode feature : JSON.readTree(geojson.toFile()).path("features")) {
-            String id = feature.path("properties").path("id").asText();
-            csv.append(id).append(',').append(Integer.parseInt(id) % 97).append('\n');
-        }
-        Files.writeString(project.resolve("figures/counties.csv"), csv);
-        Files.writeString(project.resolve("aequa.yaml"), String.join("\n", yaml) + "\n");
+        RealProject.in(project).regions("counties", "us-counties-2017.geojson")
+                .figures("counties", "id", "code_number", RealProject.codeModulo("id", 97))
+                .projectFile(yaml.toArray(String[]::new));
     }
 }

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
@@ -16,9 +15,6 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.GeometryFactory;
-
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 
 import aequa.atlas.Atlas;
 import aequa.atlas.AtlasLoader;
@@ -34,6 +30,7 @@ import aequa.projection.EqualAreaProjection;
 import aequa.projection.Footprint;
 import aequa.projection.ProjectionFamily;
 import aequa.projection.Projections;
+import aequa.testing.RealProject;
 
 /**
  * Composite maps of the US Census Bureau's 2017 counties and states (src/test/resources/geometry/SOURCE.md),
@@ -42,7 +39,6 @@ import aequa.projection.Projections;
  */
 class CompositeMapsTest {
 
-    private static final ObjectMapper JSON = new ObjectMapper();
     private static final GeometryFactory GEOMETRY = new GeometryFactory();
 
     private static MapModel counties;
@@ -52,14 +48,10 @@ class CompositeMapsTest {
 
     @BeforeAll
     static void load(@TempDir Path project) throws IOException {
-        Files.createDirectories(project.resolve("regions"));
-        Files.createDirectories(project.resolve("figures"));
-        Path resources = Path.of("src/test/resources/geometry");
-        Files.copy(resources.resolve("us-counties-2017.geojson"), project.resolve("regions/counties.geojson"));
-        Files.copy(resources.resolve("us-states-2017.geojson"), project.resolve("regions/states.geojson"));
-        figures(project.resolve("regions/counties.geojson"), project.resolve("figures/counties.csv"));
-        figures(project.resolve("regions/states.geojson"), project.resolve("figures/states.csv"));
-        Files.writeString(project.resolve("aequa.yaml"), String.join("\n",
+        RealProject.in(project).regions("counties", "us-counties-2017.geojson").regions("states", "us-states-2017.geojson")
+                .figures("counties", "id", "code_number", RealProject.codeModulo("id", 97))
+                .figures("states", "id", "code_number", RealProject.codeModulo("id", 97))
+                .projectFile(
                 "regions:",
                 "  counties: { file: regions/counties.geojson, key: id, name: name }",
                 "  states: { file: regions/states.geojson, key: id, name: name }",
@@ -77,8 +69,7 @@ class CompositeMapsTest {
                 "    insets:",
                 "      - { name: Alaska, regions: [\"02\"], scale: 0.25, corner: bottom-left }",
                 "      - { name: Hawaii, box: [-161, 18, -154, 23] }",
-                "  - { id: counties-circles, regions: counties, figures: counties, indicator: code_number, measure: count, display: circles }",
-                ""));
+                "  - { id: counties-circles, regions: counties, figures: counties, indicator: code_number, measure: count, display: circles }");
         Findings findings = new Findings();
         LoadedProject loaded = ProjectLoader.load(project, findings).orElseThrow(() -> new AssertionError(findings.list()));
         Atlas atlas = AtlasLoader.load(loaded, LoadOptions.defaults(), findings);
@@ -325,14 +316,5 @@ class CompositeMapsTest {
         return ((lonDeg + 540) % 360) - 180;
     }
 
-
     /** A figure per region: its numeric code, real attribute data enough to classify and draw. */
-    private static void figures(Path geojson, Path csv) throws IOException {
-        StringBuilder out = new StringBuilder("code,code_number\n");
-        for (JsonNode feature : JSON.readTree(geojson.toFile()).path("features")) {
-            String id = feature.path("properties").path("id").asText();
-            out.append(id).append(',').append(Integer.parseInt(id) % 97).append('\n');
-        }
-        Files.writeString(csv, out);
-    }
 }

@@ -17,6 +17,7 @@ import aequa.findings.Finding;
 import aequa.findings.Findings;
 import aequa.project.LoadedProject;
 import aequa.project.ProjectLoader;
+import aequa.testing.RealProject;
 
 /**
  * Bad {@code insets} settings are findings with the project file's line and a hint, each fixture with the one
@@ -83,30 +84,17 @@ class InsetsSettingsTest {
     }
 
     private static Path project(Path dir, String insets) throws IOException {
-        Files.createDirectories(dir.resolve("regions"));
-        Path states = dir.resolve("regions/states.geojson");
-        if (!Files.exists(states)) {
-            Files.copy(RealRegions.GEOMETRY.resolve("us-states-2017.geojson"), states);
-            StringBuilder csv = new StringBuilder("code,n\n");
-            for (String code : List.of("01", "02", "04", "05", "06", "08", "09", "10", "11", "12", "13", "15", "16", "17",
-                    "18", "19", "20", "21", "22", "23", "24", "25", "26", "27", "28", "29", "30", "31", "32", "33", "34",
-                    "35", "36", "37", "38", "39", "40", "41", "42", "44", "45", "46", "47", "48", "49", "50", "51", "53",
-                    "54", "55", "56", "60", "66", "69", "72", "78")) {
-                csv.append(code).append(',').append(code.charAt(1)).append('\n');
-            }
-            Files.writeString(dir.resolve("states.csv"), csv);
-        }
-        Files.writeString(dir.resolve("aequa.yaml"), String.join("\n",
+        return RealProject.in(dir).regions("states", "us-states-2017.geojson")
+                .figures("states", "id", "n", properties -> properties.path("id").asText().substring(1, 2))
+                .projectFile(
                 "regions: { states: { file: regions/states.geojson, key: id, name: name } }",
-                "figures: { states: { file: states.csv, key: code } }",
+                "figures: { states: { file: figures/states.csv, key: code } }",
                 "maps:",
                 "  - id: states",
                 "    regions: states",
                 insets,
                 "    figures: states",
                 "    indicator: n",
-                "    measure: rate",
-                ""));
-        return dir;
+                "    measure: rate");
     }
 }

@@ -1,6 +1,5 @@
 package aequa.composite;
 
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -14,6 +13,7 @@ import aequa.inputs.regions.Region;
 import aequa.inputs.regions.RegionReaders;
 import aequa.project.RegionSourceSpec;
 import aequa.projection.SourceCrs;
+import aequa.testing.RealProject;
 
 /**
  * A real boundary file of src/test/resources/geometry (sources and licences in its SOURCE.md), read, repaired,
@@ -21,11 +21,9 @@ import aequa.projection.SourceCrs;
  */
 record RealRegions(List<Region> regions, Map<String, Double> areaKm2ByKey) {
 
-    static final Path GEOMETRY = Path.of("src/test/resources/geometry");
-
     static RealRegions read(String file, String keyProperty) {
         Findings findings = new Findings();
-        List<Region> read = RegionReaders.read(GEOMETRY, new RegionSourceSpec(file, keyProperty, "name", ""),
+        List<Region> read = RegionReaders.read(RealProject.GEOMETRY, new RegionSourceSpec(file, keyProperty, "name", ""),
                 SourceCrs::toLonLat, findings);
         List<Region> valid = RegionValidator.validate(read, file, findings);
         List<Region> densified = new ArrayList<>();

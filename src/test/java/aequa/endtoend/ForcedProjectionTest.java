@@ -17,6 +17,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
 import aequa.cli.Main;
+import aequa.testing.RealProject;
 
 /**
  * A user forces a projection that cannot draw every region whole: publish stops with a finding that names the
@@ -66,20 +67,11 @@ class ForcedProjectionTest {
 
     private static String publishWorld(Path project, Path out, String projection, double tolerance, int expectedCode,
                                        String... continents) throws IOException {
-        Files.createDirectories(project.resolve("regions"));
-        Files.createDirectories(project.resolve("figures"));
-        Path world = project.resolve("regions/world.geojson");
-        Files.copy(Path.of("src/test/resources/geometry/ne-admin0-110m.geojson"), world);
+        RealProject world = RealProject.in(project).regions("world", "ne-admin0-110m.geojson");
         if (continents.length > 0) {
-            keepContinents(world, continents);
+            keepContinents(project.resolve("regions/world.geojson"), continents);
         }
-        StringBuilder csv = new StringBuilder("code,pop_est\n");
-        for (JsonNode feature : JSON.readTree(world.toFile()).path("features")) {
-            JsonNode p = feature.path("properties");
-            csv.append(p.path("adm0_a3").asText()).append(',').append(p.path("pop_est").asText("")).append('\n');
-        }
-        Files.writeString(project.resolve("figures/world.csv"), csv);
-        Files.writeString(project.resolve("aequa.yaml"), String.join("\n",
+        world.figures("world", "adm0_a3", "pop_est", RealProject.property("pop_est")).projectFile(
                 "site: { title: \"Forced projections\" }",
                 "regions:",
                 "  world: { file: regions/world.geojson, key: adm0_a3, name: name }",
@@ -88,8 +80,7 @@ class ForcedProjectionTest {
                 "checks: { area-tolerance: " + tolerance + " }",
                 "maps:",
                 "  - { id: world, regions: world, figures: world, indicator: pop_est, measure: count, normalise: area,",
-                "      unit: \"people per km²\", projection: " + projection + " }",
-                ""));
+                "      unit: \"people per km²\", projection: " + projection + " }");
         StringWriter terminal = new StringWriter();
         int code = Main.run(new String[] {"publish", project.toString(), "--out", out.toString()},
                 new PrintWriter(terminal, true), new PrintWriter(terminal, true));

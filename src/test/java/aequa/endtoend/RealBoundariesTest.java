@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 
 import org.junit.jupiter.api.Test;
@@ -16,6 +15,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
 import aequa.cli.Main;
+import aequa.testing.RealProject;
 
 /**
  * Real open boundary files publish cleanly: a national file with thousands of regions (US counties, US Census
@@ -28,14 +28,12 @@ class RealBoundariesTest {
 
     @Test
     void aNationalAndAWorldFilePublishWithTrueAreas(@TempDir Path project, @TempDir Path out) throws IOException {
-        Files.createDirectories(project.resolve("regions"));
-        Files.createDirectories(project.resolve("figures"));
-        Path resources = Path.of("src/test/resources/geometry");
-        Files.copy(resources.resolve("ne-admin0-110m.geojson"), project.resolve("regions/world.geojson"));
-        Files.copy(resources.resolve("us-counties-2017.geojson"), project.resolve("regions/counties.geojson"));
-        writeWorldFigures(project.resolve("regions/world.geojson"), project.resolve("figures/world.csv"));
-        writeCountyFigures(project.resolve("regions/counties.geojson"), project.resolve("figures/counties.csv"));
-        Files.writeString(project.resolve("aequa.yaml"), String.join("\n",
+        // the figures: Natural Earth's own population estimate (pop_est) per country; the county's state FIPS
+        // code as its "figure" (real attribute data, enough to classify and draw)
+        RealProject.in(project).regions("world", "ne-admin0-110m.geojson").regions("counties", "us-counties-2017.geojson")
+                .figures("world", "adm0_a3", "pop_est", RealProject.property("pop_est"))
+                .figures("counties", "id", "state_code", RealProject.property("state_fips"))
+                .projectFile(
                 "site: { title: \"Real boundaries\" }",
                 "regions:",
                 "  world: { file: regions/world.geojson, key: adm0_a3, name: name }",
@@ -46,8 +44,7 @@ class RealBoundariesTest {
                 "maps:",
                 "  - { id: world-density, regions: world, figures: world, indicator: pop_est, measure: count,",
                 "      normalise: area, unit: \"people per km²\" }",
-                "  - { id: county-test, regions: counties, figures: counties, indicator: state_code, measure: rate }",
-                ""));
+                "  - { id: county-test, regions: counties, figures: counties, indicator: state_code, measure: rate }");
         StringWriter terminal = new StringWriter();
         int code = Main.run(new String[] {"publish", project.toString(), "--out", out.toString()},
                 new PrintWriter(terminal, true), new PrintWriter(terminal, true));
@@ -64,25 +61,5 @@ class RealBoundariesTest {
         assertEquals(177, world.path("regions").size(), "every Natural Earth country kept");
         // one county of the file (Falls Church, 51610) collapses to no area and is reported, not drawn
         assertEquals(3230, report.path("maps").get(1).path("regions").size());
-    }
-
-    /** Natural Earth's own population estimate (pop_est) per country, as a CSV. */
-    private static void writeWorldFigures(Path geojson, Path csv) throws IOException {
-        StringBuilder out = new StringBuilder("code,pop_est\n");
-        for (JsonNode feature : JSON.readTree(geojson.toFile()).path("features")) {
-            JsonNode p = feature.path("properties");
-            out.append(p.path("adm0_a3").asText()).append(',').append(p.path("pop_est").asText("")).append('\n');
-        }
-        Files.writeString(csv, out);
-    }
-
-    /** The county's state FIPS code as its "figure": real attribute data, enough to classify and draw. */
-    private static void writeCountyFigures(Path geojson, Path csv) throws IOException {
-        StringBuilder out = new StringBuilder("code,state_code\n");
-        for (JsonNode feature : JSON.readTree(geojson.toFile()).path("features")) {
-            JsonNode p = feature.path("properties");
-            out.append(p.path("id").asText()).append(',').append(p.path("state_fips").asText()).append('\n');
-        }
-        Files.writeString(csv, out);
     }
 }

@@ -164,11 +164,10 @@ class BrowserTest {
     void aMapPageFitsAPhoneAndPrintsOnOneSheet() throws IOException {
         JsonNode first = report.at("/maps/0");
         try {
-            driver.manage().window().setSize(new Dimension(390, 844));
+            PageMeasures page = new PageMeasures(driver);
+            page.resize(390, 844);
             open(first.at("/files/page").asText());
-            long overflow = (Long) ((JavascriptExecutor) driver).executeScript(
-                    "return document.documentElement.scrollWidth - document.documentElement.clientWidth;");
-            assertTrue(overflow <= 0, "page wider than a phone by " + overflow + " px");
+            page.assertNoHorizontalScroll("the map page on a phone");
             screenshot("phone_" + first.get("id").asText() + ".png");
             open(first.at("/files/figures").asText());
             screenshot("phone_figures_" + first.get("id").asText() + ".png");

@@ -1,5 +1,6 @@
 package aequa.publish;
 
+import static aequa.publish.PageMeasures.number;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
@@ -8,9 +9,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayInputStream;
 import java.io.IOException;
-import java.io.OutputStream;
-import java.net.InetAddress;
-import java.net.InetSocketAddress;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -25,7 +23,6 @@ import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
-import org.openqa.selenium.Dimension;
 import org.openqa.selenium.JavascriptExecutor;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.WebElement;
@@ -34,7 +31,6 @@ import org.openqa.selenium.support.ui.WebDriverWait;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.sun.net.httpserver.HttpServer;
 
 import aequa.endtoend.DemoSite;
 
@@ -53,14 +49,14 @@ import aequa.endtoend.DemoSite;
 class EmbedBrowserTest {
 
     private static final int[] WIDTHS_PX = {320, 768, 1280};
-    /** WCAG 2.2 sets no minimum type size; 12 CSS px is common practice as the smallest readable body type. */
-    private static final double MIN_FONT_PX = 12;
+    /** Tall enough that a whole frame fits in the viewport, where element screenshots are taken. */
     private static final int WINDOW_HEIGHT_PX = 2000;
     private static final Duration SETTLE = Duration.ofSeconds(10);
 
     private static HeadlessChromium chromium;
     private static ChromeDriver driver;
-    private static HttpServer server;
+    private static PageMeasures page;
+    private static LoopbackFileServer server;
     private static Path articles;
     private static JsonNode report;
     private static String siteAddress;
@@ -70,22 +66,19 @@ class EmbedBrowserTest {
     static void start() throws IOException {
         chromium = HeadlessChromium.start("EmbedBrowserTest");
         driver = chromium.driver();
+        page = new PageMeasures(driver);
         Path site = DemoSite.folder();
         report = new ObjectMapper().readTree(site.resolve("report.json").toFile());
         articles = Files.createTempDirectory("aequa-articles-");
-        server = HttpServer.create(new InetSocketAddress(InetAddress.getLoopbackAddress(), 0), 0);
-        serve("/site/", site);
-        serve("/article/", articles);
-        server.start();
-        int port = server.getAddress().getPort();
-        siteAddress = "http://127.0.0.1:" + port + "/site/";
-        articleAddress = "http://localhost:" + port + "/article/";
+        server = LoopbackFileServer.start(Map.of("/site/", site, "/article/", articles));
+        siteAddress = server.address("127.0.0.1", "/site/");
+        articleAddress = server.address("localhost", "/article/");
     }
 
     @AfterAll
     static void stop() throws IOException {
         if (server != null) {
-            server.stop(0);
+            server.close();
         }
         if (chromium != null) {
             chromium.close();
@@ -114,7 +107,7 @@ class EmbedBrowserTest {
                 }
                 List<WebElement> frames = driver.findElements(By.cssSelector("iframe[data-aequa-embed]"));
                 assertEquals(maps.size(), frames.size());
-                assertNoHorizontalScroll("article with frames at " + width);
+                page.assertNoHorizontalScroll("article with frames at " + width);
                 for (int i = 0; i < frames.size(); i++) {
                     WebElement frame = frames.get(i);
                     long heightPx = waitUntilFitted(frame, width);
@@ -123,10 +116,8 @@ class EmbedBrowserTest {
                     }
                     driver.switchTo().frame(frame);
                     try {
-                        assertNoHorizontalScroll("embed page at " + width);
-                        assertReadableInsideWidth(".key-list", width);
-                        assertReadableInsideWidth("figcaption", width);
-                        assertReadableInsideWidth(".embed-cautions", width);
+                        page.assertNoHorizontalScroll("embed page at " + width);
+                        page.assertReadableInsideWidth(width, ".key-list", "figcaption", ".embed-cautions");
                     } finally {
                         driver.switchTo().defaultContent();
                     }
@@ -163,7 +154,7 @@ class EmbedBrowserTest {
             }
         });
         assertEquals(Double.parseDouble(frame.getDomAttribute("height")), number(rect(frame).get("height")), 0.5);
-        assertNoHorizontalScroll("article with a frame and no host script");
+        page.assertNoHorizontalScroll("article with a frame and no host script");
     }
 
     @Test
@@ -178,26 +169,25 @@ class EmbedBrowserTest {
         for (int width : WIDTHS_PX) {
             resize(width);
             driver.get(articleAddress + "fragments.html");
-            assertNoHorizontalScroll("article with fragments at " + width);
+            page.assertNoHorizontalScroll("article with fragments at " + width);
             List<WebElement> svgs = driver.findElements(By.cssSelector("figure > svg[role='img']"));
             assertEquals(maps.size(), svgs.size());
             for (WebElement svg : svgs) {
                 Map<String, Object> box = rect(svg);
                 double widthPx = number(box.get("width"));
-                assertTrue(widthPx > 0 && number(box.get("right")) <= clientWidth() + 0.5, "SVG inside the column: " + box);
+                assertTrue(widthPx > 0 && number(box.get("right")) <= page.clientWidth() + 0.5, "SVG inside the column: " + box);
                 String[] viewBox = svg.getDomAttribute("viewBox").split(" ");
                 double expected = widthPx * Double.parseDouble(viewBox[3]) / Double.parseDouble(viewBox[2]);
                 assertEquals(expected, number(box.get("height")), 1.0, "the SVG keeps its proportions at " + width);
             }
-            assertReadableInsideWidth("figure > ul", width);
-            assertReadableInsideWidth("figure > figcaption", width);
+            page.assertReadableInsideWidth(width, "figure > ul", "figure > figcaption");
             List<WebElement> keys = driver.findElements(By.cssSelector("figure > ul"));
             for (int i = 0; i < keys.size(); i++) {
                 ((JavascriptExecutor) driver).executeScript("arguments[0].scrollIntoView({block: 'center'});", keys.get(i));
                 Path shot = chromium.screenshot("embed_fragment_" + maps.get(i).get("id").asText() + "_" + width + ".png");
                 BufferedImage image = ImageIO.read(shot.toFile());
-                double scale = devicePixelRatio();
-                long innerWidth = Math.round(number(((JavascriptExecutor) driver).executeScript("return window.innerWidth;")));
+                double scale = page.devicePixelRatio();
+                long innerWidth = Math.round(page.innerWidth());
                 assertEquals(Math.round(innerWidth * scale), image.getWidth(), 1, "screenshot is the viewport's width");
                 assertSwatchesShow(keys.get(i).findElements(By.cssSelector("li > span:first-child")), image, 0, 0, scale);
             }
@@ -243,9 +233,7 @@ class EmbedBrowserTest {
         driver.get(siteAddress + map.at("/files/embed").asText());
         @SuppressWarnings("unchecked")
         List<String> strokes = (List<String>) ((JavascriptExecutor) driver).executeScript(
-                "const r = document.querySelector(\"g[data-class='no-data']\");"
-                        + "const groups = r.querySelectorAll(':scope > g');"
-                        + "const fill = groups[0].querySelector('path'), hatch = groups[1].querySelector('path');"
+                noDataRegionParts("g[data-class='no-data']")
                         + "const borders = r.closest('[stroke]').getAttribute('stroke');"
                         + "const probe = document.createElementNS('http://www.w3.org/2000/svg', 'g');"
                         + "probe.setAttribute('stroke', borders); r.appendChild(probe);"
@@ -260,15 +248,23 @@ class EmbedBrowserTest {
         driver.get(siteAddress + map.at("/files/page").asText());
         @SuppressWarnings("unchecked")
         List<String> lit = (List<String>) ((JavascriptExecutor) driver).executeScript(
-                "const r = document.querySelector(\".map-frame g[data-class='no-data']\");"
-                        + "const groups = r.querySelectorAll(':scope > g');"
-                        + "const fill = groups[0].querySelector('path'), hatch = groups[1].querySelector('path');"
+                noDataRegionParts(".map-frame g[data-class='no-data']")
                         + "const before = getComputedStyle(fill).stroke; r.classList.add('is-lit');"
                         + "const ink = getComputedStyle(document.body).color;"
                         + "return [before, getComputedStyle(fill).stroke, ink, getComputedStyle(hatch).stroke, groups[1].style.stroke];");
         assertEquals(lit.get(2), lit.get(1), "a lit region is outlined in the ink colour");
         assertNotEquals(lit.get(0), lit.get(1), "lighting changes the outline");
         assertEquals(lit.get(4), lit.get(3), "the hatch lines of a lit region keep their colour");
+    }
+
+    /**
+     * Script that finds the first no-data region matching {@code selector} ({@code r}), its two groups
+     * ({@code groups}: fill, then hatch lines) and the first path of each ({@code fill}, {@code hatch}).
+     */
+    private static String noDataRegionParts(String selector) {
+        return "const r = document.querySelector(\"" + selector + "\");"
+                + "const groups = r.querySelectorAll(':scope > g');"
+                + "const fill = groups[0].querySelector('path'), hatch = groups[1].querySelector('path');";
     }
 
     private static String pressCopy(WebElement way) {
@@ -312,7 +308,7 @@ class EmbedBrowserTest {
         Files.write(HeadlessChromium.SCREENSHOTS.resolve(name), png);
         BufferedImage image = ImageIO.read(new ByteArrayInputStream(png));
         Map<String, Object> box = rect(frame);
-        double scale = devicePixelRatio();
+        double scale = page.devicePixelRatio();
         assertEquals(Math.round(number(box.get("width")) * scale), image.getWidth(), 1, name + ": width of the frame");
         assertEquals(Math.round(number(box.get("height")) * scale), image.getHeight(), 1, name + ": height of the frame");
         driver.switchTo().frame(frame);
@@ -345,51 +341,12 @@ class EmbedBrowserTest {
         }
     }
 
-    /** Every element matching {@code selector} is shown, inside the viewport's width and set at 12 px or more. */
-    private static void assertReadableInsideWidth(String selector, int width) {
-        List<WebElement> elements = driver.findElements(By.cssSelector(selector));
-        assertFalse(elements.isEmpty(), selector + " at " + width);
-        double client = clientWidth();
-        for (WebElement element : elements) {
-            assertTrue(element.isDisplayed(), selector + " shown at " + width);
-            Map<String, Object> box = rect(element);
-            assertTrue(number(box.get("left")) >= -0.5 && number(box.get("right")) <= client + 0.5 && number(box.get("height")) > 0,
-                    selector + " inside the width " + client + " at " + width + ": " + box);
-            double fontPx = Double.parseDouble(element.getCssValue("font-size").replace("px", ""));
-            assertTrue(fontPx >= MIN_FONT_PX, selector + " set at " + fontPx + " px at " + width);
-        }
-    }
-
-    private static void assertNoHorizontalScroll(String where) {
-        long overflow = Math.round(number(((JavascriptExecutor) driver).executeScript(
-                "return document.documentElement.scrollWidth - document.documentElement.clientWidth;")));
-        assertTrue(overflow <= 0, where + ": wider than the window by " + overflow + " px");
-    }
-
-    @SuppressWarnings("unchecked")
-    private static Map<String, Object> rect(WebElement element) {
-        return (Map<String, Object>) ((JavascriptExecutor) driver).executeScript(
-                "const b = arguments[0].getBoundingClientRect();"
-                        + "return {left: b.left, right: b.right, top: b.top, width: b.width, height: b.height};", element);
-    }
-
-    private static double clientWidth() {
-        return number(((JavascriptExecutor) driver).executeScript("return document.documentElement.clientWidth;"));
-    }
-
-    private static double devicePixelRatio() {
-        return number(((JavascriptExecutor) driver).executeScript("return window.devicePixelRatio;"));
-    }
-
     private static void resize(int widthPx) {
-        // tall enough that a whole frame fits in the viewport, where element screenshots are taken
-        driver.manage().window().setSize(new Dimension(widthPx, WINDOW_HEIGHT_PX));
-        long inner = Math.round(number(((JavascriptExecutor) driver).executeScript("return window.innerWidth;")));
-        assertEquals(widthPx, inner, "the viewport is the window's width");
+        page.resize(widthPx, WINDOW_HEIGHT_PX);
     }
 
-    private static double number(Object value) {
-        return ((Number) value).doubleValue();
+    private static Map<String, Object> rect(WebElement element) {
+        return page.rect(element);
     }
 
     private static int[] rgb(String css) {
@@ -428,23 +385,5 @@ class EmbedBrowserTest {
                 + "<style>body { margin: 0 auto; max-width: 42rem; padding: 0 16px; font: 18px/1.5 serif; }</style>\n"
                 + "</head>\n<body>\n<h1>Test article</h1>\n" + body + "</body>\n</html>\n";
         Files.writeString(articles.resolve(name), page, StandardCharsets.UTF_8);
-    }
-
-    /** Serves the files under {@code root} at {@code prefix}; nothing outside it. */
-    private static void serve(String prefix, Path root) {
-        server.createContext(prefix, exchange -> {
-            Path file = root.resolve(exchange.getRequestURI().getPath().substring(prefix.length())).normalize();
-            boolean ok = file.startsWith(root) && Files.isRegularFile(file);
-            byte[] bytes = ok ? Files.readAllBytes(file) : new byte[0];
-            String name = file.getFileName() == null ? "" : file.getFileName().toString();
-            String type = name.endsWith(".html") ? "text/html; charset=utf-8" : name.endsWith(".js") ? "text/javascript"
-                    : name.endsWith(".css") ? "text/css" : name.endsWith(".svg") ? "image/svg+xml"
-                    : name.endsWith(".png") ? "image/png" : "application/octet-stream";
-            exchange.getResponseHeaders().set("Content-Type", type);
-            exchange.sendResponseHeaders(ok ? 200 : 404, ok ? bytes.length : -1);
-            try (OutputStream out = exchange.getResponseBody()) {
-                out.write(bytes);
-            }
-        });
     }
 }
