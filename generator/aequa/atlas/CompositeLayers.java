@@ -40,10 +40,11 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
 
     /**
      * The parts' layers, the framed parts placed with room for their labels in every language of {@code languages}
-     * (the site's: every edition gets the same frames).
+     * (the site's: every edition gets the same frames) and name bands at least {@code frameNameBandShare} of the
+     * map's drawn width ({@link LoadOptions#frameNameBandShare()}).
      */
     static CompositeLayers of(RegionLayer layer, List<PartPlan> plans, PlanarLayers planarLayers,
-                              List<aequa.wording.Wording> languages) {
+                              List<aequa.wording.Wording> languages, double frameNameBandShare) {
         PartPlan mainPlan = plans.get(0);
         double mainWidthM = PlanarLayer.roughWidthM(mainPlan.footprint());
         List<PlanarLayer> planar = new ArrayList<>();
@@ -71,7 +72,8 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
             insets.add(new PartLayout.Inset(extent(planar.get(i).simplifiedM().values()), nameWidthM, twoLineWidthM,
                     plan.corner(), plan.areaScale() != 1));
         }
-        List<PartLayout.Placement> placements = PartLayout.place(List.copyOf(planar.get(0).simplifiedM().values()), insets);
+        List<PartLayout.Placement> placements = PartLayout.place(List.copyOf(planar.get(0).simplifiedM().values()), insets,
+                frameNameBandShare);
 
         Map<String, Geometry> geometry = new LinkedHashMap<>();
         Map<String, Double> ratios = new HashMap<>();

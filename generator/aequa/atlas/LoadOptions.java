@@ -16,9 +16,12 @@ import aequa.projection.ProjectionRequest;
  *                           map id, so a monthly update does not shift a map unless the gain is real
  * @param cacheFolder        where the geometry stage's results are kept between runs, or empty for none
  * @param cacheUse           whether results are only read from that folder or also stored there
+ * @param frameNameBandShare the least height of a composite map's frame-name band as a share of the map's drawn
+ *                           width, so that names fit at the smallest type of the narrowest drawing (the print);
+ *                           0 keeps the layout's own proportions
  */
 public record LoadOptions(Rgb pageBackground, Map<String, ProjectionRequest.Previous> previousProjections,
-                          Optional<Path> cacheFolder, CacheUse cacheUse) {
+                          Optional<Path> cacheFolder, CacheUse cacheUse, double frameNameBandShare) {
 
     /** How the load step uses the geometry cache. */
     public enum CacheUse {
@@ -32,11 +35,14 @@ public record LoadOptions(Rgb pageBackground, Map<String, ProjectionRequest.Prev
         previousProjections = Map.copyOf(previousProjections);
         Objects.requireNonNull(cacheFolder, "cacheFolder");
         Objects.requireNonNull(cacheUse, "cacheUse");
+        if (!(frameNameBandShare >= 0 && frameNameBandShare < 1)) {
+            throw new IllegalArgumentException("frame name band share must be in [0, 1): " + frameNameBandShare);
+        }
     }
 
     /** No geometry cache. */
     public LoadOptions(Rgb pageBackground, Map<String, ProjectionRequest.Previous> previousProjections) {
-        this(pageBackground, previousProjections, Optional.empty(), CacheUse.READ);
+        this(pageBackground, previousProjections, Optional.empty(), CacheUse.READ, 0);
     }
 
     public static LoadOptions defaults() {
@@ -45,7 +51,12 @@ public record LoadOptions(Rgb pageBackground, Map<String, ProjectionRequest.Prev
 
     /** The same options, with the geometry cache in {@code folder}. */
     public LoadOptions withCache(Path folder, CacheUse use) {
-        return new LoadOptions(pageBackground, previousProjections, Optional.of(folder), use);
+        return new LoadOptions(pageBackground, previousProjections, Optional.of(folder), use, frameNameBandShare);
+    }
+
+    /** The same options, with frame-name bands of at least {@code share} of the map's drawn width. */
+    public LoadOptions withFrameNameBandShare(double share) {
+        return new LoadOptions(pageBackground, previousProjections, cacheFolder, cacheUse, share);
     }
 
     GeometryCache geometryCache() {

@@ -86,7 +86,8 @@ final class MapAssembler {
                     key -> cache.planar(layer, choice.projection(), project.file().checks().areaTolerance(), 1, 0,
                             () -> PlanarLayer.of(layer, choice.projection(), footprint, project.file().checks().areaTolerance())));
         } else {
-            CompositeLayers composite = CompositeLayers.of(layer, plans.get(), this::partLayer, siteLanguages());
+            CompositeLayers composite = CompositeLayers.of(layer, plans.get(), this::partLayer, siteLanguages(),
+                    options.frameNameBandShare());
             planar = new PlanarLayer(composite.simplifiedM(), composite.mapAreaRatio(), composite.audit(), composite.dropped());
             parts = composite.parts();
         }

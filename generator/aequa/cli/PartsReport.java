@@ -9,6 +9,9 @@ import java.util.Map;
 import aequa.atlas.MapPart;
 import aequa.atlas.PartPlacement;
 import aequa.composite.CompositePlanner;
+import aequa.drawing.PrintPreset;
+import aequa.drawing.PrintSize;
+import aequa.drawing.Themes;
 import aequa.composite.PartPlan;
 import aequa.ellipsoid.LonLatArea;
 import aequa.ellipsoid.LonLatDensifier;
@@ -16,6 +19,7 @@ import aequa.findings.Findings;
 import aequa.inputs.regions.Region;
 import aequa.project.ChecksSpec;
 import aequa.project.InsetsSpec;
+import aequa.project.SiteSpec;
 import aequa.projection.ProjectionRequest;
 
 /**
@@ -32,7 +36,10 @@ final class PartsReport {
     record Parts(List<PartPlan> plans, List<MapPart> placed) {
     }
 
-    /** The automatic parts of {@code regions} (one part when nothing lies apart), placed as publish places them. */
+    /**
+     * The automatic parts of {@code regions} (one part when nothing lies apart), placed as publish places them for a
+     * project with the default print settings.
+     */
     static Parts plan(String file, List<Region> regions, Findings findings) {
         Map<String, Double> areas = new LinkedHashMap<>();
         List<Region> densified = new ArrayList<>(regions.size());
@@ -45,8 +52,15 @@ final class PartsReport {
         List<PartPlan> plans = CompositePlanner.plan(regions, areas, InsetsSpec.AUTO, ProjectionRequest.automatic(),
                 new CompositePlanner.SettingPlace(pointer -> "", "/insets"), findings);
         List<MapPart> placed = plans.size() <= 1 ? List.of()
-                : PartPlacement.place(file, densified, areas, plans, ChecksSpec.DEFAULT_AREA_TOLERANCE);
+                : PartPlacement.place(file, densified, areas, plans, ChecksSpec.DEFAULT_AREA_TOLERANCE, defaultFrameNameBandShare());
         return new Parts(plans, placed);
+    }
+
+    /** The frames' least name band as a project with the default print settings (width and print theme) lays them out. */
+    private static double defaultFrameNameBandShare() {
+        SiteSpec site = new SiteSpec(null, null, null, null, null);
+        PrintSize print = PrintSize.of(PrintPreset.fromConfigName(site.printWidth()).orElseThrow());
+        return print.frameNameBandShare(Themes.bundled(site.printTheme()));
     }
 
     /**

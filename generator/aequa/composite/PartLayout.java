@@ -24,7 +24,9 @@ import org.locationtech.jts.index.strtree.STRtree;
  * most {@value #MAX_ASPECT} times as tall, the drawing's own limit); a preferred corner, when given, limits the
  * candidates to that quarter of the main part when any there is allowed. The winner is then slid towards the
  * main part's centre as far as it stays allowed, which tucks frames into empty corners. Every step is
- * arithmetic on fixed candidate lists, so the same parts always get the same places.
+ * arithmetic on fixed candidate lists, so the same parts always get the same places. A caller that knows how
+ * small the map will be printed asks for a least name band, as a share of the map's drawn width; the bands,
+ * names and area-scale bands then grow together and the layout is made again until the share holds.
  */
 public final class PartLayout {
 
@@ -43,6 +45,9 @@ public final class PartLayout {
     private static final int SCALE_LABEL_CHARS = 13;
     /** The drawing's tallest map block relative to its width (drawing's Layout.MAX_MAP_ASPECT). */
     static final double MAX_ASPECT = 1.25;
+    /** Layouts made again at most to give the name bands their least share of the drawn width, and the margin added each time. */
+    static final int BAND_ROUNDS = 6;
+    private static final double BAND_OVERSHOOT = 1.05;
     /** Trials of the slide towards the centre: halving steps down to 1/2^12 of the way. */
     private static final int SLIDE_STEPS = 12;
 
@@ -88,8 +93,19 @@ public final class PartLayout {
         return name.length() * NAME_CHAR_SHARE * NAME_BAND_SHARE * Math.max(mainM.getWidth(), mainM.getHeight());
     }
 
-    /** Places {@code insets} (in order: pass the largest first) around the main part's regions. */
+    /** Places {@code insets} (in order: pass the largest first) around the main part's regions, in the layout's own proportions. */
     public static List<Placement> place(List<Geometry> mainRegionsM, List<Inset> insets) {
+        return place(mainRegionsM, insets, 0);
+    }
+
+    /**
+     * Places {@code insets} (in order: pass the largest first) around the main part's regions, with name bands at
+     * least {@code minBandShare} of the map's drawn width high: the map is drawn as wide as its block, or narrower
+     * when it is taller than {@value #MAX_ASPECT} of its width, so a band of that share holds a name at the
+     * smallest type the print allows however the layout turns out. Bands, names and area-scale bands grow
+     * together; the layout is made again until the share holds (at most {@value #BAND_ROUNDS} times).
+     */
+    public static List<Placement> place(List<Geometry> mainRegionsM, List<Inset> insets, double minBandShare) {
         Envelope main = new Envelope();
         STRtree index = new STRtree();
         for (Geometry g : mainRegionsM) {
@@ -98,20 +114,39 @@ public final class PartLayout {
                 index.insert(g.getEnvelopeInternal(), g);
             }
         }
+        double ownBand = NAME_BAND_SHARE * Math.max(main.getWidth(), main.getHeight());
+        double band = ownBand;
+        List<Placement> placements = place(main, index, insets, 1);
+        for (int round = 0; round < BAND_ROUNDS && minBandShare > 0; round++) {
+            Envelope whole = new Envelope(main);
+            placements.forEach(p -> whole.expandToInclude(p.frameM()));
+            double neededM = minBandShare * Math.max(whole.getWidth(), whole.getHeight() / MAX_ASPECT);
+            if (neededM <= band) {
+                break;
+            }
+            // a little more than needed: the frames grow with their bands, and so does the map
+            band = neededM * BAND_OVERSHOOT;
+            placements = place(main, index, insets, band / ownBand);
+        }
+        return placements;
+    }
+
+    /** The layout with name bands, names and area-scale bands {@code growth} times their own proportions. */
+    private static List<Placement> place(Envelope main, STRtree index, List<Inset> insets, double growth) {
         double side = Math.max(main.getWidth(), main.getHeight());
         double margin = MARGIN_SHARE * side;
         double gap = GAP_SHARE * side;
-        double band = NAME_BAND_SHARE * side;
+        double band = NAME_BAND_SHARE * side * growth;
         List<Envelope> frames = new ArrayList<>();
         Envelope whole = new Envelope(main);
         List<Placement> placements = new ArrayList<>();
         for (Inset inset : insets) {
             Envelope c = inset.contentM();
             double contentW = c.getWidth() + 2 * margin;
-            boolean twoLines = inset.nameWidthM() + 2 * margin > Math.max(contentW, NAME_WRAP_SHARE * side);
-            double nameW = (twoLines ? inset.twoLineWidthM() : inset.nameWidthM()) + 2 * margin;
+            boolean twoLines = growth * inset.nameWidthM() + 2 * margin > Math.max(contentW, NAME_WRAP_SHARE * side);
+            double nameW = growth * (twoLines ? inset.twoLineWidthM() : inset.nameWidthM()) + 2 * margin;
             double nameBand = twoLines ? TWO_LINE_BAND * band : band;
-            double scaleBand = inset.ownScale() ? SCALE_BAND_SHARE * side : 0;
+            double scaleBand = inset.ownScale() ? SCALE_BAND_SHARE * side * growth : 0;
             double scaleW = inset.ownScale() ? scaleBand + SCALE_LABEL_CHARS * NAME_CHAR_SHARE * band + 2 * margin : 0;
             double w = Math.max(contentW, Math.max(nameW, scaleW));
             double h = c.getHeight() + 2 * margin + nameBand + scaleBand;

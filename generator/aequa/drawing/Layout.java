@@ -53,11 +53,15 @@ record Layout(double widthU, double heightU, double marginU, List<String> titleL
     static final double MAX_MULTIPLES_ASPECT = 0.6;
     /** Target side of the area-scale square, in ems of legend type (chosen by eye). */
     static final double SCALE_SQUARE_EM = 2.6;
+    /** The page's margin on every side, points (chosen by eye). */
+    static final double MARGIN_PT = 6;
+    /** Points per millimetre: 72 points to the inch of 25.4 mm (PostScript point, the unit of PDF). */
+    static final double PT_PER_MM = 72 / 25.4;
 
     static Layout compute(MapModel model, Theme theme, Typesetter type, DrawOptions options, Medium medium,
                           double widthU, double fixedHeightU, Envelope extentM, boolean circles) {
         double upt = type.unitsPerPt();
-        double margin = 6 * upt;
+        double margin = MARGIN_PT * upt;
         double gap = 6 * upt;
         double inner = widthU - 2 * margin;
         Theme.TypeSizes sizes = theme.typePt();

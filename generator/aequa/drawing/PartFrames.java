@@ -27,9 +27,23 @@ final class PartFrames {
     /** Largest share of the area-scale band a part's own square's side takes (chosen by eye). */
     private static final double OWN_SQUARE_SHARE = 0.7;
 
+    /** Room kept around the smallest type in a name band: a tenth more than the capitals need (by eye). */
+    private static final double LEAST_BAND_ROOM = 1.1;
+
     private static final GeometryFactory GEOMETRY = new GeometryFactory();
 
     private PartFrames() {
+    }
+
+    /**
+     * The least height of a one-line name band, points, at which {@link #paint} draws the name at the theme's
+     * smallest type or larger: its capitals fill {@value #NAME_CAP_SHARE} of the band. A two-line band, 1.7 of
+     * these, then holds two lines at the smallest type too (two line heights of 1.25 em are 2.5 em, and this band
+     * is about 1.8 em).
+     */
+    static double leastNameBandPt(Theme theme) {
+        Typesetter type = new Typesetter(1, Typesetter.installedFamily(theme.fonts().family()));
+        return LEAST_BAND_ROOM * type.capHeight(theme.typePt().minimum()) / NAME_CAP_SHARE;
     }
 
     /**

@@ -102,7 +102,8 @@ public final class CheckStep {
     public static Atlas load(LoadedProject project, DrawingSettings settings, Path outDir, LoadOptions.CacheUse cacheUse,
                              Findings findings) {
         LoadOptions options = new LoadOptions(settings.theme().colours().background(), PreviousProjections.read(outDir))
-                .withCache(CacheFolder.of(project.dir()), cacheUse);
+                .withCache(CacheFolder.of(project.dir()), cacheUse)
+                .withFrameNameBandShare(settings.printSize().frameNameBandShare(settings.printTheme()));
         return AtlasLoader.load(project, options, findings);
     }
 }

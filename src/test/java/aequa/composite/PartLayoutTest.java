@@ -47,4 +47,33 @@ class PartLayoutTest {
         // and end below the name band
         assertTrue(part.getMaxY() + placed.dyM() <= placed.frameM().getMaxY() - placed.nameBandM() + 1e-6);
     }
+
+    /**
+     * Asked for name bands of at least 8 % of the map's drawn width (a print too narrow for the layout's own
+     * proportions), every one-line band reaches that share of the finished map's width (or of its height over the
+     * tallest aspect, when the map is drawn by its height), and a name's room grows with its band.
+     */
+    @Test
+    void nameBandsReachTheirLeastShareOfTheFinishedMap() {
+        List<PartLayout.Inset> insets = List.of(
+                new PartLayout.Inset(new Envelope(0, 200_000, 0, 300_000), PartLayout.nameWidthM("North Reach", MAIN), "", false),
+                new PartLayout.Inset(new Envelope(0, 50_000, 0, 80_000), PartLayout.nameWidthM("Outer Skerries", MAIN), "", true));
+        List<PartLayout.Placement> own = PartLayout.place(MAIN_REGIONS, insets);
+        List<PartLayout.Placement> grown = PartLayout.place(MAIN_REGIONS, insets, 0.08);
+        Envelope whole = new Envelope(MAIN);
+        grown.forEach(p -> whole.expandToInclude(p.frameM()));
+        double drawnWidthM = Math.max(whole.getWidth(), whole.getHeight() / PartLayout.MAX_ASPECT);
+        for (int i = 0; i < insets.size(); i++) {
+            PartLayout.Placement p = grown.get(i);
+            double oneLineBandM = p.nameBandM() / (p.nameLines() == 2 ? PartLayout.TWO_LINE_BAND : 1);
+            assertTrue(oneLineBandM >= 0.08 * drawnWidthM, oneLineBandM + " against " + drawnWidthM);
+            assertTrue(p.frameM().getWidth() > own.get(i).frameM().getWidth(), "the name's room grows with its band");
+        }
+        assertTrue(grown.get(1).scaleBandM() > own.get(1).scaleBandM(), "so does the part's own square");
+        for (int i = 0; i < grown.size(); i++) {
+            for (int j = i + 1; j < grown.size(); j++) {
+                assertTrue(!grown.get(i).frameM().intersects(grown.get(j).frameM()), "frames never overlap");
+            }
+        }
+    }
 }
