@@ -27,6 +27,19 @@ public record Atlas(Path projectDir, ProjectFile project, List<MapModel> maps, L
         }
     }
 
+    /**
+     * The atlas as readers of {@code wording}'s language see it: the site's and the maps' own words in that
+     * language where the project translates them (the project file's {@code translations}), and that wording
+     * alone. Everything computed (geometry, classes, colours, audits) is shared, not recomputed.
+     */
+    public Atlas inLanguage(Wording wording) {
+        String tag = wording.language().tag();
+        List<MapModel> translated = maps.stream().map(m -> m.inLanguage(tag)).toList();
+        ProjectFile file = new ProjectFile(project.site().inLanguage(tag), project.regions(), project.figures(),
+                project.projection(), project.checks(), translated.stream().map(MapModel::spec).toList());
+        return new Atlas(projectDir, file, translated, List.of(wording));
+    }
+
     /** An atlas in the shipped wording of the project's languages (English for a tag aequa does not ship). */
     public Atlas(Path projectDir, ProjectFile project, List<MapModel> maps) {
         this(projectDir, project, maps, project.site().languages().stream()

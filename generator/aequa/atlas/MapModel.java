@@ -55,6 +55,13 @@ public record MapModel(MapSpec spec, List<String> periods, ProjectionChoice proj
         this(spec, periods, projection, regions, classification, ramp, areaAudit, notices, List.of());
     }
 
+    /** This map with its own words (title, unit, notes, source, date) in the language {@code tag}. */
+    public MapModel inLanguage(String tag) {
+        MapSpec translated = spec.inLanguage(tag);
+        return translated == spec ? this
+                : new MapModel(translated, periods, projection, regions, classification, ramp, areaAudit, notices, parts, outlinesM);
+    }
+
     /** Whether the map is drawn in parts, each on its own projection. */
     public boolean composite() {
         return !parts.isEmpty();

@@ -34,12 +34,13 @@ import java.util.List;
  * @param largestCircleMm the diameter of the largest circle of a circle map in print, millimetres
  *                    ({@value #MIN_CIRCLE_MM} to {@value #MAX_CIRCLE_MM}), or null for the size the map's
  *                    extent suggests
+ * @param translations the map's own words in more languages, by language tag (see {@link Translations})
  */
 public record MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
                       Measure measure, Normalisation normalise, String per, Double multiplier, String unit,
                       MapDisplay display, ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
                       String marginColumn, String notes, String source, String asOf, List<Double> range,
-                      InsetsSpec insets, String outlines, Double largestCircleMm) {
+                      InsetsSpec insets, String outlines, Double largestCircleMm, java.util.Map<String, MapTexts> translations) {
 
     /** Bounds of {@code largest-circle-mm}: a 2 mm circle is still seen, a 40 mm one covers a two-column map's width. */
     public static final double MIN_CIRCLE_MM = 2;
@@ -63,6 +64,34 @@ public record MapSpec(String id, String title, String regions, String figures, S
         source = source == null ? "" : source;
         asOf = asOf == null ? "" : asOf;
         range = range == null ? List.of() : List.copyOf(range);
+        translations = translations == null ? java.util.Map.of()
+                : java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(translations));
+    }
+
+    /** A map without translations of its own words (the record's shape before {@code translations}). */
+    public MapSpec(String id, String title, String regions, String figures, String indicator, List<String> periods,
+                   Measure measure, Normalisation normalise, String per, Double multiplier, String unit, MapDisplay display,
+                   ClassesSpec classes, ColoursSpec colours, ProjectionSpec projection, String eventsColumn,
+                   String marginColumn, String notes, String source, String asOf, List<Double> range,
+                   InsetsSpec insets, String outlines, Double largestCircleMm) {
+        this(id, title, regions, figures, indicator, periods, measure, normalise, per, multiplier, unit, display,
+                classes, colours, projection, eventsColumn, marginColumn, notes, source, asOf, range, insets, outlines,
+                largestCircleMm, null);
+    }
+
+    /**
+     * This map with its own words (title, unit, notes, source, date) in the language {@code tag}, where the
+     * project translates them; every other setting, and every word not translated, stays as written.
+     */
+    public MapSpec inLanguage(String tag) {
+        return Translations.of(translations, tag).map(t -> new MapSpec(id, or(t.title(), title), regions, figures,
+                indicator, periods, measure, normalise, per, multiplier, or(t.unit(), unit), display, classes, colours,
+                projection, eventsColumn, marginColumn, or(t.notes(), notes), or(t.source(), source), or(t.asOf(), asOf),
+                range, insets, outlines, largestCircleMm, translations)).orElse(this);
+    }
+
+    private static String or(String translated, String written) {
+        return translated == null ? written : translated;
     }
 
     /** A map without outlines and with circles sized by the map (the record's shape before those settings). */

@@ -47,6 +47,7 @@ final class ProjectChecks {
         for (int i = 0; i < project.maps().size(); i++) {
             checkMap("/maps/" + i, project.maps().get(i), ids);
         }
+        new TranslationChecks(project, locations, findings).run();
     }
 
     private void checkRegionSource(String at, RegionSourceSpec source) {

@@ -97,7 +97,10 @@ final class SiteBuild {
             int steps = count * languages.size();
             for (int l = 0; l < languages.size(); l++) {
                 SiteLanguage language = languages.get(l);
-                SiteView site = SiteViews.site(atlas.project().site(), language, languages);
+                // the maps' and the site's own words in this language; fingerprints come from the whole project
+                // file, translations included, so a changed translation redraws
+                Atlas inLanguage = atlas.inLanguage(language.wording());
+                SiteView site = SiteViews.site(inLanguage.project().site(), language, languages);
                 MapArtwork artwork = this.artwork.inLanguage(language.wording());
                 List<MapFiles> files = fileIds.stream().map(id -> MapFiles.of(language.prefix(), id)).toList();
                 List<String> drawHashes = fingerprints.stream().map(f -> drawHash(f, artwork)).toList();
@@ -106,11 +109,11 @@ final class SiteBuild {
                     // the maps of a batch are drawn at the same time; their files are written one map after another
                     List<Optional<MapPictures>> pictures = IntStream.range(first, Math.min(count, first + atOnce)).parallel()
                             .mapToObj(i -> reusable(files.get(i).drawn(), drawHashes.get(i)) ? Optional.<MapPictures>empty()
-                                    : Optional.of(MapPictures.draw(artwork, atlas.maps().get(i), options.pngWidthPx())))
+                                    : Optional.of(MapPictures.draw(artwork, inLanguage.maps().get(i), options.pngWidthPx())))
                             .toList();
                     for (int i = first; i < Math.min(count, first + atOnce); i++) {
                         progress.step(Stage.MAPS, l * count + i, steps);
-                        buildMap(atlas.maps().get(i), drawHashes.get(i), pictures.get(i - first), files.get(i),
+                        buildMap(inLanguage.maps().get(i), drawHashes.get(i), pictures.get(i - first), files.get(i),
                                 renderer, site, siteHash);
                     }
                 }
@@ -137,13 +140,14 @@ final class SiteBuild {
                 progress.step(Stage.REPORT, 1, 1);
                 progress.step(Stage.PAGES, 0, 1);
                 for (SiteLanguage language : languages) {
-                    SiteView site = SiteViews.site(atlas.project().site(), language, languages);
+                    Atlas inLanguage = atlas.inLanguage(language.wording());
+                    SiteView site = SiteViews.site(inLanguage.project().site(), language, languages);
                     Wording wording = language.wording();
                     // links from a language's site pages to its map pages are relative to that language's root
                     List<MapFiles> files = fileIds.stream().map(MapFiles::of).toList();
                     String p = language.prefix();
-                    put(p + "index.html", utf8(renderer.renderIndex(site, SiteViews.index(atlas, files, wording))), pagesHash);
-                    put(p + "method.html", utf8(renderer.renderMethod(site, SiteViews.method(atlas, files, wording))), pagesHash);
+                    put(p + "index.html", utf8(renderer.renderIndex(site, SiteViews.index(inLanguage, files, wording))), pagesHash);
+                    put(p + "method.html", utf8(renderer.renderMethod(site, SiteViews.method(inLanguage, files, wording))), pagesHash);
                     put(p + "changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files, wording))), pagesHash);
                 }
             }
