@@ -30,8 +30,8 @@ public record DistortionSpread(double shareBelow1Deg, double shareBelow5Deg, dou
     static DistortionSpread of(EqualAreaProjection projection, Footprint footprint, double worstLonDeg, double worstLatDeg) {
         FootprintSamples samples = footprint.samples();
         int n = samples.interiorCount();
-        double[] omega = new double[samples.count()];
-        Distortion.omegaDeg(projection, samples.lonLatDeg(), samples.count(), omega);
+        double[] omega = new double[n]; // the boundary samples weigh nothing: their omega is not needed here
+        Distortion.omegaDeg(projection, samples.lonLatDeg(), n, omega);
         Integer[] order = new Integer[n];
         double total = 0;
         double[] below = new double[3];

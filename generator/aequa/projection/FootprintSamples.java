@@ -14,6 +14,8 @@ public final class FootprintSamples {
     private final double[] weights;
     private final int interiorCount;
     private final int extremeCount;
+    /** These samples without repeated boundary points, made on first use ({@link #withoutRepeats()}). */
+    private volatile FootprintSamples withoutRepeats;
 
     /**
      * Samples as {@link FootprintAnalysis} makes them, or as a cache stored them ({@link #lonLatDeg()},
@@ -61,6 +63,31 @@ public final class FootprintSamples {
 
     double weight(int i) {
         return weights[i];
+    }
+
+    /**
+     * The same samples without the boundary points that repeat an earlier boundary point (a vertex shared by
+     * neighbouring regions, a ring's closing point; {@link DistinctPoints}), in their order; the interior
+     * points are all kept. Over these, the largest omega, the first sample that reaches it and the weighted
+     * mean are those over all samples, for about half the work on a coverage. Made once per instance.
+     */
+    FootprintSamples withoutRepeats() {
+        FootprintSamples made = withoutRepeats;
+        if (made == null) {
+            double[] xy = lonLatDeg.clone();
+            int kept = DistinctPoints.keepFirst(xy, interiorCount, count() - interiorCount);
+            int n = interiorCount + kept;
+            made = n == count() ? this
+                    : new FootprintSamples(Arrays.copyOf(xy, 2 * n), Arrays.copyOf(weights, n), interiorCount,
+                            distinctExtremes());
+            withoutRepeats = made;
+        }
+        return made;
+    }
+
+    private int distinctExtremes() {
+        double[] extremes = Arrays.copyOfRange(lonLatDeg, 2 * interiorCount, 2 * (interiorCount + extremeCount));
+        return DistinctPoints.keepFirst(extremes, 0, extremeCount);
     }
 
     /**

@@ -13,14 +13,15 @@ package aequa.projection;
  * @param omegaMeanDeg area-weighted mean omega over the interior samples inside the domain, in degrees
  * @param worstLonDeg  longitude of the sample with the largest omega
  * @param worstLatDeg  latitude of that sample
- * @param outside      number of samples outside the projection's domain (NaN omega)
+ * @param outside      number of distinct samples outside the projection's domain (NaN omega)
  */
 record OmegaScore(double omegaMaxDeg, double omegaMeanDeg, double worstLonDeg, double worstLatDeg, int outside) {
 
     /** Weight of the mean in {@link #score()}. */
     static final double MEAN_WEIGHT = 0.01;
 
-    static OmegaScore of(EqualAreaProjection projection, FootprintSamples samples) {
+    static OmegaScore of(EqualAreaProjection projection, FootprintSamples allSamples) {
+        FootprintSamples samples = allSamples.withoutRepeats(); // same maximum, worst point and mean
         int n = samples.count();
         double[] lonLat = samples.lonLatDeg();
         double[] omega = new double[n];
