@@ -24,7 +24,6 @@ import aequa.composite.PartPlan;
 import aequa.project.InsetsSpec;
 import aequa.projection.Footprint;
 import aequa.projection.ProjectionChoice;
-import aequa.projection.ProjectionChooser;
 import aequa.projection.ProjectionRequest;
 import aequa.statistics.MapFigures;
 import aequa.statistics.MapStatistics;
@@ -131,8 +130,7 @@ final class MapAssembler {
         try {
             List<PartPlan> planned = cache.parts(layer, insets, request, () -> CompositePlanner.plan(layer.regions(),
                     layer.areaKm2ByKey(), insets, request, new CompositePlanner.SettingPlace(project.places(), pointer), findings,
-                    (keys, footprint, partRequest) -> cache.choice(layer.subset(keys), partRequest,
-                            () -> ProjectionChooser.choose(footprint, partRequest))));
+                    (keys, partRequest, compute) -> cache.choice(layer.subset(keys), partRequest, compute)));
             if (planned.isEmpty()) {
                 return Optional.empty();
             }

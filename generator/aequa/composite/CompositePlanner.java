@@ -7,8 +7,11 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.function.Function;
+import java.util.function.Supplier;
+import java.util.stream.IntStream;
 
 import org.locationtech.jts.geom.Point;
 
@@ -34,12 +37,12 @@ import aequa.projection.ProjectionRequest;
 public final class CompositePlanner {
 
     /**
-     * Chooses a part's projection: {@link ProjectionChooser#choose} by default; the load step passes one that
-     * first asks its geometry cache, keyed by the part's regions and the request.
+     * Chooses a part's projection: {@code compute} by default; the load step passes one that first asks its
+     * geometry cache, keyed by the part's regions and the request. It may be called for several parts at once.
      */
     @FunctionalInterface
     public interface PartChooser {
-        ProjectionChoice choose(List<String> keys, Footprint footprint, ProjectionRequest request);
+        ProjectionChoice choose(List<String> keys, ProjectionRequest request, Supplier<ProjectionChoice> compute);
     }
 
     /** Where findings about a listed part point: the project file's places and the setting's JSON Pointer. */
@@ -55,8 +58,7 @@ public final class CompositePlanner {
      */
     public static List<PartPlan> plan(List<Region> regions, Map<String, Double> areaKm2ByKey, InsetsSpec insets,
                                       ProjectionRequest request, SettingPlace place, Findings findings) {
-        return plan(regions, areaKm2ByKey, insets, request, place, findings,
-                (keys, footprint, partRequest) -> ProjectionChooser.choose(footprint, partRequest));
+        return plan(regions, areaKm2ByKey, insets, request, place, findings, (keys, partRequest, compute) -> compute.get());
     }
 
     /** As {@link #plan(List, Map, InsetsSpec, ProjectionRequest, SettingPlace, Findings)}, choosing through {@code chooser}. */
@@ -66,6 +68,7 @@ public final class CompositePlanner {
         Function<List<String>, Double> area = keys -> keys.stream().mapToDouble(areaKm2ByKey::get).sum();
         boolean forced = request.family().isPresent() || !request.forcedParameters().isEmpty();
         List<Group> groups = new ArrayList<>();
+        Optional<DetachedParts.ChosenFor> mainAutomatic = Optional.empty();
         if (insets.listed()) {
             List<Group> listed = listedGroups(regions, insets, place, findings);
             if (listed == null) {
@@ -74,6 +77,7 @@ public final class CompositePlanner {
             groups.addAll(listed);
         } else if (!insets.off() && !forced && regions.size() > 1) {
             DetachedParts.Result found = DetachedParts.find(regions, areaKm2ByKey);
+            mainAutomatic = found.mainChoice().filter(chosen -> request.equals(ProjectionRequest.automatic()));
             groups.add(new Group(found.main().keys(), "", 1, "", 0));
             for (DetachedParts.Group g : found.detached()) {
                 groups.add(new Group(g.keys(), "", 1, "", g.gapKm()));
@@ -83,16 +87,40 @@ public final class CompositePlanner {
         }
         Map<String, Region> byKey = new HashMap<>();
         regions.forEach(r -> byKey.put(r.key(), r));
+        // each part's footprint and choice stand alone, so the parts are chosen side by side; the main part
+        // takes the detection's own choice when it was made for the same regions and an automatic request
+        Optional<DetachedParts.ChosenFor> known = mainAutomatic;
+        List<Outcome> outcomes = IntStream.range(0, groups.size()).parallel().mapToObj(i -> {
+            Group g = groups.get(i);
+            try {
+                if (i == 0 && known.isPresent()) {
+                    return new Outcome(new DetachedParts.ChosenFor(known.get().footprint(),
+                            chooser.choose(g.keys, request, () -> known.get().choice())), null);
+                }
+                Footprint footprint = Footprint.of(g.keys.stream().map(key -> byKey.get(key).lonLat()).toList());
+                ProjectionRequest partRequest = i == 0 ? request : ProjectionRequest.automatic();
+                return new Outcome(new DetachedParts.ChosenFor(footprint,
+                        chooser.choose(g.keys, partRequest, () -> ProjectionChooser.choose(footprint, partRequest))), null);
+            } catch (RuntimeException e) {
+                return new Outcome(null, e);
+            }
+        }).toList();
+        List<DetachedParts.ChosenFor> chosen = new ArrayList<>();
+        for (Outcome outcome : outcomes) {
+            if (outcome.failure() != null) {
+                throw outcome.failure(); // as thrown, whichever thread made the choice
+            }
+            chosen.add(outcome.chosen());
+        }
         List<PartPlan> parts = new ArrayList<>();
         for (int i = 0; i < groups.size(); i++) {
             Group g = groups.get(i);
             List<Region> members = g.keys.stream().map(byKey::get).toList();
-            Footprint footprint = Footprint.of(members.stream().map(Region::lonLat).toList());
-            ProjectionChoice choice = chooser.choose(g.keys, footprint, i == 0 ? request : ProjectionRequest.automatic());
+            Footprint footprint = chosen.get(i).footprint();
             String name = !g.name.isEmpty() ? g.name : i == 0 ? "Main map"
                     : defaultName(members, regions, areaKm2ByKey, g.gapKm, parts.get(0).footprint(), footprint);
             parts.add(new PartPlan(i == 0 ? "main" : "part-" + i, name, g.keys, i == 0, g.areaScale, g.corner,
-                    area.apply(g.keys), g.gapKm, footprint, choice));
+                    area.apply(g.keys), g.gapKm, footprint, chosen.get(i).choice()));
         }
         return parts;
     }
@@ -215,5 +243,9 @@ public final class CompositePlanner {
     }
 
     private record Group(List<String> keys, String name, double areaScale, String corner, double gapKm) {
+    }
+
+    /** A part's choice, or the exception making it threw (for example forced parameters out of range). */
+    private record Outcome(DetachedParts.ChosenFor chosen, RuntimeException failure) {
     }
 }

@@ -2,14 +2,18 @@ package aequa.composite;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
 import java.util.function.Function;
 
 import org.locationtech.jts.geom.Geometry;
 
 import aequa.inputs.regions.Region;
 import aequa.projection.Footprint;
+import aequa.projection.ProjectionChoice;
 import aequa.projection.ProjectionChooser;
 import aequa.projection.ProjectionRequest;
 
@@ -71,8 +75,16 @@ final class DetachedParts {
      *                       that stayed were added (NaN when no candidate needed the omega test)
      * @param linkKm         the grouping distance of step 1
      * @param detachGapKm    the gap of step 2
+     * @param mainChoice     the automatic projection choice made for the omega test on exactly the regions of
+     *                       {@code main}, in the same order, when there was one: the main part's choice for an
+     *                       automatic request is that same choice, so the planner need not make it again
      */
-    record Result(Group main, List<Group> detached, double omegaMainDeg, double linkKm, double detachGapKm) {
+    record Result(Group main, List<Group> detached, double omegaMainDeg, double linkKm, double detachGapKm,
+                  Optional<ChosenFor> mainChoice) {
+    }
+
+    /** An automatic choice and the footprint it was made for. */
+    record ChosenFor(Footprint footprint, ProjectionChoice choice) {
     }
 
     private DetachedParts() {
@@ -83,7 +95,7 @@ final class DetachedParts {
         List<Geometry> lonLat = regions.stream().map(Region::lonLat).toList();
         if (ProjectionChooser.worldOnly(Footprint.of(lonLat))) {
             double km2 = regions.stream().mapToDouble(r -> areaKm2ByKey.get(r.key())).sum();
-            return new Result(new Group(keys(regions), km2, 0, Double.NaN), List.of(), Double.NaN, 0, 0);
+            return new Result(new Group(keys(regions), km2, 0, Double.NaN), List.of(), Double.NaN, 0, 0, Optional.empty());
         }
         double totalKm2 = regions.stream().mapToDouble(r -> areaKm2ByKey.get(r.key())).sum();
         double linkKm = LINK_SHARE * Math.sqrt(totalKm2);
@@ -122,33 +134,52 @@ final class DetachedParts {
         }
         double mainMassKm2 = area.apply(mainMass);
         if (mainMassKm2 < MIN_MAIN_SHARE * totalKm2) {
-            return new Result(new Group(keys(regions), totalKm2, 0, Double.NaN), List.of(), Double.NaN, linkKm, detachGapKm);
+            return new Result(new Group(keys(regions), totalKm2, 0, Double.NaN), List.of(), Double.NaN, linkKm, detachGapKm,
+                    Optional.empty());
         }
         mergeNearCandidates(candidates);
 
         double farKm = FAR_RATIO * Math.sqrt(mainKm2);
-        double omegaMain = candidates.stream().allMatch(c -> c.gapKm > farKm) ? Double.NaN : omegaMaxDeg(mainMass);
+        List<Region> mainInOrder = inSourceOrder(regions, mainMass);
+        // step 4's automatic choices (the main mass alone, then with each candidate that is not far) are
+        // independent: they are made side by side, and their results are read in this fixed order
+        List<List<Region>> omegaTests = new ArrayList<>();
+        if (!candidates.stream().allMatch(c -> c.gapKm > farKm)) {
+            omegaTests.add(mainInOrder);
+        }
+        for (Candidate c : candidates) {
+            if (c.gapKm <= farKm) {
+                omegaTests.add(inSourceOrder(regions, mainInOrder, c.regions));
+            }
+        }
+        List<ChosenFor> chosen = omegaTests.parallelStream().map(DetachedParts::automaticChoice).toList();
+        double omegaMain = chosen.isEmpty() ? Double.NaN : chosen.get(0).choice().omegaMaxDeg();
         List<Group> detached = new ArrayList<>();
         List<Region> stayed = new ArrayList<>();
+        int test = 1;
         for (Candidate c : candidates) {
-            double omegaWith = Double.NaN;
-            if (c.gapKm <= farKm) {
-                List<Region> with = new ArrayList<>(mainMass);
-                with.addAll(c.regions);
-                omegaWith = omegaMaxDeg(with);
-            }
+            double omegaWith = c.gapKm <= farKm ? chosen.get(test++).choice().omegaMaxDeg() : Double.NaN;
             if (c.gapKm > farKm || omegaWith > omegaMain * (1 + OMEGA_GROWTH) + OMEGA_MARGIN_DEG) {
                 detached.add(new Group(keys(c.regions), area.apply(c.regions), c.gapKm, omegaWith));
             } else {
                 stayed.addAll(c.regions);
             }
         }
-        mainMass.addAll(stayed);
         detached.sort(Comparator.comparingDouble(Group::areaKm2).reversed().thenComparing(g -> g.keys().get(0)));
-        java.util.Set<String> inMain = new java.util.HashSet<>(keys(mainMass));
-        List<Region> mainInOrder = regions.stream().filter(r -> inMain.contains(r.key())).toList();
-        return new Result(new Group(keys(mainInOrder), area.apply(mainInOrder), 0, Double.NaN), detached, omegaMain,
-                linkKm, detachGapKm);
+        Optional<ChosenFor> mainChoice = stayed.isEmpty() && !chosen.isEmpty() ? Optional.of(chosen.get(0)) : Optional.empty();
+        List<Region> finalMain = inSourceOrder(regions, mainInOrder, stayed);
+        return new Result(new Group(keys(finalMain), area.apply(finalMain), 0, Double.NaN), detached, omegaMain,
+                linkKm, detachGapKm, mainChoice);
+    }
+
+    /** The regions of {@code all} that are in one of {@code subsets}, in the order of {@code all}. */
+    @SafeVarargs
+    private static List<Region> inSourceOrder(List<Region> all, List<Region>... subsets) {
+        Set<String> wanted = new HashSet<>();
+        for (List<Region> subset : subsets) {
+            subset.forEach(r -> wanted.add(r.key()));
+        }
+        return all.stream().filter(r -> wanted.contains(r.key())).toList();
     }
 
     /** Step 3: single linkage among the candidates, in a fixed order. */
@@ -174,9 +205,10 @@ final class DetachedParts {
         }
     }
 
-    static double omegaMaxDeg(List<Region> regions) {
+    /** The automatic projection choice for the regions, as the main map would get it. */
+    private static ChosenFor automaticChoice(List<Region> regions) {
         Footprint footprint = Footprint.of(regions.stream().map(Region::lonLat).toList());
-        return ProjectionChooser.choose(footprint, ProjectionRequest.automatic()).omegaMaxDeg();
+        return new ChosenFor(footprint, ProjectionChooser.choose(footprint, ProjectionRequest.automatic()));
     }
 
     private static List<String> keys(List<Region> regions) {

@@ -6,6 +6,7 @@ import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.stream.IntStream;
 
 import org.locationtech.jts.coverage.CoveragePolygonValidator;
 import org.locationtech.jts.geom.Coordinate;
@@ -80,32 +81,46 @@ public final class CoverageChecks {
             }
             parts.add(own);
         }
+        // the neighbours and the budget are settled in input order first, so where the check stops does not
+        // depend on the parallelism; the regions within the budget are then validated side by side (each
+        // alone, reading its neighbours) and their findings added in input order
+        List<Geometry[]> adjacent = new ArrayList<>(regions.size());
         long work = 0;
+        int checkedCount = regions.size();
         for (int r = 0; r < regions.size(); r++) {
             Geometry target = regions.get(r).lonLat();
             if (target.isEmpty()) {
+                adjacent.add(null);
                 continue;
             }
             List<Part> near = neighbours(index, parts.get(r), r);
             long cost = target.getNumPoints() + near.stream().mapToLong(p -> p.polygon().getNumPoints()).sum();
             if (work + cost > workBudget) {
-                findings.add(Finding.warning("coverage-check-bounded", file, "",
-                        String.format(Locale.ROOT, "The check for gaps and overlaps between neighbours stopped after"
-                                + " %d of %d regions: their bounding boxes overlap so much that checking them all would compare"
-                                + " more than %,d vertices.", r, regions.size(), workBudget),
-                        "Check that the file holds one layer of neighbouring regions, not features piled on top of each other."));
-                return;
+                checkedCount = r;
+                break;
             }
             work += cost;
-            Geometry[] adjacent = near.stream().map(Part::polygon).toArray(Geometry[]::new);
-            Geometry invalid = CoveragePolygonValidator.validate(target, adjacent, GAP_WIDTH_DEG);
-            if (!invalid.isEmpty()) {
-                Coordinate at = invalid.getCoordinate();
+            adjacent.add(near.stream().map(Part::polygon).toArray(Geometry[]::new));
+        }
+        List<Geometry> invalid = IntStream.range(0, checkedCount).parallel()
+                .mapToObj(r -> adjacent.get(r) == null ? null
+                        : CoveragePolygonValidator.validate(regions.get(r).lonLat(), adjacent.get(r), GAP_WIDTH_DEG))
+                .toList();
+        for (int r = 0; r < checkedCount; r++) {
+            if (invalid.get(r) != null && !invalid.get(r).isEmpty()) {
+                Coordinate at = invalid.get(r).getCoordinate();
                 findings.add(Finding.warning("coverage-mismatch", file, "feature \"" + regions.get(r).key() + "\"",
                         String.format(Locale.ROOT, "Its border does not match its neighbours' near (%.6f, %.6f): they overlap or leave a gap narrower than %s deg.",
                                 at.x, at.y, GAP_WIDTH_DEG),
                         "Make neighbouring regions share their border vertex for vertex (for example, export the boundaries from one topology)."));
             }
+        }
+        if (checkedCount < regions.size()) {
+            findings.add(Finding.warning("coverage-check-bounded", file, "",
+                    String.format(Locale.ROOT, "The check for gaps and overlaps between neighbours stopped after"
+                            + " %d of %d regions: their bounding boxes overlap so much that checking them all would compare"
+                            + " more than %,d vertices.", checkedCount, regions.size(), workBudget),
+                    "Check that the file holds one layer of neighbouring regions, not features piled on top of each other."));
         }
     }
 

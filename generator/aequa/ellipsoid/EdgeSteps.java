@@ -66,16 +66,15 @@ public final class EdgeSteps {
      */
     public static EdgeSteps forLayer(List<Geometry> lonLatRegions, double stepDeg, double maxRelativeError,
                                      PlanePoints plane) {
+        // each region's step is found alone, side by side (plane is only read); the finest step of an edge
+        // is then the same whatever order the regions were merged in
+        double[] regionSteps = lonLatRegions.parallelStream()
+                .mapToDouble(region -> regionStepDeg(region, stepDeg, maxRelativeError, plane)).toArray();
         Map<Edge, Double> finer = new HashMap<>();
-        for (Geometry region : lonLatRegions) {
-            double allowedM2 = maxRelativeError * LonLatArea.areaM2(region);
-            double step = stepDeg;
-            while (step > FINEST_STEP_DEG && chordLensesM2(region, step, plane) > allowedM2) {
-                step = Math.max(FINEST_STEP_DEG, step / 2);
-            }
-            if (step < stepDeg) {
-                double regionStep = step;
-                forEachRing(region, ring -> {
+        for (int r = 0; r < regionSteps.length; r++) {
+            if (regionSteps[r] < stepDeg) {
+                double regionStep = regionSteps[r];
+                forEachRing(lonLatRegions.get(r), ring -> {
                     for (int i = 0; i + 1 < ring.size(); i++) {
                         finer.merge(Edge.of(ring, i), regionStep, Math::min);
                     }
@@ -83,6 +82,16 @@ public final class EdgeSteps {
             }
         }
         return new EdgeSteps(stepDeg, finer);
+    }
+
+    /** The step one region needs: {@code stepDeg} halved until its chord lenses fit its share of its area. */
+    private static double regionStepDeg(Geometry region, double stepDeg, double maxRelativeError, PlanePoints plane) {
+        double allowedM2 = maxRelativeError * LonLatArea.areaM2(region);
+        double step = stepDeg;
+        while (step > FINEST_STEP_DEG && chordLensesM2(region, step, plane) > allowedM2) {
+            step = Math.max(FINEST_STEP_DEG, step / 2);
+        }
+        return step;
     }
 
     /** The step of the edge between two points, degrees. */

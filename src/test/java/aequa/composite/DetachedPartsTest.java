@@ -10,6 +10,12 @@ import java.util.TreeSet;
 
 import org.junit.jupiter.api.Test;
 
+import aequa.inputs.regions.Region;
+import aequa.projection.Footprint;
+import aequa.projection.ProjectionChoice;
+import aequa.projection.ProjectionChooser;
+import aequa.projection.ProjectionRequest;
+
 /**
  * The detached parts found in real boundary files (src/test/resources/geometry/SOURCE.md): the US Census
  * Bureau's 2017 states and counties, keyed by FIPS codes (FIPS 5-2 state codes: 02 Alaska, 15 Hawaii,
@@ -52,6 +58,26 @@ class DetachedPartsTest {
         assertTrue(found.main().keys().stream().noneMatch(k -> k.startsWith("02") || k.startsWith("15") || k.startsWith("72")));
         // offshore island counties stay with their mainland: Nantucket (25019), Dukes (25007), Monroe with the Keys (12087)
         assertTrue(found.main().keys().containsAll(List.of("25019", "25007", "12087")));
+    }
+
+    @Test
+    void theChoiceMadeForTheOmegaTestIsTheMainPartsOwnAutomaticChoice() {
+        // the planner reuses this choice for the main part, so it must be the one a fresh automatic choice on the
+        // main part's regions (in file order) gives: same family, parameters and largest omega
+        RealRegions counties = RealRegions.read("us-counties-2017.geojson", "id");
+        DetachedParts.Result found = DetachedParts.find(counties.regions(), counties.areaKm2ByKey());
+        assertTrue(found.mainChoice().isPresent(), "Alaska needed the omega test");
+        Set<String> main = Set.copyOf(found.main().keys());
+        Footprint footprint = Footprint.of(counties.regions().stream().filter(r -> main.contains(r.key()))
+                .map(Region::lonLat).toList());
+        ProjectionChoice fresh = ProjectionChooser.choose(footprint, ProjectionRequest.automatic());
+        ProjectionChoice reused = found.mainChoice().get().choice();
+        assertEquals(fresh.projection().wkt2(), reused.projection().wkt2());
+        assertEquals(fresh.omegaMaxDeg(), reused.omegaMaxDeg(), 0.0);
+        assertEquals(found.omegaMainDeg(), reused.omegaMaxDeg(), 0.0);
+        Footprint kept = found.mainChoice().get().footprint();
+        assertEquals(footprint.sphericalCentreLonDeg(), kept.sphericalCentreLonDeg(), 0.0);
+        assertEquals(footprint.angularRadiusDeg(), kept.angularRadiusDeg(), 0.0);
     }
 
     @Test
