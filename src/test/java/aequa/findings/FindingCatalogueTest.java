@@ -32,10 +32,7 @@ class FindingCatalogueTest {
     private static final Map<String, String> WITHOUT_FIXTURE = Map.ofEntries(
             Map.entry("file-type-unknown",
                     "the region readers' guard for `aequa explain`, which hands them any file a user names; a project's"
-                            + " checks report project-file-type first; GeoJsonRegionReaderTest names it"),
-            Map.entry("file-unreadable",
-                    "needs a file that passed the project's checks and then cannot be read (a disk error, or gone since),"
-                            + " which no fixture makes root-proof; GeoJsonRegionReaderTest names it"));
+                            + " checks report project-file-type first; GeoJsonRegionReaderTest names it"));
 
     /**
      * A code given to a finding: the first text argument (after at most two plain names) of
