@@ -32,7 +32,7 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
 
     /**
      * A part's planar layer ({@link PlanarLayer#of(RegionLayer, aequa.projection.EqualAreaProjection, Footprint,
-     * double, double, double)}); the caller may share them between maps.
+     * double, double, double)}); the caller may share them between maps. Called for several parts at once.
      */
     interface PlanarLayers {
         PlanarLayer of(RegionLayer subset, PartPlan plan, Footprint drawnFootprint, double minDrawnWidthM);
@@ -47,13 +47,14 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
                               List<aequa.wording.Wording> languages, double frameNameBandShare) {
         PartPlan mainPlan = plans.get(0);
         double mainWidthM = PlanarLayer.roughWidthM(mainPlan.footprint());
-        List<PlanarLayer> planar = new ArrayList<>();
-        for (PartPlan plan : plans) {
+        // the parts' layers stand alone, so they are made side by side (the main part's simplification, which
+        // runs on one thread, overlaps the other parts'); the list keeps the parts' order
+        List<PlanarLayer> planar = plans.parallelStream().map(plan -> {
             double minWidthM = plan.main() ? 0 : mainWidthM / Math.sqrt(plan.areaScale());
             // a part drawn no larger than the main part is densified for the main part's drawing; an enlarged one for its own
             Footprint drawn = plan.areaScale() > 1 ? plan.footprint() : mainPlan.footprint();
-            planar.add(planarLayers.of(layer.subset(plan.keys()), plan, drawn, minWidthM));
-        }
+            return planarLayers.of(layer.subset(plan.keys()), plan, drawn, minWidthM);
+        }).toList();
         Envelope mainExtent = extent(planar.get(0).simplifiedM().values());
         List<PartLayout.Inset> insets = new ArrayList<>();
         for (int i = 1; i < plans.size(); i++) {

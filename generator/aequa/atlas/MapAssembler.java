@@ -145,13 +145,26 @@ final class MapAssembler {
         }
     }
 
-    /** One part's planar layer, shared by every map drawing the same regions on the same projection and scale. */
+    /**
+     * One part's planar layer, shared by every map drawing the same regions on the same projection and scale.
+     * A composite map asks for its parts' layers side by side: the shared table is read and written under its
+     * lock, the layer made outside it (the parts of one map never share a key).
+     */
     private PlanarLayer partLayer(RegionLayer subset, PartPlan plan, Footprint drawnFootprint, double minDrawnWidthM) {
         double tolerance = project.file().checks().areaTolerance();
-        return planarLayers.computeIfAbsent(subset.sourceId() + "|" + plan.keys() + "|" + plan.choice().projection().wkt2() + "|" + plan.areaScale(),
-                key -> cache.planar(subset, plan.choice().projection(), tolerance, plan.areaScale(), minDrawnWidthM,
-                        () -> PlanarLayer.of(subset, plan.choice().projection(), drawnFootprint, tolerance,
-                                plan.areaScale(), minDrawnWidthM)));
+        String key = subset.sourceId() + "|" + plan.keys() + "|" + plan.choice().projection().wkt2() + "|" + plan.areaScale();
+        synchronized (planarLayers) {
+            PlanarLayer known = planarLayers.get(key);
+            if (known != null) {
+                return known;
+            }
+        }
+        PlanarLayer made = cache.planar(subset, plan.choice().projection(), tolerance, plan.areaScale(), minDrawnWidthM,
+                () -> PlanarLayer.of(subset, plan.choice().projection(), drawnFootprint, tolerance,
+                        plan.areaScale(), minDrawnWidthM));
+        synchronized (planarLayers) {
+            return planarLayers.computeIfAbsent(key, k -> made);
+        }
     }
 
     /** Readers see at most this many notices of one kind; report.json keeps every finding. */

@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.ForkJoinTask;
 import java.util.function.Function;
 
 import org.locationtech.jts.geom.Geometry;
@@ -93,13 +95,15 @@ final class DetachedParts {
     /** The parts of {@code regions}; only a main mass holding every region when they need a world projection. */
     static Result find(List<Region> regions, Map<String, Double> areaKm2ByKey) {
         List<Geometry> lonLat = regions.stream().map(Region::lonLat).toList();
-        if (ProjectionChooser.worldOnly(Footprint.of(lonLat))) {
-            double km2 = regions.stream().mapToDouble(r -> areaKm2ByKey.get(r.key())).sum();
-            return new Result(new Group(keys(regions), km2, 0, Double.NaN), List.of(), Double.NaN, 0, 0, Optional.empty());
-        }
         double totalKm2 = regions.stream().mapToDouble(r -> areaKm2ByKey.get(r.key())).sum();
+        // the whole set's footprint (for the world test) is analysed while step 1 links the regions; the
+        // links are dropped when the set needs a world projection
+        ForkJoinTask<Footprint> whole = ForkJoinPool.commonPool().submit(() -> Footprint.of(lonLat));
         double linkKm = LINK_SHARE * Math.sqrt(totalKm2);
         int[] groupOf = RegionLinks.groups(lonLat, linkKm * 1000);
+        if (ProjectionChooser.worldOnly(whole.join())) {
+            return new Result(new Group(keys(regions), totalKm2, 0, Double.NaN), List.of(), Double.NaN, 0, 0, Optional.empty());
+        }
         int groupCount = 0;
         for (int g : groupOf) {
             groupCount = Math.max(groupCount, g + 1);
