@@ -187,5 +187,26 @@ public final class EdgeSteps {
             boolean forward = x0 < x1 || (x0 == x1 && y0 <= y1);
             return forward ? new Edge(x0, y0, x1, y1) : new Edge(x1, y1, x0, y0);
         }
+
+        // written out (same meaning as a record's: equal bits): every densified edge is looked up, and the
+        // generated methods cost several times more under the launcher's first compiler
+        @Override
+        public boolean equals(Object other) {
+            return other instanceof Edge e && bits(ax) == bits(e.ax) && bits(ay) == bits(e.ay)
+                    && bits(bx) == bits(e.bx) && bits(by) == bits(e.by);
+        }
+
+        @Override
+        public int hashCode() {
+            long h = bits(ax);
+            h = h * 31 + bits(ay);
+            h = h * 31 + bits(bx);
+            h = h * 31 + bits(by);
+            return (int) (h ^ (h >>> 32));
+        }
+
+        private static long bits(double value) {
+            return Double.doubleToLongBits(value);
+        }
     }
 }
