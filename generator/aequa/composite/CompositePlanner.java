@@ -7,7 +7,6 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.Optional;
 import java.util.Set;
 import java.util.function.Function;
 import java.util.function.Supplier;
@@ -68,7 +67,7 @@ public final class CompositePlanner {
         Function<List<String>, Double> area = keys -> keys.stream().mapToDouble(areaKm2ByKey::get).sum();
         boolean forced = request.family().isPresent() || !request.forcedParameters().isEmpty();
         List<Group> groups = new ArrayList<>();
-        Optional<DetachedParts.ChosenFor> mainAutomatic = Optional.empty();
+        Map<List<String>, DetachedParts.ChosenFor> madeAlready = Map.of();
         if (insets.listed()) {
             List<Group> listed = listedGroups(regions, insets, place, findings);
             if (listed == null) {
@@ -77,7 +76,7 @@ public final class CompositePlanner {
             groups.addAll(listed);
         } else if (!insets.off() && !forced && regions.size() > 1) {
             DetachedParts.Result found = DetachedParts.find(regions, areaKm2ByKey);
-            mainAutomatic = found.mainChoice().filter(chosen -> request.equals(ProjectionRequest.automatic()));
+            madeAlready = found.automaticChoices();
             groups.add(new Group(found.main().keys(), "", 1, "", 0));
             for (DetachedParts.Group g : found.detached()) {
                 groups.add(new Group(g.keys(), "", 1, "", g.gapKm()));
@@ -87,18 +86,19 @@ public final class CompositePlanner {
         }
         Map<String, Region> byKey = new HashMap<>();
         regions.forEach(r -> byKey.put(r.key(), r));
-        // each part's footprint and choice stand alone, so the parts are chosen side by side; the main part
-        // takes the detection's own choice when it was made for the same regions and an automatic request
-        Optional<DetachedParts.ChosenFor> known = mainAutomatic;
+        // each part's footprint and choice stand alone, so the parts are chosen side by side; a part with an
+        // automatic request takes the detection's own choice when one was made for the same regions in the same order
+        Map<List<String>, DetachedParts.ChosenFor> known = madeAlready;
         List<Outcome> outcomes = IntStream.range(0, groups.size()).parallel().mapToObj(i -> {
             Group g = groups.get(i);
+            ProjectionRequest partRequest = i == 0 ? request : ProjectionRequest.automatic();
             try {
-                if (i == 0 && known.isPresent()) {
-                    return new Outcome(new DetachedParts.ChosenFor(known.get().footprint(),
-                            chooser.choose(g.keys, request, () -> known.get().choice())), null);
+                DetachedParts.ChosenFor made = partRequest.equals(ProjectionRequest.automatic()) ? known.get(g.keys) : null;
+                if (made != null) {
+                    return new Outcome(new DetachedParts.ChosenFor(made.footprint(),
+                            chooser.choose(g.keys, partRequest, made::choice)), null);
                 }
                 Footprint footprint = Footprint.of(g.keys.stream().map(key -> byKey.get(key).lonLat()).toList());
-                ProjectionRequest partRequest = i == 0 ? request : ProjectionRequest.automatic();
                 return new Outcome(new DetachedParts.ChosenFor(footprint,
                         chooser.choose(g.keys, partRequest, () -> ProjectionChooser.choose(footprint, partRequest))), null);
             } catch (RuntimeException e) {

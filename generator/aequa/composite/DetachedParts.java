@@ -2,10 +2,10 @@ package aequa.composite;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.ForkJoinPool;
 import java.util.concurrent.ForkJoinTask;
@@ -77,12 +77,13 @@ final class DetachedParts {
      *                       that stayed were added (NaN when no candidate needed the omega test)
      * @param linkKm         the grouping distance of step 1
      * @param detachGapKm    the gap of step 2
-     * @param mainChoice     the automatic projection choice made for the omega test on exactly the regions of
-     *                       {@code main}, in the same order, when there was one: the main part's choice for an
-     *                       automatic request is that same choice, so the planner need not make it again
+     * @param automaticChoices automatic projection choices already made, by the exact list of keys (in order)
+     *                       they were made for: the main mass's (made for the omega test) when it is the main
+     *                       part, and each far part's own (made side by side with the omega test), so the
+     *                       planner need not make them again
      */
     record Result(Group main, List<Group> detached, double omegaMainDeg, double linkKm, double detachGapKm,
-                  Optional<ChosenFor> mainChoice) {
+                  Map<List<String>, ChosenFor> automaticChoices) {
     }
 
     /** An automatic choice and the footprint it was made for. */
@@ -102,7 +103,7 @@ final class DetachedParts {
         double linkKm = LINK_SHARE * Math.sqrt(totalKm2);
         int[] groupOf = RegionLinks.groups(lonLat, linkKm * 1000);
         if (ProjectionChooser.worldOnly(whole.join())) {
-            return new Result(new Group(keys(regions), totalKm2, 0, Double.NaN), List.of(), Double.NaN, 0, 0, Optional.empty());
+            return new Result(new Group(keys(regions), totalKm2, 0, Double.NaN), List.of(), Double.NaN, 0, 0, Map.of());
         }
         int groupCount = 0;
         for (int g : groupOf) {
@@ -139,41 +140,48 @@ final class DetachedParts {
         double mainMassKm2 = area.apply(mainMass);
         if (mainMassKm2 < MIN_MAIN_SHARE * totalKm2) {
             return new Result(new Group(keys(regions), totalKm2, 0, Double.NaN), List.of(), Double.NaN, linkKm, detachGapKm,
-                    Optional.empty());
+                    Map.of());
         }
         mergeNearCandidates(candidates);
 
         double farKm = FAR_RATIO * Math.sqrt(mainKm2);
         List<Region> mainInOrder = inSourceOrder(regions, mainMass);
-        // step 4's automatic choices (the main mass alone, then with each candidate that is not far) are
-        // independent: they are made side by side, and their results are read in this fixed order
-        List<List<Region>> omegaTests = new ArrayList<>();
-        if (!candidates.stream().allMatch(c -> c.gapKm > farKm)) {
-            omegaTests.add(mainInOrder);
+        // step 4's automatic choices (the main mass alone, then with each candidate that is not far) and the
+        // far candidates' own choices (they are parts whatever the omega test says) are independent: they are
+        // made side by side, and their results are read in this fixed order
+        boolean omegaTest = !candidates.stream().allMatch(c -> c.gapKm > farKm);
+        List<List<Region>> choices = new ArrayList<>();
+        if (omegaTest) {
+            choices.add(mainInOrder);
         }
         for (Candidate c : candidates) {
-            if (c.gapKm <= farKm) {
-                omegaTests.add(inSourceOrder(regions, mainInOrder, c.regions));
-            }
+            choices.add(c.gapKm <= farKm ? inSourceOrder(regions, mainInOrder, c.regions) : c.regions);
         }
-        List<ChosenFor> chosen = omegaTests.parallelStream().map(DetachedParts::automaticChoice).toList();
-        double omegaMain = chosen.isEmpty() ? Double.NaN : chosen.get(0).choice().omegaMaxDeg();
+        List<ChosenFor> chosen = choices.parallelStream().map(DetachedParts::automaticChoice).toList();
+        double omegaMain = omegaTest ? chosen.get(0).choice().omegaMaxDeg() : Double.NaN;
+        Map<List<String>, ChosenFor> automaticChoices = new HashMap<>();
         List<Group> detached = new ArrayList<>();
         List<Region> stayed = new ArrayList<>();
-        int test = 1;
-        for (Candidate c : candidates) {
-            double omegaWith = c.gapKm <= farKm ? chosen.get(test++).choice().omegaMaxDeg() : Double.NaN;
+        for (int i = 0; i < candidates.size(); i++) {
+            Candidate c = candidates.get(i);
+            ChosenFor choice = chosen.get(omegaTest ? i + 1 : i);
+            double omegaWith = c.gapKm <= farKm ? choice.choice().omegaMaxDeg() : Double.NaN;
             if (c.gapKm > farKm || omegaWith > omegaMain * (1 + OMEGA_GROWTH) + OMEGA_MARGIN_DEG) {
                 detached.add(new Group(keys(c.regions), area.apply(c.regions), c.gapKm, omegaWith));
+                if (c.gapKm > farKm) {
+                    automaticChoices.put(keys(c.regions), choice);
+                }
             } else {
                 stayed.addAll(c.regions);
             }
         }
         detached.sort(Comparator.comparingDouble(Group::areaKm2).reversed().thenComparing(g -> g.keys().get(0)));
-        Optional<ChosenFor> mainChoice = stayed.isEmpty() && !chosen.isEmpty() ? Optional.of(chosen.get(0)) : Optional.empty();
         List<Region> finalMain = inSourceOrder(regions, mainInOrder, stayed);
+        if (omegaTest && stayed.isEmpty()) {
+            automaticChoices.put(keys(finalMain), chosen.get(0));
+        }
         return new Result(new Group(keys(finalMain), area.apply(finalMain), 0, Double.NaN), detached, omegaMain,
-                linkKm, detachGapKm, mainChoice);
+                linkKm, detachGapKm, Map.copyOf(automaticChoices));
     }
 
     /** The regions of {@code all} that are in one of {@code subsets}, in the order of {@code all}. */

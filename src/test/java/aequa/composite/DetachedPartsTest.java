@@ -4,7 +4,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
 
@@ -66,18 +68,34 @@ class DetachedPartsTest {
         // main part's regions (in file order) gives: same family, parameters and largest omega
         RealRegions counties = RealRegions.read("us-counties-2017.geojson", "id");
         DetachedParts.Result found = DetachedParts.find(counties.regions(), counties.areaKm2ByKey());
-        assertTrue(found.mainChoice().isPresent(), "Alaska needed the omega test");
+        DetachedParts.ChosenFor made = found.automaticChoices().get(found.main().keys());
+        assertTrue(made != null, "Alaska needed the omega test");
         Set<String> main = Set.copyOf(found.main().keys());
         Footprint footprint = Footprint.of(counties.regions().stream().filter(r -> main.contains(r.key()))
                 .map(Region::lonLat).toList());
         ProjectionChoice fresh = ProjectionChooser.choose(footprint, ProjectionRequest.automatic());
-        ProjectionChoice reused = found.mainChoice().get().choice();
+        ProjectionChoice reused = made.choice();
         assertEquals(fresh.projection().wkt2(), reused.projection().wkt2());
         assertEquals(fresh.omegaMaxDeg(), reused.omegaMaxDeg(), 0.0);
         assertEquals(found.omegaMainDeg(), reused.omegaMaxDeg(), 0.0);
-        Footprint kept = found.mainChoice().get().footprint();
+        Footprint kept = made.footprint();
         assertEquals(footprint.sphericalCentreLonDeg(), kept.sphericalCentreLonDeg(), 0.0);
         assertEquals(footprint.angularRadiusDeg(), kept.angularRadiusDeg(), 0.0);
+        // the far parts' own choices, made side by side with the omega test, are each part's fresh choice too
+        Map<String, Region> byKey = new HashMap<>();
+        counties.regions().forEach(r -> byKey.put(r.key(), r));
+        int far = 0;
+        for (DetachedParts.Group part : found.detached()) {
+            DetachedParts.ChosenFor own = found.automaticChoices().get(part.keys());
+            if (Double.isNaN(part.omegaWithDeg())) {
+                far++;
+                ProjectionChoice alone = ProjectionChooser.choose(Footprint.of(part.keys().stream()
+                        .map(k -> byKey.get(k).lonLat()).toList()), ProjectionRequest.automatic());
+                assertEquals(alone.projection().wkt2(), own.choice().projection().wkt2(), part.keys().get(0));
+                assertEquals(alone.omegaMaxDeg(), own.choice().omegaMaxDeg(), 0.0);
+            }
+        }
+        assertEquals(4, far, "Hawaii, Puerto Rico with the Virgin Islands, Guam with the Marianas, American Samoa");
     }
 
     @Test
