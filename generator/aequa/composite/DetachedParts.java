@@ -79,7 +79,7 @@ final class DetachedParts {
      * @param detachGapKm    the gap of step 2
      * @param automaticChoices automatic projection choices already made, by the exact list of keys (in order)
      *                       they were made for: the main mass's (made for the omega test) when it is the main
-     *                       part, and each far part's own (made side by side with the omega test), so the
+     *                       part, and each detached part's own (made side by side with the omega test), so the
      *                       planner need not make them again
      */
     record Result(Group main, List<Group> detached, double omegaMainDeg, double linkKm, double detachGapKm,
@@ -146,16 +146,16 @@ final class DetachedParts {
 
         double farKm = FAR_RATIO * Math.sqrt(mainKm2);
         List<Region> mainInOrder = inSourceOrder(regions, mainMass);
-        // step 4's automatic choices (the main mass alone, then with each candidate that is not far) and the
-        // far candidates' own choices (they are parts whatever the omega test says) are independent: they are
+        // step 4's automatic choices (the main mass alone, and with each candidate that is not far) and every
+        // candidate's own choice (the part's projection should it be detached; a far one always is, a near one
+        // that stays costs one choice for a group far smaller than the main mass) are independent: they are
         // made side by side, and their results are read in this fixed order
         boolean omegaTest = !candidates.stream().allMatch(c -> c.gapKm > farKm);
         List<List<Region>> choices = new ArrayList<>();
-        if (omegaTest) {
-            choices.add(mainInOrder);
-        }
+        choices.add(omegaTest ? mainInOrder : List.of());
         for (Candidate c : candidates) {
-            choices.add(c.gapKm <= farKm ? inSourceOrder(regions, mainInOrder, c.regions) : c.regions);
+            choices.add(c.gapKm <= farKm ? inSourceOrder(regions, mainInOrder, c.regions) : List.of());
+            choices.add(c.regions);
         }
         List<ChosenFor> chosen = choices.parallelStream().map(DetachedParts::automaticChoice).toList();
         double omegaMain = omegaTest ? chosen.get(0).choice().omegaMaxDeg() : Double.NaN;
@@ -164,13 +164,10 @@ final class DetachedParts {
         List<Region> stayed = new ArrayList<>();
         for (int i = 0; i < candidates.size(); i++) {
             Candidate c = candidates.get(i);
-            ChosenFor choice = chosen.get(omegaTest ? i + 1 : i);
-            double omegaWith = c.gapKm <= farKm ? choice.choice().omegaMaxDeg() : Double.NaN;
+            double omegaWith = c.gapKm <= farKm ? chosen.get(2 * i + 1).choice().omegaMaxDeg() : Double.NaN;
             if (c.gapKm > farKm || omegaWith > omegaMain * (1 + OMEGA_GROWTH) + OMEGA_MARGIN_DEG) {
                 detached.add(new Group(keys(c.regions), area.apply(c.regions), c.gapKm, omegaWith));
-                if (c.gapKm > farKm) {
-                    automaticChoices.put(keys(c.regions), choice);
-                }
+                automaticChoices.put(keys(c.regions), chosen.get(2 * i + 2));
             } else {
                 stayed.addAll(c.regions);
             }
@@ -217,8 +214,11 @@ final class DetachedParts {
         }
     }
 
-    /** The automatic projection choice for the regions, as the main map would get it. */
+    /** The automatic projection choice for the regions, as the main map would get it; null for no regions (no choice asked). */
     private static ChosenFor automaticChoice(List<Region> regions) {
+        if (regions.isEmpty()) {
+            return null;
+        }
         Footprint footprint = Footprint.of(regions.stream().map(Region::lonLat).toList());
         return new ChosenFor(footprint, ProjectionChooser.choose(footprint, ProjectionRequest.automatic()));
     }
