@@ -49,7 +49,12 @@ final class ExplainCommand implements Callable<Integer> {
     public Integer call() throws JsonProcessingException {
         var err = spec.commandLine().getErr();
         if (!Files.isRegularFile(file)) {
-            err.println("aequa: " + file + " is not a file. Name a GeoJSON or GeoPackage file of regions.");
+            err.println("aequa: " + file + " is not a file. Name a file of regions: " + RegionSourceSpec.FILE_TYPES_IN_WORDS + ".");
+            return ExitCode.USAGE.code;
+        }
+        if (!RegionSourceSpec.isGeometryFile(file.getFileName().toString())) {
+            err.println("aequa: " + file + " is not a file type aequa reads regions from. Name a "
+                    + RegionSourceSpec.FILE_TYPES_IN_WORDS + " file.");
             return ExitCode.USAGE.code;
         }
         Path absolute = file.toAbsolutePath().normalize();

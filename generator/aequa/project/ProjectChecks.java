@@ -51,7 +51,7 @@ final class ProjectChecks {
     }
 
     private void checkRegionSource(String at, RegionSourceSpec source) {
-        checkFile(at, source.file(), List.of(".geojson", ".json", ".topojson", ".gpkg", ".shp", ".zip"));
+        checkFile(at, source.file(), RegionSourceSpec.FILE_TYPES);
         onlyFor(at + "/layer", source.layer(), source.file(), List.of(".gpkg", ".zip"), "layer",
                 "a GeoPackage layer, or a Shapefile inside a zip");
         onlyFor(at + "/object", source.object(), source.file(), List.of(".topojson", ".json"), "object",

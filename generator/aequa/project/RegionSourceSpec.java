@@ -1,5 +1,8 @@
 package aequa.project;
 
+import java.util.List;
+import java.util.Locale;
+
 /**
  * A geometry source: polygons of regions.
  *
@@ -17,6 +20,17 @@ package aequa.project;
 public record RegionSourceSpec(String file, String key, String name, String layer, String object, InsetsSpec insets) {
 
     public static final String FEATURE_ID = "@id";
+    /** Every file name ending a geometry source may have, lower case: the one list the checks, explain and the readers share. */
+    public static final List<String> FILE_TYPES = List.of(".geojson", ".json", ".topojson", ".gpkg", ".shp", ".zip");
+    /** The file types of {@link #FILE_TYPES} in words, for messages. */
+    public static final String FILE_TYPES_IN_WORDS = "GeoJSON (.geojson, .json), TopoJSON (.topojson, or .json with an"
+            + " 'object'), GeoPackage (.gpkg) or Shapefile (.shp, or a .zip holding one)";
+
+    /** True when {@code fileName} ends in one of {@link #FILE_TYPES}, in any letter case. */
+    public static boolean isGeometryFile(String fileName) {
+        String lower = fileName.toLowerCase(Locale.ROOT);
+        return FILE_TYPES.stream().anyMatch(lower::endsWith);
+    }
 
     public RegionSourceSpec {
         key = key == null ? FEATURE_ID : key;

@@ -1,5 +1,6 @@
 package aequa.inputs.regions;
 
+import java.io.CharConversionException;
 import java.io.IOException;
 import java.io.InputStream;
 import java.util.ArrayList;
@@ -76,6 +77,10 @@ final class GeoJsonRegionReader {
             findings.add(Finding.error("geojson-malformed", file, location(e),
                     "The file is not valid JSON: " + Excerpt.quotedParts(e.getOriginalMessage().split("\n", 2)[0]) + ".",
                     "Check the file where shown; it may be truncated or hand-edited."));
+        } catch (CharConversionException e) {
+            findings.add(Finding.error("file-unreadable", file, "feature " + (featureCount + 1),
+                    "The file's bytes are not Unicode text in the encoding its first bytes announce: " + e.getMessage() + ".",
+                    "Save the file again as UTF-8 text (RFC 8259, section 8.1: JSON exchanged between systems is UTF-8)."));
         } catch (IOException e) {
             findings.add(Finding.error("file-unreadable", file, "", "The file could not be read: " + e.getMessage() + ".",
                     "Check that the file exists and is readable."));

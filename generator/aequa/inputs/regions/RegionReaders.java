@@ -22,9 +22,9 @@ import aequa.project.RegionSourceSpec;
  * file are added to {@code findings}; this never throws for bad data. The regions are as read: rings are
  * closed but otherwise unchecked; pass them to {@code aequa.ellipsoid.RegionValidator} next.
  *
- * <p>A project's files have passed the project file's checks (a file that exists, of a type read here, each
- * problem reported with its line); {@code aequa explain} hands over any file a user names, so a file of
- * another type is reported here ({@code file-type-unknown}); one that cannot be opened, {@code file-unreadable}.
+ * <p>Every caller checks the file's type against {@link RegionSourceSpec#FILE_TYPES} first (a project's checks
+ * report another type with its line, {@code aequa explain} refuses it as a usage error), so a file of another
+ * type here is a programming error. A file that cannot be opened or decoded is reported ({@code file-unreadable}).
  */
 public final class RegionReaders {
 
@@ -99,11 +99,8 @@ public final class RegionReaders {
                 return unreadable(file, e, findings);
             }
         }
-        findings.add(Finding.error("file-type-unknown", file, "",
-                "aequa reads region geometry from GeoJSON (.geojson, .json), TopoJSON (.topojson, or .json with an 'object'),"
-                        + " GeoPackage (.gpkg) or Shapefile (.shp, or a .zip holding one) files.",
-                "Convert the file to one of these formats."));
-        return RegionSource.of(List.of());
+        throw new IllegalArgumentException(file + " is not one of " + RegionSourceSpec.FILE_TYPES
+                + ": the project's checks and explain refuse it before reading");
     }
 
     private static RegionSource unreadable(String file, IOException e, Findings findings) {

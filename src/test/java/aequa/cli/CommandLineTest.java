@@ -109,6 +109,9 @@ class CommandLineTest {
         assertTrue(json.path("wkt2").asText().startsWith("PROJCRS"));
         assertTrue(json.path("reason").asText().length() > 20);
         assertEquals(2, run("explain", tmp.resolve("missing.geojson").toString()));
+        // a file of a type no region reader reads is a usage error, like the project's checks refuse it
+        assertEquals(2, run("explain", project.resolve("figures/districts.csv").toString()));
+        assertTrue(err.toString().contains("is not a file type aequa reads regions from"), err.toString());
     }
 
     /** The US Census Bureau's 2017 states (src/test/resources/geometry/SOURCE.md): FIPS 02 is Alaska, 15 Hawaii. */

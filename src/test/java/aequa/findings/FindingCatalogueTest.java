@@ -20,22 +20,9 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Every finding code in the code base has a fixture project ({@code src/test/resources/aequa/fixtures},
- * run by {@code aequa.cli.FixtureProjectsTest}) that produces it, or stands in {@link #WITHOUT_FIXTURE}
- * with the reason. That list only shrinks: an entry whose code has gone, or has got a fixture, fails.
+ * run by {@code aequa.cli.FixtureProjectsTest}) that produces it, and every fixture names a code of the code base.
  */
 class FindingCatalogueTest {
-
-    /**
-     * Codes without a fixture yet, each with why and where else it is tested. Remove an entry when its
-     * fixture is added.
-     */
-    private static final Map<String, String> WITHOUT_FIXTURE = Map.ofEntries(
-            Map.entry("file-type-unknown",
-                    "the region readers' guard for `aequa explain`, which hands them any file a user names; a project's"
-                            + " checks report project-file-type first; GeoJsonRegionReaderTest names it"),
-            Map.entry("file-unreadable",
-                    "needs a file that passed the project's checks and then cannot be read (a disk error, or gone since),"
-                            + " which no fixture makes root-proof; GeoJsonRegionReaderTest names it"));
 
     /**
      * A code given to a finding: the first text argument (after at most two plain names) of
@@ -96,22 +83,10 @@ class FindingCatalogueTest {
     }
 
     @Test
-    void everyCodeHasAFixtureOrAReasonWhyNot() throws IOException, URISyntaxException {
-        Set<String> withFixture = new TreeSet<>(fixtureCodes().values());
+    void everyCodeHasAFixture() throws IOException, URISyntaxException {
         Set<String> missing = new TreeSet<>(codesInCode());
-        missing.removeAll(withFixture);
-        missing.removeAll(WITHOUT_FIXTURE.keySet());
-        assertEquals(Set.of(), missing, "codes without a fixture project and without a reason");
-    }
-
-    @Test
-    void theListWithoutFixturesOnlyShrinks() throws IOException, URISyntaxException {
-        Set<String> inCode = codesInCode();
-        Set<String> withFixture = new TreeSet<>(fixtureCodes().values());
-        for (String code : WITHOUT_FIXTURE.keySet()) {
-            assertTrue(inCode.contains(code), "no longer in the code, remove it from the list: " + code);
-            assertTrue(!withFixture.contains(code), "has a fixture now, remove it from the list: " + code);
-        }
+        missing.removeAll(fixtureCodes().values());
+        assertEquals(Set.of(), missing, "codes without a fixture project");
     }
 
     @Test

@@ -1,6 +1,7 @@
 package aequa.inputs.regions;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -206,11 +207,10 @@ class GeoJsonRegionReaderTest {
         Findings gone = new Findings();
         RegionReaders.read(dir, new RegionSourceSpec("nowhere.geojson", null, null, null), gone);
         assertEquals("file-unreadable", only(gone).code());
-        // `aequa explain` hands the reader any file a user names; a project's checks refuse such a type first
+        // a project's checks and `aequa explain` refuse another type before any reader sees it
         Files.writeString(dir.resolve("regions.csv"), "code,name\n");
-        Findings otherType = new Findings();
-        RegionReaders.read(dir, new RegionSourceSpec("regions.csv", null, null, null), otherType);
-        assertEquals("file-type-unknown", only(otherType).code());
+        assertThrows(IllegalArgumentException.class,
+                () -> RegionReaders.read(dir, new RegionSourceSpec("regions.csv", null, null, null), new Findings()));
     }
 
     private static Finding only(Findings findings) {
