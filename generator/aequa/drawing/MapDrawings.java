@@ -4,13 +4,8 @@ import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
 import java.awt.image.DataBufferInt;
-import java.io.ByteArrayOutputStream;
-import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
-
-import javax.imageio.ImageIO;
 
 import org.jfree.pdf.PDFDocument;
 import org.jfree.pdf.PDFHints;
@@ -93,7 +88,7 @@ public final class MapDrawings {
             throw new IllegalArgumentException("scale must be 1..4: " + scale);
         }
         Raster raster = raster(model, theme, widthPx, scale, options);
-        return drawn(DrawnMap.Format.PNG, encode(raster.image()), raster.layout(), "px", raster.canvas());
+        return drawn(DrawnMap.Format.PNG, PngEncoder.encode(raster.image()), raster.layout(), "px", raster.canvas());
     }
 
     /**
@@ -106,8 +101,8 @@ public final class MapDrawings {
      */
     public static List<DrawnMap> pngPair(MapModel model, Theme theme, int widthPx, DrawOptions options) {
         Raster raster = raster(model, theme, widthPx, 2, options);
-        DrawnMap single = drawn(DrawnMap.Format.PNG, encode(halved(raster.image())), raster.layout(), "px", raster.canvas());
-        DrawnMap twice = drawn(DrawnMap.Format.PNG, encode(raster.image()), raster.layout(), "px", raster.canvas());
+        DrawnMap single = drawn(DrawnMap.Format.PNG, PngEncoder.encode(halved(raster.image())), raster.layout(), "px", raster.canvas());
+        DrawnMap twice = drawn(DrawnMap.Format.PNG, PngEncoder.encode(raster.image()), raster.layout(), "px", raster.canvas());
         return List.of(single, twice);
     }
 
@@ -163,16 +158,6 @@ public final class MapDrawings {
             }
         }
         return half;
-    }
-
-    private static byte[] encode(BufferedImage image) {
-        try {
-            ByteArrayOutputStream out = new ByteArrayOutputStream();
-            ImageIO.write(image, "png", out);
-            return out.toByteArray();
-        } catch (IOException e) {
-            throw new UncheckedIOException("PNG encoding failed in memory", e);
-        }
     }
 
     /**

@@ -1,7 +1,6 @@
 package aequa.drawing;
 
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
+import java.util.List;
 
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.SVGUnits;
@@ -15,8 +14,13 @@ import org.jfree.svg.ViewBox;
  */
 final class SvgOutput {
 
-    /** JFreeSVG writes stroke widths and opacities from floats widened to double (0.0882000029...). */
-    private static final Pattern FLOAT_NOISE = Pattern.compile("(stroke-width:|fill-opacity:|stroke-opacity:)([0-9.Ee-]+)");
+    /**
+     * The style properties whose values JFreeSVG writes from floats widened to double (0.0882000029...),
+     * each followed by a number of the characters {@link #NUMBER_CHARS}.
+     */
+    private static final List<String> FLOAT_NOISE = List.of("stroke-width:", "fill-opacity:", "stroke-opacity:");
+    private static final String NUMBER_CHARS = "0123456789.Ee-";
+    private static final String PATH_DATA = " d='";
 
     private SvgOutput() {
     }
@@ -32,36 +36,79 @@ final class SvgOutput {
         return g;
     }
 
-    private static final Pattern PATH_DATA = Pattern.compile(" d='([^']*)'");
-
     /**
      * Rounds float noise in style values to 4 decimals, drops the default {@code stroke-opacity:1.0}, and
      * writes path data in the compact relative form ({@link PathCompactor}).
      *
+     * <p>Works by plain text search ({@link String#indexOf}), not regular expressions, which at the launcher's
+     * first-tier compilation took about 200 ms on the 1.5 MB of a 3,231-region map: the launcher stops at
+     * the first compiler (see the README's performance section).
+     *
      * @param decimals the decimals coordinates were written with
      */
     static String tidy(String svg, int decimals) {
+        String styled = tidyStyles(svg);
         PathCompactor compactor = new PathCompactor(decimals);
-        Matcher paths = PATH_DATA.matcher(tidyStyles(svg));
-        StringBuilder compact = new StringBuilder(svg.length());
-        while (paths.find()) {
-            paths.appendReplacement(compact, "");
-            compact.append(" d='").append(compactor.compact(paths.group(1))).append('\'');
+        StringBuilder compact = new StringBuilder(styled.length());
+        int copied = 0;
+        for (int at = styled.indexOf(PATH_DATA); at >= 0; at = styled.indexOf(PATH_DATA, copied)) {
+            int start = at + PATH_DATA.length();
+            int end = styled.indexOf('\'', start);
+            if (end < 0) {
+                break;
+            }
+            compact.append(styled, copied, start).append(compactor.compact(styled.substring(start, end))).append('\'');
+            copied = end + 1;
         }
-        paths.appendTail(compact);
+        compact.append(styled, copied, styled.length());
         return compact.toString();
     }
 
+    /** Each property of {@link #FLOAT_NOISE} followed by a number gets the number to 4 decimals; then the defaults go. */
     private static String tidyStyles(String svg) {
         FixedDecimal four = new FixedDecimal(4);
-        Matcher m = FLOAT_NOISE.matcher(svg);
         StringBuilder out = new StringBuilder(svg.length());
-        while (m.find()) {
-            String replacement = m.group(1) + four.apply(Double.parseDouble(m.group(2)));
-            m.appendReplacement(out, Matcher.quoteReplacement(replacement));
+        int[] next = new int[FLOAT_NOISE.size()];
+        for (int k = 0; k < next.length; k++) {
+            next[k] = nextNoise(svg, FLOAT_NOISE.get(k), 0);
         }
-        m.appendTail(out);
+        int copied = 0;
+        while (true) {
+            int first = -1;
+            for (int k = 0; k < next.length; k++) {
+                if (next[k] >= 0 && (first < 0 || next[k] < next[first])) {
+                    first = k;
+                }
+            }
+            if (first < 0) {
+                break;
+            }
+            int numberStart = next[first] + FLOAT_NOISE.get(first).length();
+            int numberEnd = numberStart;
+            while (numberEnd < svg.length() && NUMBER_CHARS.indexOf(svg.charAt(numberEnd)) >= 0) {
+                numberEnd++;
+            }
+            out.append(svg, copied, numberStart).append(four.apply(Double.parseDouble(svg.substring(numberStart, numberEnd))));
+            copied = numberEnd;
+            for (int k = 0; k < next.length; k++) {
+                if (next[k] >= 0 && next[k] < copied) {
+                    next[k] = nextNoise(svg, FLOAT_NOISE.get(k), copied);
+                }
+            }
+        }
+        out.append(svg, copied, svg.length());
         return out.toString().replace(";stroke-opacity:1;", ";").replace("stroke:none;", "").replace(";stroke:none'", "'");
+    }
+
+    /** Where {@code property} next appears from {@code from} followed by at least one number character, or -1. */
+    private static int nextNoise(String svg, String property, int from) {
+        for (int at = svg.indexOf(property, from); at >= 0; at = svg.indexOf(property, at + 1)) {
+            int after = at + property.length();
+            if (after < svg.length() && NUMBER_CHARS.indexOf(svg.charAt(after)) >= 0) {
+                return at;
+            }
+        }
+        return -1;
     }
 
     /**

@@ -11,15 +11,21 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
-import java.security.DigestOutputStream;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
-import java.util.Arrays;
 import java.util.Optional;
+import java.util.zip.CRC32C;
+import java.util.zip.CheckedOutputStream;
 
 /**
  * One file of the {@link CacheFolder}: a header naming its kind and format version, a payload, and a
- * trailer holding the SHA-256 (FIPS 180-4) of everything before it.
+ * trailer holding the CRC-32C (Castagnoli polynomial, as RFC 3720 defines it for iSCSI) of everything before
+ * it, four bytes, most significant first.
+ *
+ * <p>The trailer guards against damage only (a truncated write, a flipped bit, a file from elsewhere), not
+ * against a forged file: whoever can write the cache folder can write the project's inputs too. A CRC finds
+ * every burst error up to 32 bits and misses other damage with a probability of 2^-32; the JVM computes it
+ * with the processor's CRC instructions, so checking a cache of several megabytes costs about a millisecond,
+ * where SHA-256 cost about a hundred at the launcher's first-tier compilation. Keys that must not collide
+ * (what an entry was made from) are named by SHA-256 elsewhere ({@code aequa.atlas.GeometryCache}).
  *
  * <p>Guarantees: a file is written to a temporary name and renamed into place, so a reader sees a whole
  * file or the previous one; {@link #read} returns a payload only when the checksum matches and the kind and
@@ -40,7 +46,7 @@ public final class CacheFile {
         T read(DataInputStream in) throws IOException;
     }
 
-    private static final int SHA256_BYTES = 32;
+    private static final int TRAILER_BYTES = 4;
     private static final String MAGIC = "aequa-cache";
 
     private CacheFile() {
@@ -52,16 +58,16 @@ public final class CacheFile {
         try {
             Files.createDirectories(file.getParent());
             temp = Files.createTempFile(file.getParent(), file.getFileName() + ".", ".tmp");
-            MessageDigest sha = sha256();
+            CRC32C crc = new CRC32C();
             try (OutputStream raw = Files.newOutputStream(temp);
                  BufferedOutputStream buffered = new BufferedOutputStream(raw, 1 << 16)) {
-                DataOutputStream out = new DataOutputStream(new DigestOutputStream(buffered, sha));
+                DataOutputStream out = new DataOutputStream(new BufferedOutputStream(new CheckedOutputStream(buffered, crc), 1 << 16));
                 out.writeUTF(MAGIC);
                 out.writeUTF(kind);
                 out.writeInt(version);
                 payload.write(out);
                 out.flush();
-                buffered.write(sha.digest());
+                new DataOutputStream(buffered).writeInt((int) crc.getValue());
             }
             Files.move(temp, file, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             return true;
@@ -75,7 +81,7 @@ public final class CacheFile {
     public static <T> Optional<T> read(Path file, String kind, int version, PayloadReader<T> payload) {
         try {
             long size = Files.size(file);
-            if (size < SHA256_BYTES || !checksumMatches(file, size)) {
+            if (size < TRAILER_BYTES || !checksumMatches(file, size)) {
                 return Optional.empty();
             }
             try (InputStream raw = Files.newInputStream(file)) {
@@ -106,29 +112,20 @@ public final class CacheFile {
     }
 
     private static boolean checksumMatches(Path file, long size) throws IOException {
-        MessageDigest sha = sha256();
-        byte[] trailer;
+        CRC32C crc = new CRC32C();
         try (InputStream in = Files.newInputStream(file)) {
             byte[] buffer = new byte[1 << 20];
-            long left = size - SHA256_BYTES;
+            long left = size - TRAILER_BYTES;
             while (left > 0) {
                 int n = in.read(buffer, 0, (int) Math.min(buffer.length, left));
                 if (n < 0) {
                     return false;
                 }
-                sha.update(buffer, 0, n);
+                crc.update(buffer, 0, n);
                 left -= n;
             }
-            trailer = in.readNBytes(SHA256_BYTES);
-        }
-        return Arrays.equals(trailer, sha.digest());
-    }
-
-    private static MessageDigest sha256() {
-        try {
-            return MessageDigest.getInstance("SHA-256"); // every Java SE platform must provide it
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("this Java has no SHA-256", e);
+            DataInputStream trailer = new DataInputStream(in);
+            return trailer.readInt() == (int) crc.getValue();
         }
     }
 

@@ -1,33 +1,25 @@
 package aequa.publish;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import java.util.stream.IntStream;
 import java.util.stream.Stream;
 
-import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.node.ArrayNode;
 
 import aequa.atlas.Atlas;
 import aequa.atlas.MapModel;
 import aequa.findings.Finding;
-import aequa.pages.EmbedView;
-import aequa.pages.MapPageView;
 import aequa.pages.PageRenderer;
-import aequa.pages.SiteView;
 import aequa.publish.PublishProgress.Stage;
-import aequa.wording.Wording;
 
 /** One run of {@link SitePublisher#publish}: holds the state of a single build; used once, under the lock. */
 final class SiteBuild {
@@ -94,65 +86,73 @@ final class SiteBuild {
             for (int i = 0; i < count; i++) {
                 edition.add(fileIds.get(i)).add(fingerprints.get(i));
             }
-            int steps = count * languages.size();
+            String digest = edition.hex();
+            String pagesHash = new Sha256().add(siteHash).add(digest).add(CanonicalBytes.of(findings)).hex();
+            List<String> sitePages = new ArrayList<>(List.of(SiteReport.FILE_NAME));
+            languages.forEach(language -> sitePages.addAll(language.sitePages()));
             // each edition: the maps' and the site's own words in its language; fingerprints come from the whole
             // project file, translations included, so a changed translation redraws
             List<Atlas> editions = languages.stream().map(language -> atlas.inLanguage(language.wording())).toList();
+            // the report and site pages depend on no drawing: made beside the first maps when they changed
+            SitePages site = reusable(sitePages, pagesHash) ? null
+                    : new SitePages(atlas, editions, languages, fileIds, findings, digest, renderer, out, json);
+            Runnable siteJob = site == null ? null : site::make;
+            int steps = count * languages.size();
             for (int l = 0; l < languages.size(); l++) {
                 SiteLanguage language = languages.get(l);
                 Atlas inLanguage = editions.get(l);
-                SiteView site = SiteViews.site(inLanguage.project().site(), language, languages);
                 MapArtwork artwork = this.artwork.inLanguage(language.wording());
+                MapBuild.Makers makers = new MapBuild.Makers(artwork, options.pngWidthPx(), renderer,
+                        SiteViews.site(inLanguage.project().site(), language, languages), out);
                 List<MapFiles> files = fileIds.stream().map(id -> MapFiles.of(language.prefix(), id)).toList();
-                List<String> drawHashes = fingerprints.stream().map(f -> drawHash(f, artwork)).toList();
-                int atOnce = MapPictures.mapsAtOnce();
+                int atOnce = ParallelJobs.threads();
                 for (int first = 0; first < count; first += atOnce) {
-                    // the maps of a batch are drawn at the same time; their files are written one map after another
-                    List<Optional<MapPictures>> pictures = IntStream.range(first, Math.min(count, first + atOnce)).parallel()
-                            .mapToObj(i -> reusable(files.get(i).drawn(), drawHashes.get(i)) ? Optional.<MapPictures>empty()
-                                    : Optional.of(MapPictures.draw(artwork, inLanguage.maps().get(i), options.pngWidthPx())))
-                            .toList();
+                    // the maps of a batch are made at the same time; their files are written one map after another
+                    List<MapBuild> batch = new ArrayList<>();
+                    for (int i = first; i < Math.min(count, first + atOnce); i++) {
+                        String drawHash = drawHash(fingerprints.get(i), artwork);
+                        String pageHash = new Sha256().add(drawHash).add(siteHash).hex();
+                        MapFiles mapFiles = files.get(i);
+                        batch.add(new MapBuild(inLanguage.maps().get(i), mapFiles, drawHash, pageHash,
+                                !reusable(mapFiles.drawn(), drawHash), !reusable(mapFiles.written(), pageHash), makers));
+                    }
+                    List<Runnable> jobs = new ArrayList<>();
+                    for (MapBuild.Job job : MapBuild.Job.values()) {
+                        batch.forEach(map -> map.job(job).ifPresent(jobs::add));
+                    }
+                    if (siteJob != null) {
+                        jobs.add(siteJob);
+                        siteJob = null;
+                    }
+                    ParallelJobs.runAll(jobs);
                     for (int i = first; i < Math.min(count, first + atOnce); i++) {
                         progress.step(Stage.MAPS, l * count + i, steps);
-                        buildMap(inLanguage.maps().get(i), drawHashes.get(i), pictures.get(i - first), files.get(i),
-                                renderer, site, siteHash);
+                        MapBuild map = batch.get(i - first);
+                        if (language.prefix().isEmpty()) { // counted once: every language draws the same maps
+                            (map.draws() ? mapsDrawn : mapsReused).add(atlas.maps().get(i).id());
+                        }
+                        map.writeTo(mapOutput);
                     }
                 }
             }
             progress.step(Stage.MAPS, steps, steps);
 
             progress.step(Stage.REPORT, 0, 1);
-            String digest = edition.hex();
-            String pagesHash = new Sha256().add(siteHash).add(digest).add(CanonicalBytes.of(findings)).hex();
-            List<String> sitePages = new ArrayList<>(List.of(SiteReport.FILE_NAME));
-            languages.forEach(language -> sitePages.addAll(language.sitePages()));
             int changedMaps;
-            if (reusable(sitePages, pagesHash)) {
+            if (site == null) {
                 sitePages.forEach(path -> carryOver(path, pagesHash));
                 changedMaps = -1;
-                progress.step(Stage.REPORT, 1, 1);
             } else {
-                List<MapFiles> rootFiles = fileIds.stream().map(MapFiles::of).toList();
-                ArrayNode maps = SiteReport.maps(atlas, rootFiles, json);
-                Optional<JsonNode> previousReport = SiteReport.readPrevious(out, json);
-                JsonNode changes = EditionChanges.compare(previousReport, maps, digest, json);
-                changedMaps = changes.path("maps").size();
-                put(SiteReport.FILE_NAME, SiteReport.write(atlas, maps, digest, findings, changes, json), pagesHash);
-                progress.step(Stage.REPORT, 1, 1);
-                progress.step(Stage.PAGES, 0, 1);
-                for (int l = 0; l < languages.size(); l++) {
-                    SiteLanguage language = languages.get(l);
-                    Atlas inLanguage = editions.get(l);
-                    SiteView site = SiteViews.site(inLanguage.project().site(), language, languages);
-                    Wording wording = language.wording();
-                    // links from a language's site pages to its map pages are relative to that language's root
-                    List<MapFiles> files = fileIds.stream().map(MapFiles::of).toList();
-                    String p = language.prefix();
-                    put(p + "index.html", utf8(renderer.renderIndex(site, SiteViews.index(inLanguage, files, wording))), pagesHash);
-                    put(p + "method.html", utf8(renderer.renderMethod(site, SiteViews.method(inLanguage, files, wording))), pagesHash);
-                    put(p + "changes.html", utf8(renderer.renderChanges(site, SiteViews.changes(changes, ids, files, wording))), pagesHash);
+                if (siteJob != null) {
+                    siteJob.run(); // a site without maps
                 }
+                for (MadeFile file : site.files()) {
+                    put(file, pagesHash);
+                }
+                changedMaps = site.changedMaps();
             }
+            progress.step(Stage.REPORT, 1, 1);
+            progress.step(Stage.PAGES, 0, 1);
             for (String asset : PageRenderer.ASSET_NAMES) {
                 put(asset, sources.get(asset), siteHash);
             }
@@ -184,49 +184,6 @@ final class SiteBuild {
         return new Sha256().add(fingerprint).add(artwork.fingerprint()).add(Integer.toString(options.pngWidthPx())).hex();
     }
 
-    private void buildMap(MapModel map, String drawHash, Optional<MapPictures> drawn, MapFiles files,
-                          PageRenderer renderer, SiteView site, String siteHash) throws IOException {
-        String pageHash = new Sha256().add(drawHash).add(siteHash).hex();
-        String webSvg = null;
-        if (drawn.isEmpty()) {
-            files.drawn().forEach(path -> carryOver(path, drawHash));
-            if (files.languagePrefix().isEmpty()) {
-                mapsReused.add(map.id()); // counted once, in the first language: every language draws the same maps
-            }
-        } else {
-            MapPictures pictures = drawn.get();
-            webSvg = pictures.webSvg();
-            if (webSvg.toLowerCase(Locale.ROOT).contains("<script")) {
-                throw new IllegalStateException("the web SVG of map " + map.id() + " contains a script; refusing to inline it");
-            }
-            write(files.webSvg(), utf8(webSvg), drawHash);
-            write(files.printSvg(), pictures.printSvg(), drawHash);
-            write(files.pdf(), pictures.pdf(), drawHash);
-            write(files.png(), pictures.png(), drawHash);
-            write(files.pngDouble(), pictures.pngDouble(), drawHash);
-            if (files.languagePrefix().isEmpty()) {
-                mapsDrawn.add(map.id());
-            }
-        }
-        if (reusable(files.written(), pageHash)) {
-            files.written().forEach(path -> carryOver(path, pageHash));
-            return;
-        }
-        if (webSvg == null) {
-            webSvg = Files.readString(out.resolve(files.webSvg()), StandardCharsets.UTF_8);
-        }
-        String prefix = files.languagePrefix();
-        MapPageView page = MapViews.page(map, files, webSvg, site.wording());
-        EmbedView embed = MapViews.embed(map, files, webSvg);
-        write(files.page(), utf8(renderer.renderMap(site, page, files.page().substring(prefix.length()), embed)), pageHash);
-        write(files.embed(), utf8(renderer.renderEmbed(site, page, files.embed().substring(prefix.length()), embed)), pageHash);
-        write(files.fragment(), utf8(renderer.renderFragment(site, page, files.fragment().substring(prefix.length()), embed,
-                FragmentSvg.of(webSvg))), pageHash);
-        write(files.figures(), utf8(renderer.renderFigures(site, MapViews.figures(map, files, site.wording()),
-                files.figures().substring(prefix.length()))), pageHash);
-        write(files.csv(), FiguresCsv.write(map), pageHash);
-    }
-
     /** True when every file is recorded with {@code inputs} and is still on disk with the recorded bytes. */
     private boolean reusable(List<String> paths, String inputs) {
         return paths.stream().allMatch(path -> previous.get(path)
@@ -250,7 +207,12 @@ final class SiteBuild {
 
     /** Writes a file made in this build, or carries the previous one over when its bytes are the same. */
     private void put(String path, byte[] bytes, String inputs) throws IOException {
-        String content = Sha256.of(bytes);
+        put(MadeFile.of(path, bytes), inputs);
+    }
+
+    private void put(MadeFile file, String inputs) throws IOException {
+        String path = file.path();
+        String content = file.sha256();
         Optional<OutputManifest.Entry> before = previous.get(path);
         if (before.isPresent() && before.get().content().equals(content) && onDiskMatches(path, content)) {
             staging.reuse(path);
@@ -262,14 +224,27 @@ final class SiteBuild {
             }
             return;
         }
-        write(path, bytes, inputs);
+        write(file, inputs);
     }
 
-    private void write(String path, byte[] bytes, String inputs) throws IOException {
-        staging.write(path, bytes);
-        next.put(path, new OutputManifest.Entry(inputs, Sha256.of(bytes)));
+    private void write(MadeFile file, String inputs) throws IOException {
+        staging.write(file.path(), file.bytes());
+        next.put(file.path(), new OutputManifest.Entry(inputs, file.sha256()));
         written++;
     }
+
+    /** A map's files go through the same bookkeeping as the site's. */
+    private final MapBuild.Output mapOutput = new MapBuild.Output() {
+        @Override
+        public void write(MadeFile file, String inputs) throws IOException {
+            SiteBuild.this.write(file, inputs);
+        }
+
+        @Override
+        public void carryOver(String path, String inputs) {
+            SiteBuild.this.carryOver(path, inputs);
+        }
+    };
 
     private void carryOver(String path, String inputs) {
         try {
@@ -305,7 +280,4 @@ final class SiteBuild {
         }
     }
 
-    private static byte[] utf8(String text) {
-        return text.getBytes(StandardCharsets.UTF_8);
-    }
 }
