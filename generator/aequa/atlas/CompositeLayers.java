@@ -62,8 +62,13 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
             // the same frames in every language: room for the longest label the site's languages give
             double nameWidthM = 0;
             double twoLineWidthM = 0;
+            double longestWordWidthM = 0;
             for (aequa.wording.Wording w : languages) {
-                double oneLine = PartLayout.nameWidthM(MapPart.frameLabel(plan.name(), plan.areaScale(), w), mainExtent);
+                String label = MapPart.frameLabel(plan.name(), plan.areaScale(), w);
+                double oneLine = PartLayout.nameWidthM(label, mainExtent);
+                for (String word : label.split(" ")) {
+                    longestWordWidthM = Math.max(longestWordWidthM, PartLayout.nameWidthM(word, mainExtent));
+                }
                 List<String> lines = MapPart.frameLabelLines(plan.name(), plan.areaScale(), w);
                 double twoLines = lines.isEmpty() ? PartLayout.TWO_LINE_WIDTH * oneLine
                         : lines.stream().mapToDouble(line -> PartLayout.nameWidthM(line, mainExtent)).max().orElse(0);
@@ -71,7 +76,7 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
                 twoLineWidthM = Math.max(twoLineWidthM, twoLines);
             }
             insets.add(new PartLayout.Inset(extent(planar.get(i).simplifiedM().values()), nameWidthM, twoLineWidthM,
-                    plan.corner(), plan.areaScale() != 1));
+                    longestWordWidthM, plan.corner(), plan.areaScale() != 1));
         }
         List<PartLayout.Placement> placements = PartLayout.place(List.copyOf(planar.get(0).simplifiedM().values()), insets,
                 frameNameBandShare);

@@ -25,7 +25,7 @@ import aequa.wording.Wording;
  * @param gapKm      its geodesic gap to the main part when the parts were found automatically, else NaN
  * @param frame      its frame (for the main part, the extent of its regions)
  * @param nameBandM  the height of the name band at the top of the frame (0 for the main part)
- * @param nameLines  the lines the name band holds: 1, or 2 for a long name (0 for the main part)
+ * @param nameLines  the lines the name band holds: 1, or up to {@code PartLayout.MAX_NAME_LINES} for a long name (0 for the main part)
  * @param scaleBandM the height of the band at the bottom of the frame that holds the part's own area-scale
  *                   square (0 unless the part is drawn at another area scale than the main part)
  */

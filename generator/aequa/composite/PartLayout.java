@@ -14,8 +14,8 @@ import org.locationtech.jts.index.strtree.STRtree;
  * Places the framed parts of a composite map around its main part, on the main part's plane (metres).
  *
  * <p>Each part's frame holds its regions with a margin, and a band at the top for its name: one line, or two
- * when the name is wider than the regions and than {@value #NAME_WRAP_SHARE} of the main part's larger side
- * (then the frame is as wide as the longer half of the name, not the whole). A part drawn at another area
+ * or three when the name is wider than the regions and than {@value #NAME_WRAP_SHARE} of the main part's larger
+ * side (then the frame is as wide as the longest line, not the whole name). A part drawn at another area
  * scale than the main part also has a band at the bottom for its own area-scale square. Parts are placed
  * one by one, largest first. The candidate places for a frame line it up with an edge of the main part's
  * extent, of the map so far, or of a frame already placed, inside or just outside them; a place is allowed
@@ -34,10 +34,16 @@ public final class PartLayout {
     static final double MARGIN_SHARE = 0.012;
     static final double GAP_SHARE = 0.02;
     static final double NAME_BAND_SHARE = 0.04;
-    /** A name wider than this share of the main part's larger side (and than its regions) takes two lines (by eye). */
+    /**
+     * A name wider than this share of the main part's larger side (and than its regions) takes more lines, up to
+     * {@value #MAX_NAME_LINES}, rather than widening its frame (by eye).
+     */
     static final double NAME_WRAP_SHARE = 0.3;
-    /** The name band of a two-line name, in name bands, and the width of its longer line, in names (by eye: words break unevenly). */
-    static final double TWO_LINE_BAND = 1.7;
+    /** The most lines a frame's name takes: a long name on a narrow print wraps instead of widening its frame. */
+    public static final int MAX_NAME_LINES = 3;
+    /** Each line of a name after the first adds this much of a one-line name band (by eye: 1.7 bands for two lines). */
+    static final double EXTRA_LINE_BAND = 0.7;
+    /** The width of the longer line of a two-line name, in names (by eye: words break unevenly). */
     public static final double TWO_LINE_WIDTH = 0.6;
     /** The area-scale band of a part at its own area scale, as a share of the main part's larger side (by eye). */
     static final double SCALE_BAND_SHARE = 0.05;
@@ -59,15 +65,49 @@ public final class PartLayout {
      * @param contentM    the envelope of its regions on its own plane, metres (after its area scale)
      * @param nameWidthM  how wide its name is, in the same metres, when drawn in the name band
      * @param twoLineWidthM how wide its longer line is when the name takes two lines
+     * @param longestWordWidthM how wide its longest word is: no line of the name is narrower
      * @param corner      {@code top-left}, {@code top-right}, {@code bottom-left}, {@code bottom-right} or empty
      * @param ownScale    whether the part is drawn at another area scale than the main part (it then gets an
      *                    area-scale band)
      */
-    public record Inset(Envelope contentM, double nameWidthM, double twoLineWidthM, String corner, boolean ownScale) {
+    public record Inset(Envelope contentM, double nameWidthM, double twoLineWidthM, double longestWordWidthM, String corner,
+                        boolean ownScale) {
 
-        /** A part whose name breaks where the drawing finds room: its longer line is taken as {@value #TWO_LINE_WIDTH} of it. */
+        /**
+         * A part whose name breaks where the drawing finds room: its longer line of two is taken as
+         * {@value #TWO_LINE_WIDTH} of it, and its words as short as need be.
+         */
         public Inset(Envelope contentM, double nameWidthM, String corner, boolean ownScale) {
-            this(contentM, nameWidthM, TWO_LINE_WIDTH * nameWidthM, corner, ownScale);
+            this(contentM, nameWidthM, TWO_LINE_WIDTH * nameWidthM, 0, corner, ownScale);
+        }
+
+        /**
+         * How wide the longest line is when the name takes {@code lines} lines: three or more lines share the name
+         * as unevenly as two do ({@value #TWO_LINE_WIDTH} of it over two), and are never wider than two.
+         */
+        double widthInLinesM(int lines) {
+            return switch (lines) {
+                case 1 -> nameWidthM;
+                case 2 -> Math.max(longestWordWidthM, twoLineWidthM);
+                default -> Math.max(longestWordWidthM, Math.min(twoLineWidthM, TWO_LINE_WIDTH * 2 / lines * nameWidthM));
+            };
+        }
+
+        /**
+         * The fewest lines (1 to {@value #MAX_NAME_LINES}) whose longest line, {@code growth} times its own width,
+         * fits {@code roomM}; when none does, the narrowest, in the fewest lines that make it.
+         */
+        int linesFor(double growth, double roomM) {
+            int narrowest = 1;
+            for (int lines = 1; lines <= MAX_NAME_LINES; lines++) {
+                if (growth * widthInLinesM(lines) <= roomM) {
+                    return lines;
+                }
+                if (widthInLinesM(lines) < widthInLinesM(narrowest)) {
+                    narrowest = lines;
+                }
+            }
+            return narrowest;
         }
     }
 
@@ -75,7 +115,7 @@ public final class PartLayout {
      * Where a part goes: add ({@code dxM}, {@code dyM}) to its coordinates to draw it in {@code frameM}.
      *
      * @param nameBandM  the height of the name band at the top of the frame
-     * @param nameLines  how many lines the name band holds (1 or 2)
+     * @param nameLines  how many lines the name band holds (1 to {@value #MAX_NAME_LINES})
      * @param scaleBandM the height of the area-scale band at the bottom of the frame (0 when the part is at the
      *                   main part's area scale)
      */
@@ -143,9 +183,9 @@ public final class PartLayout {
         for (Inset inset : insets) {
             Envelope c = inset.contentM();
             double contentW = c.getWidth() + 2 * margin;
-            boolean twoLines = growth * inset.nameWidthM() + 2 * margin > Math.max(contentW, NAME_WRAP_SHARE * side);
-            double nameW = growth * (twoLines ? inset.twoLineWidthM() : inset.nameWidthM()) + 2 * margin;
-            double nameBand = twoLines ? TWO_LINE_BAND * band : band;
+            int lines = inset.linesFor(growth, Math.max(contentW, NAME_WRAP_SHARE * side) - 2 * margin);
+            double nameW = growth * inset.widthInLinesM(lines) + 2 * margin;
+            double nameBand = band * (1 + EXTRA_LINE_BAND * (lines - 1));
             double scaleBand = inset.ownScale() ? SCALE_BAND_SHARE * side * growth : 0;
             double scaleW = inset.ownScale() ? scaleBand + SCALE_LABEL_CHARS * NAME_CHAR_SHARE * band + 2 * margin : 0;
             double w = Math.max(contentW, Math.max(nameW, scaleW));
@@ -156,7 +196,7 @@ public final class PartLayout {
             whole.expandToInclude(best);
             double dx = best.getMinX() + (best.getWidth() - c.getWidth()) / 2 - c.getMinX();
             double dy = best.getMinY() + scaleBand + margin - c.getMinY();
-            placements.add(new Placement(dx, dy, best, nameBand, twoLines ? 2 : 1, scaleBand));
+            placements.add(new Placement(dx, dy, best, nameBand, lines, scaleBand));
         }
         return placements;
     }

@@ -94,7 +94,10 @@ final class PartFrames {
         }
     }
 
-    /** The name in its band: one line, or two when the layout made room for two and one does not fit. */
+    /**
+     * The name in its band: one line, or as many as the layout made room for when one does not fit (a scaled
+     * part's name and its scale note break between the two first, and each breaks again where needed).
+     */
     private static void paintName(Canvas canvas, Theme theme, MapPart part, Wording wording, double x, double y, double w, double bandU) {
         Typesetter type = canvas.type();
         String label = part.frameLabel(wording);
@@ -104,9 +107,12 @@ final class PartFrames {
         double size = Math.min(legend, legend * NAME_CAP_SHARE * (lines == 1 ? bandU : lineBandU * 1.15) / type.capHeight(legend));
         double room = w - lineBandU * 0.6;
         List<String> text = List.of(label);
-        if (type.width(label, size, false) > room && lines == 2) {
-            List<String> wrapped = part.frameLabelLines(wording).isEmpty() ? type.wrap(label, size, false, room) : part.frameLabelLines(wording);
-            text = wrapped.size() <= 2 ? wrapped : List.of(label);
+        if (type.width(label, size, false) > room && lines > 1) {
+            List<String> given = part.frameLabelLines(wording);
+            List<String> wrapped = given.isEmpty() ? type.wrap(label, size, false, room)
+                    : given.size() == lines ? given
+                    : given.stream().flatMap(line -> type.wrap(line, size, false, room).stream()).toList();
+            text = wrapped.size() <= lines ? wrapped : List.of(label);
         }
         double widest = text.stream().mapToDouble(t -> type.width(t, size, false)).max().orElse(0);
         double fitted = widest > room ? size * room / widest : size;
@@ -115,7 +121,7 @@ final class PartFrames {
         double lineU = text.size() == 1 ? bandU : type.lineHeight(fitted);
         double baseline = text.size() == 1
                 ? y + Math.max((bandU + type.capHeight(fitted)) / 2, bandU * 0.3 + type.capHeight(fitted))
-                : y + (bandU - lineU * 2) / 2 + (lineU + type.capHeight(fitted)) / 2;
+                : y + (bandU - lineU * text.size()) / 2 + (lineU + type.capHeight(fitted)) / 2;
         for (String line : text) {
             canvas.text(line, x + lineBandU * 0.3, baseline, fitted, false, Canvas.Anchor.START,
                     theme.colours().text(), theme.colours().background());
