@@ -18,11 +18,12 @@ import aequa.projection.Footprint;
 
 /**
  * The planar layers of a composite map: one {@link PlanarLayer} per part (the part's regions on its own
- * projection, at its own area scale), the framed parts placed by {@link PartLayout} and moved there. Moving is
- * a translation, so every drawn area stays what the part's audit proved.
+ * projection, at its own area scale), the framed parts placed by {@link PartLayout} and moved there, once for the
+ * site's drawings and once for print (each part keeps the move from one place to the other). Moving is a
+ * translation, so every drawn area stays what the part's audit proved.
  *
  * @param parts          the parts, main part first
- * @param simplifiedM    the drawable geometry per key, on the map's plane
+ * @param simplifiedM    the drawable geometry per key, on the map's plane, the parts where the site's drawings place them
  * @param mapAreaRatio   planar / (area scale x geodesic) area per key
  * @param audit          the worst of the parts' audits
  * @param dropped        the parts' islands too small to draw
@@ -40,11 +41,11 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
 
     /**
      * The parts' layers, the framed parts placed with room for their labels in every language of {@code languages}
-     * (the site's: every edition gets the same frames) and name bands at least {@code frameNameBandShare} of the
-     * map's drawn width ({@link LoadOptions#frameNameBandShare()}).
+     * (the site's: every edition gets the same frames) and name bands at least the shares {@code frameNameBands}
+     * gives of the map's drawn width on the site and in print ({@link LoadOptions#frameNameBands()}).
      */
     static CompositeLayers of(RegionLayer layer, List<PartPlan> plans, PlanarLayers planarLayers,
-                              List<aequa.wording.Wording> languages, double frameNameBandShare) {
+                              List<aequa.wording.Wording> languages, FrameNameBands frameNameBands) {
         PartPlan mainPlan = plans.get(0);
         double mainWidthM = PlanarLayer.roughWidthM(mainPlan.footprint());
         // the parts' layers stand alone, so they are made side by side (the main part's simplification, which
@@ -78,8 +79,10 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
             insets.add(new PartLayout.Inset(extent(planar.get(i).simplifiedM().values()), nameWidthM, twoLineWidthM,
                     longestWordWidthM, plan.corner(), plan.areaScale() != 1));
         }
-        List<PartLayout.Placement> placements = PartLayout.place(List.copyOf(planar.get(0).simplifiedM().values()), insets,
-                frameNameBandShare);
+        List<Geometry> mainRegions = List.copyOf(planar.get(0).simplifiedM().values());
+        List<PartLayout.Placement> placements = PartLayout.place(mainRegions, insets, frameNameBands.webShare());
+        List<PartLayout.Placement> printPlacements = frameNameBands.printShare() == frameNameBands.webShare() ? placements
+                : PartLayout.place(mainRegions, insets, frameNameBands.printShare());
 
         Map<String, Geometry> geometry = new LinkedHashMap<>();
         Map<String, Double> ratios = new HashMap<>();
@@ -98,16 +101,26 @@ record CompositeLayers(List<MapPart> parts, Map<String, Geometry> simplifiedM, M
             if (part.audit().maxRelativeError() > worst.maxRelativeError() || Double.isNaN(part.audit().maxRelativeError())) {
                 worst = part.audit();
             }
+            MapPart.Frame drawnFrame = new MapPart.Frame(frame.getMinX(), frame.getMinY(), frame.getMaxX(), frame.getMaxY());
+            MapPart.PrintPlace print = i == 0 ? new MapPart.PrintPlace(0, 0, drawnFrame, 0, 0, 0)
+                    : printPlace(placements.get(i - 1), printPlacements.get(i - 1));
             parts.add(new MapPart(plan.id(), plan.name(), plan.keys().stream().sorted().toList(), plan.main(),
-                    plan.areaScale(), plan.choice(), part.audit(), plan.areaKm2(), plan.gapKm(),
-                    new MapPart.Frame(frame.getMinX(), frame.getMinY(), frame.getMaxX(), frame.getMaxY()),
+                    plan.areaScale(), plan.choice(), part.audit(), plan.areaKm2(), plan.gapKm(), drawnFrame,
                     i == 0 ? 0 : placements.get(i - 1).nameBandM(), i == 0 ? 0 : placements.get(i - 1).nameLines(),
-                    i == 0 ? 0 : placements.get(i - 1).scaleBandM()));
+                    i == 0 ? 0 : placements.get(i - 1).scaleBandM(), print));
         }
         List<String> clipped = planar.stream().flatMap(p -> p.audit().clippedKeys().stream()).toList();
         List<String> aroundPole = planar.stream().flatMap(p -> p.audit().aroundPoleKeys().stream()).toList();
         worst = new AreaAudit(worst.maxRelativeError(), worst.worstKey(), worst.tolerance(), clipped, aroundPole);
         return new CompositeLayers(parts, geometry, ratios, worst, dropped);
+    }
+
+    /** The print place of a part the site's drawings place at {@code site}. */
+    private static MapPart.PrintPlace printPlace(PartLayout.Placement site, PartLayout.Placement print) {
+        Envelope f = print.frameM();
+        return new MapPart.PrintPlace(print.dxM() - site.dxM(), print.dyM() - site.dyM(),
+                new MapPart.Frame(f.getMinX(), f.getMinY(), f.getMaxX(), f.getMaxY()), print.nameBandM(), print.nameLines(),
+                print.scaleBandM());
     }
 
     private static Envelope extent(java.util.Collection<Geometry> geometries) {

@@ -16,12 +16,11 @@ import aequa.projection.ProjectionRequest;
  *                           map id, so a monthly update does not shift a map unless the gain is real
  * @param cacheFolder        where the geometry stage's results are kept between runs, or empty for none
  * @param cacheUse           whether results are only read from that folder or also stored there
- * @param frameNameBandShare the least height of a composite map's frame-name band as a share of the map's drawn
- *                           width, so that names fit at the smallest type of the narrowest drawing (the print);
- *                           0 keeps the layout's own proportions
+ * @param frameNameBands     the least heights of a composite map's frame-name bands, as shares of the drawn map's
+ *                           width, on the site's drawings and in print
  */
 public record LoadOptions(Rgb pageBackground, Map<String, ProjectionRequest.Previous> previousProjections,
-                          Optional<Path> cacheFolder, CacheUse cacheUse, double frameNameBandShare) {
+                          Optional<Path> cacheFolder, CacheUse cacheUse, FrameNameBands frameNameBands) {
 
     /** How the load step uses the geometry cache. */
     public enum CacheUse {
@@ -35,14 +34,12 @@ public record LoadOptions(Rgb pageBackground, Map<String, ProjectionRequest.Prev
         previousProjections = Map.copyOf(previousProjections);
         Objects.requireNonNull(cacheFolder, "cacheFolder");
         Objects.requireNonNull(cacheUse, "cacheUse");
-        if (!(frameNameBandShare >= 0 && frameNameBandShare < 1)) {
-            throw new IllegalArgumentException("frame name band share must be in [0, 1): " + frameNameBandShare);
-        }
+        Objects.requireNonNull(frameNameBands, "frameNameBands");
     }
 
     /** No geometry cache. */
     public LoadOptions(Rgb pageBackground, Map<String, ProjectionRequest.Previous> previousProjections) {
-        this(pageBackground, previousProjections, Optional.empty(), CacheUse.READ, 0);
+        this(pageBackground, previousProjections, Optional.empty(), CacheUse.READ, FrameNameBands.OWN_PROPORTIONS);
     }
 
     public static LoadOptions defaults() {
@@ -51,12 +48,12 @@ public record LoadOptions(Rgb pageBackground, Map<String, ProjectionRequest.Prev
 
     /** The same options, with the geometry cache in {@code folder}. */
     public LoadOptions withCache(Path folder, CacheUse use) {
-        return new LoadOptions(pageBackground, previousProjections, Optional.of(folder), use, frameNameBandShare);
+        return new LoadOptions(pageBackground, previousProjections, Optional.of(folder), use, frameNameBands);
     }
 
-    /** The same options, with frame-name bands of at least {@code share} of the map's drawn width. */
-    public LoadOptions withFrameNameBandShare(double share) {
-        return new LoadOptions(pageBackground, previousProjections, cacheFolder, cacheUse, share);
+    /** The same options, with frame-name bands of at least these shares of the map's drawn width. */
+    public LoadOptions withFrameNameBands(FrameNameBands bands) {
+        return new LoadOptions(pageBackground, previousProjections, cacheFolder, cacheUse, bands);
     }
 
     GeometryCache geometryCache() {

@@ -86,7 +86,7 @@ final class MapAssembler {
                             () -> PlanarLayer.of(layer, choice.projection(), footprint, project.file().checks().areaTolerance())));
         } else {
             CompositeLayers composite = CompositeLayers.of(layer, plans.get(), this::partLayer, siteLanguages(),
-                    options.frameNameBandShare());
+                    options.frameNameBands());
             planar = new PlanarLayer(composite.simplifiedM(), composite.mapAreaRatio(), composite.audit(), composite.dropped());
             parts = composite.parts();
         }

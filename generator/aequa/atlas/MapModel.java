@@ -1,8 +1,13 @@
 package aequa.atlas;
 
+import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
+import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.util.AffineTransformation;
 
 import aequa.classes.Classification;
 import aequa.colour.ColourRamp;
@@ -60,6 +65,40 @@ public record MapModel(MapSpec spec, List<String> periods, ProjectionChoice proj
         MapSpec translated = spec.inLanguage(tag);
         return translated == spec ? this
                 : new MapModel(translated, periods, projection, regions, classification, ramp, areaAudit, notices, parts, outlinesM);
+    }
+
+    /**
+     * This map as print draws it: a composite map's framed parts moved to their print places (a narrow print
+     * sets the frames' names larger against the map, so its frames are laid out for it), with their print frames.
+     * A translation, so every drawn area stays as audited. The map itself when print moves nothing.
+     */
+    public MapModel forPrint() {
+        if (parts.stream().noneMatch(MapPart::movedInPrint)) {
+            return parts.stream().allMatch(p -> p.frame().equals(p.print().frame())) ? this
+                    : new MapModel(spec, periods, projection, regions, classification, ramp, areaAudit, notices,
+                            parts.stream().map(MapPart::inPrint).toList(), outlinesM);
+        }
+        Map<String, MapPart> partByKey = new HashMap<>();
+        parts.forEach(p -> p.keys().forEach(k -> partByKey.put(k, p)));
+        List<MapRegion> moved = regions.stream().map(r -> {
+            MapPart part = partByKey.get(r.key());
+            return part == null || !part.movedInPrint() ? r : new MapRegion(r.key(), r.name(), r.geodesicAreaKm2(),
+                    r.mapAreaRatio(), moved(r.planarM(), part), r.values());
+        }).toList();
+        List<Geometry> outlines = new ArrayList<>();
+        for (int i = 0; i < outlinesM.getNumGeometries(); i++) {
+            Geometry line = outlinesM.getGeometryN(i);
+            Coordinate c = line.getEnvelopeInternal().centre();
+            MapPart part = c == null ? null : parts.stream().filter(p -> !p.main() && p.frame().contains(c.x, c.y)).findFirst().orElse(null);
+            outlines.add(part == null ? line : moved(line, part));
+        }
+        Geometry movedOutlines = outlines.isEmpty() ? outlinesM : outlinesM.getFactory().buildGeometry(outlines);
+        return new MapModel(spec, periods, projection, moved, classification, ramp, areaAudit, notices,
+                parts.stream().map(MapPart::inPrint).toList(), movedOutlines);
+    }
+
+    private static Geometry moved(Geometry g, MapPart part) {
+        return AffineTransformation.translationInstance(part.print().dxM(), part.print().dyM()).transform(g);
     }
 
     /** Whether the map is drawn in parts, each on its own projection. */

@@ -28,13 +28,35 @@ import aequa.wording.Wording;
  * @param nameLines  the lines the name band holds: 1, or up to {@code PartLayout.MAX_NAME_LINES} for a long name (0 for the main part)
  * @param scaleBandM the height of the band at the bottom of the frame that holds the part's own area-scale
  *                   square (0 unless the part is drawn at another area scale than the main part)
+ * @param print      where print places the part instead (frame, name and area-scale bands are for the site's
+ *                   drawings, whose names are set larger against the map than a narrow print's)
  */
 public record MapPart(String id, String name, List<String> keys, boolean main, double areaScale,
                       ProjectionChoice projection, AreaAudit areaAudit, double areaKm2, double gapKm, Frame frame,
-                      double nameBandM, int nameLines, double scaleBandM) {
+                      double nameBandM, int nameLines, double scaleBandM, PrintPlace print) {
 
     public MapPart {
         keys = List.copyOf(keys);
+        java.util.Objects.requireNonNull(print, "print");
+    }
+
+    /**
+     * Where print places a part: its regions moved by ({@code dxM}, {@code dyM}) from where the site's drawings
+     * place them, its frame and bands as {@link MapPart}'s.
+     */
+    public record PrintPlace(double dxM, double dyM, Frame frame, double nameBandM, int nameLines, double scaleBandM) {
+    }
+
+    /** This part as print places it (its print place then moves it no further). */
+    public MapPart inPrint() {
+        return new MapPart(id, name, keys, main, areaScale, projection, areaAudit, areaKm2, gapKm, print.frame(),
+                print.nameBandM(), print.nameLines(), print.scaleBandM(),
+                new PrintPlace(0, 0, print.frame(), print.nameBandM(), print.nameLines(), print.scaleBandM()));
+    }
+
+    /** Whether print moves the part from where the site's drawings place it. */
+    public boolean movedInPrint() {
+        return print.dxM() != 0 || print.dyM() != 0;
     }
 
     /** The part's name for readers: the main part is called "Main map" in the reader's language. */
@@ -81,5 +103,10 @@ public record MapPart(String id, String name, List<String> keys, boolean main, d
 
     /** A rectangle on the map's plane, metres. */
     public record Frame(double minXM, double minYM, double maxXM, double maxYM) {
+
+        /** Whether the point lies in the rectangle or on its edge. */
+        public boolean contains(double xM, double yM) {
+            return xM >= minXM && xM <= maxXM && yM >= minYM && yM <= maxYM;
+        }
     }
 }

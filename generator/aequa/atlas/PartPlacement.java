@@ -22,14 +22,13 @@ public final class PartPlacement {
      * @param regions       the regions, densified as the load step densifies them
      * @param areaKm2ByKey  their areas, as the load step measures them
      * @param toleranceArea the area check's tolerance
-     * @param frameNameBandShare the least height of a frame's name band as a share of the map's drawn width
-     *                      ({@link LoadOptions#frameNameBandShare()})
+     * @param frameNameBands the least heights of the frames' name bands ({@link LoadOptions#frameNameBands()})
      */
     public static List<MapPart> place(String file, List<Region> regions, Map<String, Double> areaKm2ByKey,
-                                      List<PartPlan> plans, double toleranceArea, double frameNameBandShare) {
+                                      List<PartPlan> plans, double toleranceArea, FrameNameBands frameNameBands) {
         RegionLayer layer = new RegionLayer("explain", file, regions, areaKm2ByKey);
         return CompositeLayers.of(layer, plans, (subset, plan, drawnFootprint, minDrawnWidthM) -> PlanarLayer.of(subset,
                 plan.choice().projection(), drawnFootprint, toleranceArea, plan.areaScale(), minDrawnWidthM),
-                List.of(aequa.wording.Wording.english()), frameNameBandShare).parts();
+                List.of(aequa.wording.Wording.english()), frameNameBands).parts();
     }
 }

@@ -6,12 +6,14 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
+import aequa.atlas.FrameNameBands;
 import aequa.atlas.MapPart;
 import aequa.atlas.PartPlacement;
 import aequa.composite.CompositePlanner;
 import aequa.drawing.PrintPreset;
 import aequa.drawing.PrintSize;
 import aequa.drawing.Themes;
+import aequa.drawing.WebSize;
 import aequa.composite.PartPlan;
 import aequa.ellipsoid.LonLatArea;
 import aequa.ellipsoid.LonLatDensifier;
@@ -52,15 +54,16 @@ final class PartsReport {
         List<PartPlan> plans = CompositePlanner.plan(regions, areas, InsetsSpec.AUTO, ProjectionRequest.automatic(),
                 new CompositePlanner.SettingPlace(pointer -> "", "/insets"), findings);
         List<MapPart> placed = plans.size() <= 1 ? List.of()
-                : PartPlacement.place(file, densified, areas, plans, ChecksSpec.DEFAULT_AREA_TOLERANCE, defaultFrameNameBandShare());
+                : PartPlacement.place(file, densified, areas, plans, ChecksSpec.DEFAULT_AREA_TOLERANCE, defaultFrameNameBands());
         return new Parts(plans, placed);
     }
 
-    /** The frames' least name band as a project with the default print settings (width and print theme) lays them out. */
-    private static double defaultFrameNameBandShare() {
+    /** The frames' least name bands as a project with the default site and print settings lays them out. */
+    private static FrameNameBands defaultFrameNameBands() {
         SiteSpec site = new SiteSpec(null, null, null, null, null);
         PrintSize print = PrintSize.of(PrintPreset.fromConfigName(site.printWidth()).orElseThrow());
-        return print.frameNameBandShare(Themes.bundled(site.printTheme()));
+        return new FrameNameBands(WebSize.STANDARD.frameNameBandShare(Themes.bundled(site.theme())),
+                print.frameNameBandShare(Themes.bundled(site.printTheme())));
     }
 
     /**

@@ -2,6 +2,7 @@ package aequa.composite;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.DoubleUnaryOperator;
 
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
@@ -34,11 +35,8 @@ public final class PartLayout {
     static final double MARGIN_SHARE = 0.012;
     static final double GAP_SHARE = 0.02;
     static final double NAME_BAND_SHARE = 0.04;
-    /**
-     * A name wider than this share of the main part's larger side (and than its regions) takes more lines, up to
-     * {@value #MAX_NAME_LINES}, rather than widening its frame (by eye).
-     */
-    static final double NAME_WRAP_SHARE = 0.3;
+    /** A name takes another line only when that makes its frame at least this share smaller (by eye). */
+    static final double MORE_LINES_SAVING = 0.1;
     /** The most lines a frame's name takes: a long name on a narrow print wraps instead of widening its frame. */
     public static final int MAX_NAME_LINES = 3;
     /** Each line of a name after the first adds this much of a one-line name band (by eye: 1.7 bands for two lines). */
@@ -51,9 +49,16 @@ public final class PartLayout {
     private static final int SCALE_LABEL_CHARS = 13;
     /** The drawing's tallest map block relative to its width (drawing's Layout.MAX_MAP_ASPECT). */
     static final double MAX_ASPECT = 1.25;
-    /** Layouts made again at most to give the name bands their least share of the drawn width, and the margin added each time. */
-    static final int BAND_ROUNDS = 6;
-    private static final double BAND_OVERSHOOT = 1.05;
+    /**
+     * The search for the least growth of the name bands at which every frame finds a place on the page: steps of
+     * {@value #GROWTH_STEP} times (at most {@value #GROWTH_STEPS} of them, about 66 times the least growth), then
+     * {@value #BISECTIONS} halvings of the last step.
+     */
+    static final double GROWTH_STEP = 1.15;
+    static final int GROWTH_STEPS = 30;
+    static final int BISECTIONS = 4;
+    /** Rounding room on the page's bounds, so that a map exactly as wide as its page fits. */
+    private static final double PAGE_SLACK = 1 + 1e-9;
     /** Trials of the slide towards the centre: halving steps down to 1/2^12 of the way. */
     private static final int SLIDE_STEPS = 12;
 
@@ -74,14 +79,6 @@ public final class PartLayout {
                         boolean ownScale) {
 
         /**
-         * A part whose name breaks where the drawing finds room: its longer line of two is taken as
-         * {@value #TWO_LINE_WIDTH} of it, and its words as short as need be.
-         */
-        public Inset(Envelope contentM, double nameWidthM, String corner, boolean ownScale) {
-            this(contentM, nameWidthM, TWO_LINE_WIDTH * nameWidthM, 0, corner, ownScale);
-        }
-
-        /**
          * How wide the longest line is when the name takes {@code lines} lines: three or more lines share the name
          * as unevenly as two do ({@value #TWO_LINE_WIDTH} of it over two), and are never wider than two.
          */
@@ -91,23 +88,6 @@ public final class PartLayout {
                 case 2 -> Math.max(longestWordWidthM, twoLineWidthM);
                 default -> Math.max(longestWordWidthM, Math.min(twoLineWidthM, TWO_LINE_WIDTH * 2 / lines * nameWidthM));
             };
-        }
-
-        /**
-         * The fewest lines (1 to {@value #MAX_NAME_LINES}) whose longest line, {@code growth} times its own width,
-         * fits {@code roomM}; when none does, the narrowest, in the fewest lines that make it.
-         */
-        int linesFor(double growth, double roomM) {
-            int narrowest = 1;
-            for (int lines = 1; lines <= MAX_NAME_LINES; lines++) {
-                if (growth * widthInLinesM(lines) <= roomM) {
-                    return lines;
-                }
-                if (widthInLinesM(lines) < widthInLinesM(narrowest)) {
-                    narrowest = lines;
-                }
-            }
-            return narrowest;
         }
     }
 
@@ -154,51 +134,102 @@ public final class PartLayout {
                 index.insert(g.getEnvelopeInternal(), g);
             }
         }
-        double ownBand = NAME_BAND_SHARE * Math.max(main.getWidth(), main.getHeight());
-        double band = ownBand;
-        List<Placement> placements = place(main, index, insets, 1);
-        for (int round = 0; round < BAND_ROUNDS && minBandShare > 0; round++) {
-            Envelope whole = new Envelope(main);
-            placements.forEach(p -> whole.expandToInclude(p.frameM()));
-            double neededM = minBandShare * Math.max(whole.getWidth(), whole.getHeight() / MAX_ASPECT);
-            if (neededM <= band) {
-                break;
-            }
-            // a little more than needed: the frames grow with their bands, and so does the map
-            band = neededM * BAND_OVERSHOOT;
-            placements = place(main, index, insets, band / ownBand);
+        if (minBandShare <= 0) {
+            return place(main, index, insets, 1, Double.POSITIVE_INFINITY);
         }
-        return placements;
+        double ownBand = NAME_BAND_SHARE * Math.max(main.getWidth(), main.getHeight());
+        // the page (metres) whose drawn width makes a band of growth g exactly minBandShare of it
+        DoubleUnaryOperator pageWidth = g -> g * ownBand / minBandShare;
+        double lowest = Math.max(1, minBandShare * Math.max(main.getWidth(), main.getHeight() / MAX_ASPECT) / ownBand);
+        double tooSmall = Double.NaN;
+        double growth = lowest;
+        List<Placement> found = place(main, index, insets, growth, pageWidth.applyAsDouble(growth));
+        for (int step = 0; found == null && step < GROWTH_STEPS; step++) {
+            tooSmall = growth;
+            growth *= GROWTH_STEP;
+            found = place(main, index, insets, growth, pageWidth.applyAsDouble(growth));
+        }
+        if (found == null) {
+            // no page holds the names at their least share (a word longer than the print is wide): the layout
+            // keeps its own proportions at the least growth, and the drawing says where a name runs over
+            return place(main, index, insets, lowest, Double.POSITIVE_INFINITY);
+        }
+        for (int round = 0; round < BISECTIONS && !Double.isNaN(tooSmall); round++) {
+            double middle = Math.sqrt(tooSmall * growth);
+            List<Placement> trial = place(main, index, insets, middle, pageWidth.applyAsDouble(middle));
+            if (trial == null) {
+                tooSmall = middle;
+            } else {
+                growth = middle;
+                found = trial;
+            }
+        }
+        return found;
     }
 
-    /** The layout with name bands, names and area-scale bands {@code growth} times their own proportions. */
-    private static List<Placement> place(Envelope main, STRtree index, List<Inset> insets, double growth) {
+    /**
+     * The layout with name bands, names and area-scale bands {@code growth} times their own proportions, on a
+     * page {@code pageWidthM} wide and at most {@value #MAX_ASPECT} times as tall, or null when a frame finds
+     * no place on it.
+     */
+    private static List<Placement> place(Envelope main, STRtree index, List<Inset> insets, double growth, double pageWidthM) {
+        double pageHeightM = MAX_ASPECT * pageWidthM;
+        if (main.getWidth() > pageWidthM * PAGE_SLACK || main.getHeight() > pageHeightM * PAGE_SLACK) {
+            return null;
+        }
         double side = Math.max(main.getWidth(), main.getHeight());
-        double margin = MARGIN_SHARE * side;
         double gap = GAP_SHARE * side;
-        double band = NAME_BAND_SHARE * side * growth;
         List<Envelope> frames = new ArrayList<>();
         Envelope whole = new Envelope(main);
         List<Placement> placements = new ArrayList<>();
         for (Inset inset : insets) {
             Envelope c = inset.contentM();
-            double contentW = c.getWidth() + 2 * margin;
-            int lines = inset.linesFor(growth, Math.max(contentW, NAME_WRAP_SHARE * side) - 2 * margin);
-            double nameW = growth * inset.widthInLinesM(lines) + 2 * margin;
-            double nameBand = band * (1 + EXTRA_LINE_BAND * (lines - 1));
-            double scaleBand = inset.ownScale() ? SCALE_BAND_SHARE * side * growth : 0;
-            double scaleW = inset.ownScale() ? scaleBand + SCALE_LABEL_CHARS * NAME_CHAR_SHARE * band + 2 * margin : 0;
-            double w = Math.max(contentW, Math.max(nameW, scaleW));
-            double h = c.getHeight() + 2 * margin + nameBand + scaleBand;
-            Envelope best = best(candidates(main, whole, frames, w, h, gap), inset.corner(), main, whole, index, frames, gap);
+            FrameSize size = FrameSize.smallest(inset, side, growth);
+            double w = size.widthM();
+            double h = size.heightM();
+            Envelope best = best(candidates(main, whole, frames, w, h, gap), inset.corner(), main, whole, index, frames, gap,
+                    pageWidthM * PAGE_SLACK, pageHeightM * PAGE_SLACK);
+            if (best == null) {
+                return null;
+            }
             best = slide(best, inset.corner(), main, index, frames, gap);
             frames.add(best);
             whole.expandToInclude(best);
             double dx = best.getMinX() + (best.getWidth() - c.getWidth()) / 2 - c.getMinX();
-            double dy = best.getMinY() + scaleBand + margin - c.getMinY();
-            placements.add(new Placement(dx, dy, best, nameBand, lines, scaleBand));
+            double dy = best.getMinY() + size.scaleBandM() + MARGIN_SHARE * side - c.getMinY();
+            placements.add(new Placement(dx, dy, best, size.nameBandM(), size.nameLines(), size.scaleBandM()));
         }
         return placements;
+    }
+
+    /**
+     * A frame's size: its regions with a margin, its name band above them, its area-scale band below them (when
+     * it has one), and as wide as the widest of the three.
+     */
+    private record FrameSize(double widthM, double heightM, double nameBandM, int nameLines, double scaleBandM) {
+
+        /**
+         * The frame whose name takes the lines (1 to {@value #MAX_NAME_LINES}) that make it smallest in area; more
+         * lines only when they save at least {@value #MORE_LINES_SAVING} of it.
+         */
+        static FrameSize smallest(Inset inset, double side, double growth) {
+            Envelope c = inset.contentM();
+            double margin = MARGIN_SHARE * side;
+            double band = NAME_BAND_SHARE * side * growth;
+            double scaleBand = inset.ownScale() ? SCALE_BAND_SHARE * side * growth : 0;
+            double scaleW = inset.ownScale() ? scaleBand + SCALE_LABEL_CHARS * NAME_CHAR_SHARE * band + 2 * margin : 0;
+            FrameSize best = null;
+            for (int lines = 1; lines <= MAX_NAME_LINES; lines++) {
+                double nameBand = band * (1 + EXTRA_LINE_BAND * (lines - 1));
+                double nameW = growth * inset.widthInLinesM(lines) + 2 * margin;
+                double w = Math.max(c.getWidth() + 2 * margin, Math.max(nameW, scaleW));
+                double h = c.getHeight() + 2 * margin + nameBand + scaleBand;
+                if (best == null || w * h < best.widthM() * best.heightM() * (1 - MORE_LINES_SAVING)) {
+                    best = new FrameSize(w, h, nameBand, lines, scaleBand);
+                }
+            }
+            return best;
+        }
     }
 
     private static List<Envelope> candidates(Envelope main, Envelope whole, List<Envelope> frames, double w, double h,
@@ -223,7 +254,7 @@ public final class PartLayout {
     }
 
     private static Envelope best(List<Envelope> candidates, String corner, Envelope main, Envelope whole, STRtree index,
-                                 List<Envelope> frames, double gap) {
+                                 List<Envelope> frames, double gap, double pageWidthM, double pageHeightM) {
         for (boolean useCorner : new boolean[] {true, false}) {
             if (useCorner && corner.isEmpty()) {
                 continue;
@@ -234,11 +265,11 @@ public final class PartLayout {
                 if (useCorner && !inCorner(f, corner, main)) {
                     continue;
                 }
-                if (!allowed(f, index, frames, gap)) {
-                    continue;
-                }
                 Envelope grown = new Envelope(whole);
                 grown.expandToInclude(f);
+                if (grown.getWidth() > pageWidthM || grown.getHeight() > pageHeightM || !allowed(f, index, frames, gap)) {
+                    continue;
+                }
                 double score = fill(grown);
                 if (score > bestScore * (1 + 1e-9)) {
                     bestScore = score;
@@ -249,7 +280,7 @@ public final class PartLayout {
                 return best;
             }
         }
-        throw new IllegalStateException("no place for a frame"); // the outside candidates are always allowed
+        return null; // on an unbounded page the outside candidates are always allowed
     }
 
     /** The share of a page (as wide as the map, at most MAX_ASPECT as tall) the map leaves, up to a constant. */
@@ -307,6 +338,9 @@ public final class PartLayout {
         boolean keepQuarter = !corner.isEmpty() && wholly(frame, corner, main);
         Envelope current = frame;
         for (int axis = 0; axis < 2; axis++) {
+            if (!approaches(current, main, axis)) {
+                continue;
+            }
             double towards = axis == 0 ? main.centre().x - current.centre().x : main.centre().y - current.centre().y;
             double moved = 0;
             for (int step = 1; step <= SLIDE_STEPS; step++) {
@@ -319,6 +353,18 @@ public final class PartLayout {
             current = shift(current, axis == 0 ? moved : 0, axis == 0 ? 0 : moved);
         }
         return current;
+    }
+
+    /**
+     * Whether sliding along {@code axis} (0 for x) brings the frame nearer the main part rather than along it: the
+     * frame lies beside the main part on that axis (its span on the other axis overlaps the main part's), or off
+     * a corner (its spans overlap on neither). A frame below the main part that slid sideways to the middle would
+     * split the room left beside it in two.
+     */
+    private static boolean approaches(Envelope frame, Envelope main, int axis) {
+        boolean besideX = frame.getMaxY() > main.getMinY() && frame.getMinY() < main.getMaxY();
+        boolean besideY = frame.getMaxX() > main.getMinX() && frame.getMinX() < main.getMaxX();
+        return (axis == 0 ? besideX : besideY) || (!besideX && !besideY);
     }
 
     private static Envelope shift(Envelope e, double dx, double dy) {

@@ -66,7 +66,7 @@ public final class MapDrawings {
     public static DrawnMap printSvg(MapModel model, Theme theme, PrintSize size, DrawOptions options) {
         Medium medium = Medium.PRINT;
         Typesetter type = new Typesetter(medium.unitsPerPt(size.widthMm()), Typesetter.installedFamily(theme.fonts().family()));
-        MapPainter painter = new MapPainter(model, theme, options);
+        MapPainter painter = new MapPainter(model.forPrint(), theme, options);
         Layout layout = painter.layout(type, medium, size.widthMm(), size.heightMm());
         FixedDecimal precision = medium.coordinates();
         SVGGraphics2D g = SvgOutput.graphics(size.widthMm(), layout.heightU(), SVGUnits.MM, precision, theme.fonts().cssStack(), "aequa-");
@@ -170,7 +170,7 @@ public final class MapDrawings {
     public static DrawnMap pdf(MapModel model, Theme theme, PrintSize size, DrawOptions options) {
         Medium medium = Medium.PRINT;
         Typesetter type = new Typesetter(medium.unitsPerPt(size.widthMm()), java.awt.Font.SANS_SERIF);
-        MapPainter painter = new MapPainter(model, theme, options);
+        MapPainter painter = new MapPainter(model.forPrint(), theme, options);
         Layout layout = painter.layout(type, medium, size.widthMm(), size.heightMm());
         double ptPerMm = 72.0 / 25.4; // 1 inch = 25.4 mm = 72 pt
         PDFDocument document = new PDFDocument(); // no setTitle: PdfInformation adds the title, escaped

@@ -36,14 +36,14 @@ final class PartFrames {
     }
 
     /**
-     * The least height of a one-line name band, points, at which {@link #paint} draws the name at the theme's
-     * smallest type or larger: its capitals fill {@value #NAME_CAP_SHARE} of the band. A two-line band, 1.7 of
-     * these, then holds two lines at the smallest type too (two line heights of 1.25 em are 2.5 em, and this band
-     * is about 1.8 em).
+     * The height of a one-line name band, points, at which {@link #paint} draws the name at {@code sizePt} (at
+     * most the legend's size): its capitals fill {@value #NAME_CAP_SHARE} of the band. A two-line band, 1.7 of
+     * these, then holds two lines at that size too (two line heights of 1.25 em are 2.5 em, and this band is
+     * about 1.8 em).
      */
-    static double leastNameBandPt(Theme theme) {
+    static double nameBandPt(Theme theme, double sizePt) {
         Typesetter type = new Typesetter(1, Typesetter.installedFamily(theme.fonts().family()));
-        return LEAST_BAND_ROOM * type.capHeight(theme.typePt().minimum()) / NAME_CAP_SHARE;
+        return LEAST_BAND_ROOM * type.capHeight(sizePt) / NAME_CAP_SHARE;
     }
 
     /**

@@ -21,11 +21,11 @@ public record PrintSize(double widthMm, double heightMm) {
     /**
      * The least height of a composite map's frame-name band, as a share of the map's drawn width, at which a
      * frame's name fits at {@code theme}'s smallest type in a print of this width (the print is the narrowest
-     * drawing; the load step lays out the frames with it, see {@code LoadOptions.frameNameBandShare}).
+     * drawing; the load step lays out the print's frames with it, see {@code LoadOptions.frameNameBands}).
      */
     public double frameNameBandShare(Theme theme) {
         double innerPt = widthMm * Layout.PT_PER_MM - 2 * Layout.MARGIN_PT;
-        return Math.min(0.5, PartFrames.leastNameBandPt(theme) / innerPt);
+        return Math.min(0.5, PartFrames.nameBandPt(theme, theme.typePt().minimum()) / innerPt);
     }
 
     public static PrintSize of(PrintPreset preset) {

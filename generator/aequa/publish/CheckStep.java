@@ -5,10 +5,12 @@ import java.util.Optional;
 
 import aequa.atlas.Atlas;
 import aequa.atlas.AtlasLoader;
+import aequa.atlas.FrameNameBands;
 import aequa.atlas.LoadOptions;
 import aequa.drawing.PrintSize;
 import aequa.drawing.Theme;
 import aequa.drawing.Themes;
+import aequa.drawing.WebSize;
 import aequa.findings.Finding;
 import aequa.findings.Findings;
 import aequa.inputs.CacheFolder;
@@ -103,7 +105,8 @@ public final class CheckStep {
                              Findings findings) {
         LoadOptions options = new LoadOptions(settings.theme().colours().background(), PreviousProjections.read(outDir))
                 .withCache(CacheFolder.of(project.dir()), cacheUse)
-                .withFrameNameBandShare(settings.printSize().frameNameBandShare(settings.printTheme()));
+                .withFrameNameBands(new FrameNameBands(WebSize.STANDARD.frameNameBandShare(settings.theme()),
+                        settings.printSize().frameNameBandShare(settings.printTheme())));
         return AtlasLoader.load(project, options, findings);
     }
 }

@@ -18,10 +18,15 @@ import org.locationtech.jts.geom.GeometryFactory;
 
 import aequa.atlas.Atlas;
 import aequa.atlas.AtlasLoader;
+import aequa.atlas.FrameNameBands;
 import aequa.atlas.LoadOptions;
 import aequa.atlas.MapModel;
 import aequa.atlas.MapPart;
 import aequa.atlas.MapRegion;
+import aequa.drawing.PrintPreset;
+import aequa.drawing.PrintSize;
+import aequa.drawing.Themes;
+import aequa.drawing.WebSize;
 import aequa.findings.Findings;
 import aequa.project.LoadedProject;
 import aequa.project.ProjectLoader;
@@ -72,7 +77,11 @@ class CompositeMapsTest {
                 "  - { id: counties-circles, regions: counties, figures: counties, indicator: code_number, measure: count, display: circles }");
         Findings findings = new Findings();
         LoadedProject loaded = ProjectLoader.load(project, findings).orElseThrow(() -> new AssertionError(findings.list()));
-        Atlas atlas = AtlasLoader.load(loaded, LoadOptions.defaults(), findings);
+        // the name bands publish asks for with the default settings (CheckStep): the site's theme at the standard
+        // web width, the print theme at the default print width (two columns)
+        FrameNameBands bands = new FrameNameBands(WebSize.STANDARD.frameNameBandShare(Themes.bundled("daylight")),
+                PrintSize.of(PrintPreset.TWO_COLUMNS).frameNameBandShare(Themes.bundled("newsprint")));
+        Atlas atlas = AtlasLoader.load(loaded, LoadOptions.defaults().withFrameNameBands(bands), findings);
         assertTrue(!findings.hasErrors(), findings.list().toString());
         counties = atlas.maps().get(0);
         countiesOneProjection = atlas.maps().get(1);
@@ -109,26 +118,65 @@ class CompositeMapsTest {
         assertTrue(counties.parts().get(0).projection().omegaMaxDeg() < 1.5);
     }
 
+    /** On the site's drawings and in print, whose frames are laid out for names set larger against the map. */
     @Test
     void noRegionOfOnePartTouchesAnotherPartsFrame() {
-        for (MapPart framed : counties.parts()) {
-            if (framed.main()) {
-                continue;
-            }
-            var frame = GEOMETRY.toGeometry(new Envelope(framed.frame().minXM(), framed.frame().maxXM(),
-                    framed.frame().minYM(), framed.frame().maxYM()));
-            Set<String> inside = Set.copyOf(framed.keys());
-            for (MapRegion region : counties.regions()) {
-                boolean intersects = frame.intersects(region.planarM());
-                assertEquals(inside.contains(region.key()) && !region.planarM().isEmpty(), intersects,
-                        region.key() + " against the frame of " + framed.name());
+        for (MapModel map : List.of(counties, counties.forPrint())) {
+            for (MapPart framed : map.parts()) {
+                if (framed.main()) {
+                    continue;
+                }
+                var frame = GEOMETRY.toGeometry(new Envelope(framed.frame().minXM(), framed.frame().maxXM(),
+                        framed.frame().minYM(), framed.frame().maxYM()));
+                Set<String> inside = Set.copyOf(framed.keys());
+                for (MapRegion region : map.regions()) {
+                    boolean intersects = frame.intersects(region.planarM());
+                    assertEquals(inside.contains(region.key()) && !region.planarM().isEmpty(), intersects,
+                            region.key() + " against the frame of " + framed.name());
+                }
+                for (MapPart other : map.parts()) {
+                    assertTrue(other == framed || other.main() || !overlap(other.frame(), framed.frame()),
+                            framed.name() + " and " + other.name());
+                }
             }
         }
     }
 
+    /**
+     * Print moves framed parts and nothing else, by a translation: the main part's regions stay where they are,
+     * every region's drawn area is the same, and the print's frames give the names their room at the default
+     * print width (two columns) while the main part keeps most of the width (it had an eighth of it when the
+     * site's and the print's frames were one layout laid out for print).
+     */
+    @Test
+    void printMovesFramedPartsOnly() {
+        MapModel print = counties.forPrint();
+        Set<String> mainKeys = Set.copyOf(counties.parts().get(0).keys());
+        assertTrue(counties.parts().stream().anyMatch(MapPart::movedInPrint), "the print lays out its own frames");
+        for (int i = 0; i < counties.regions().size(); i++) {
+            MapRegion site = counties.regions().get(i);
+            MapRegion printed = print.regions().get(i);
+            assertEquals(site.key(), printed.key());
+            assertEquals(site.planarM().getArea(), printed.planarM().getArea(), 1e-9 * site.planarM().getArea() + 1e-6, site.key());
+            if (mainKeys.contains(site.key())) {
+                assertTrue(site.planarM().equalsExact(printed.planarM()), site.key());
+            }
+        }
+        Envelope whole = new Envelope();
+        print.parts().forEach(p -> whole.expandToInclude(new Envelope(p.frame().minXM(), p.frame().maxXM(), p.frame().minYM(), p.frame().maxYM())));
+        double drawnWidthM = Math.max(whole.getWidth(), whole.getHeight() / 1.25); // drawing's tallest map block
+        MapPart.Frame main = print.parts().get(0).frame();
+        // measured 0.85 (the map is drawn by its height): Alaska and the territories below the contiguous states
+        assertTrue((main.maxXM() - main.minXM()) / drawnWidthM > 0.75, "the main part's share of the print's width: " + (main.maxXM() - main.minXM()) / drawnWidthM);
+    }
+
+    private static boolean overlap(MapPart.Frame a, MapPart.Frame b) {
+        return a.minXM() < b.maxXM() && b.minXM() < a.maxXM() && a.minYM() < b.maxYM() && b.minYM() < a.maxYM();
+    }
+
     @Test
     void drawnAreasDividedByTheDeclaredScalesSumToTheGeodesicAreas() {
-        for (MapModel map : List.of(counties, statesScaled)) {
+        for (MapModel map : List.of(counties, counties.forPrint(), statesScaled, statesScaled.forPrint())) {
             double drawnOverScaleKm2 = 0;
             double simplifiedOverScaleKm2 = 0;
             double geodesicKm2 = 0;
@@ -147,7 +195,7 @@ class CompositeMapsTest {
             assertEquals(1, drawnOverScaleKm2 / geodesicKm2, 1e-4, map.id()); // the default area tolerance
             // the simplified outlines as drawn, islets too small to draw left out (reported): on the counties map
             // within the area tolerance too (measured 5.2e-5); with Alaska at a quarter scale, 2.5e-3
-            assertEquals(1, simplifiedOverScaleKm2 / geodesicKm2, map == counties ? 1e-4 : 5e-3, map.id());
+            assertEquals(1, simplifiedOverScaleKm2 / geodesicKm2, map.id().equals("counties") ? 1e-4 : 5e-3, map.id());
         }
     }
 

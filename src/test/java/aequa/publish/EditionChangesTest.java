@@ -203,6 +203,7 @@ class EditionChangesTest {
                                             aequa.projection.EqualAreaProjection projection, double omegaMaxDeg) {
         var choice = new aequa.projection.ProjectionChoice(projection, omegaMaxDeg, omegaMaxDeg / 2, 0, 0, List.of(), SiteFixtures.AUTOMATIC_ROUND);
         return new aequa.atlas.MapPart(id, name, keys, id.equals("main"), 1, choice,
-                new aequa.planar.AreaAudit(1e-9, "", 1e-4), 100, 0, new aequa.atlas.MapPart.Frame(0, 0, 1, 1), 0, 0, 0);
+                new aequa.planar.AreaAudit(1e-9, "", 1e-4), 100, 0, new aequa.atlas.MapPart.Frame(0, 0, 1, 1), 0, 0, 0,
+                new aequa.atlas.MapPart.PrintPlace(0, 0, new aequa.atlas.MapPart.Frame(0, 0, 1, 1), 0, 0, 0));
     }
 }
