@@ -26,8 +26,9 @@ import aequa.projection.ProjectionRequest;
 
 /**
  * The parts {@code explain} reports: what a map of a file's regions is drawn in with the default
- * {@code insets: auto}, each part's regions, gap to the main part, projection and placement (the quarter of the
- * main map its frame sits in, and its frame on the main part's plane), for a person or a script.
+ * {@code insets: auto}, each part's regions, gap to the main part, projection and placement on the site's drawings
+ * and in print at the default print width (the quarter of the main map its frame sits in, and its frame on the
+ * main part's plane), for a person or a script.
  */
 final class PartsReport {
 
@@ -56,6 +57,15 @@ final class PartsReport {
         List<MapPart> placed = plans.size() <= 1 ? List.of()
                 : PartPlacement.place(file, densified, areas, plans, ChecksSpec.DEFAULT_AREA_TOLERANCE, defaultFrameNameBands());
         return new Parts(plans, placed);
+    }
+
+    private static String size(MapPart.Frame f) {
+        return String.format(Locale.ROOT, "%,.0f x %,.0f km", (f.maxXM() - f.minXM()) / 1000, (f.maxYM() - f.minYM()) / 1000);
+    }
+
+    /** The print width a project has when its file does not set one. */
+    private static String defaultPrintWidth() {
+        return new SiteSpec(null, null, null, null, null).printWidth();
     }
 
     /** The frames' least name bands as a project with the default site and print settings lays them out. */
@@ -97,9 +107,10 @@ final class PartsReport {
                     p.choice().omegaMaxDeg(), p.choice().omegaMeanDeg()));
             if (!p.main() && parts.indexOf(p) < report.placed().size()) {
                 MapPart placed = report.placed().get(parts.indexOf(p));
-                MapPart.Frame f = placed.frame();
-                s.append(String.format(Locale.ROOT, "      placed %s; frame %,.0f x %,.0f km%n",
-                        placement(placed, report.placed().get(0)), (f.maxXM() - f.minXM()) / 1000, (f.maxYM() - f.minYM()) / 1000));
+                MapPart main = report.placed().get(0);
+                s.append(String.format(Locale.ROOT, "      on the site: placed %s; frame %s%n", placement(placed, main), size(placed.frame())));
+                s.append(String.format(Locale.ROOT, "      in print (%s): placed %s; frame %s%n", defaultPrintWidth(),
+                        placement(placed.inPrint(), main.inPrint()), size(placed.print().frame())));
             }
         }
         return s.toString();
@@ -134,6 +145,15 @@ final class PartsReport {
                 }
                 placement.put("frameM", List.of(f.minXM(), f.minYM(), f.maxXM(), f.maxYM()));
                 part.put("placement", placement);
+                MapPart.Frame pf = placed.print().frame();
+                Map<String, Object> print = new LinkedHashMap<>();
+                if (!p.main()) {
+                    String words = placement(placed.inPrint(), report.placed().get(0).inPrint());
+                    print.put("corner", words.substring(0, words.indexOf(',')));
+                    print.put("insideMainBox", words.contains("inside"));
+                }
+                print.put("frameM", List.of(pf.minXM(), pf.minYM(), pf.maxXM(), pf.maxYM()));
+                part.put("printPlacement", print);
             }
             return part;
         }).toList();

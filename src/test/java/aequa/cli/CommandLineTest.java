@@ -128,22 +128,25 @@ class CommandLineTest {
         assertTrue(parts.get(1).path("omegaMaxDeg").asDouble() < parts.get(0).path("omegaMaxDeg").asDouble() * 2);
         // named from the file's own 'name' property, not by where it lies
         assertEquals("Alaska", parts.get(1).path("name").asText());
-        // placement: every framed part in a quarter of the main map, frames that do not overlap
-        List<org.locationtech.jts.geom.Envelope> frames = new java.util.ArrayList<>();
-        for (int i = 1; i < parts.size(); i++) {
-            JsonNode placement = parts.get(i).path("placement");
-            assertTrue(List.of("top-left", "top-right", "bottom-left", "bottom-right").contains(placement.path("corner").asText()),
-                    placement.toString());
-            JsonNode f = placement.path("frameM");
-            var frame = new org.locationtech.jts.geom.Envelope(f.get(0).asDouble(), f.get(2).asDouble(), f.get(1).asDouble(), f.get(3).asDouble());
-            assertTrue(frame.getArea() > 0);
-            frames.forEach(other -> assertTrue(!other.intersects(frame), "frames overlap: " + other + " " + frame));
-            frames.add(frame);
+        // placement on the site and in print: every framed part in a quarter of the main map, frames that do not overlap
+        for (String layout : List.of("placement", "printPlacement")) {
+            List<org.locationtech.jts.geom.Envelope> frames = new java.util.ArrayList<>();
+            for (int i = 1; i < parts.size(); i++) {
+                JsonNode placement = parts.get(i).path(layout);
+                assertTrue(List.of("top-left", "top-right", "bottom-left", "bottom-right").contains(placement.path("corner").asText()),
+                        layout + ": " + placement);
+                JsonNode f = placement.path("frameM");
+                var frame = new org.locationtech.jts.geom.Envelope(f.get(0).asDouble(), f.get(2).asDouble(), f.get(1).asDouble(), f.get(3).asDouble());
+                assertTrue(frame.getArea() > 0);
+                frames.forEach(other -> assertTrue(!other.intersects(frame), layout + ": frames overlap: " + other + " " + frame));
+                frames.add(frame);
+            }
         }
         out.getBuffer().setLength(0);
         assertEquals(0, run("explain", states), err.toString());
         assertTrue(out.toString().contains("Parts (insets: auto): the main map and 5 framed parts"), out.toString());
-        assertTrue(out.toString().matches("(?s).*Alaska: 1 region.*placed (top|bottom)-(left|right), (inside the main map's box|beside the main map); frame [0-9,]+ x [0-9,]+ km.*"),
+        assertTrue(out.toString().matches("(?s).*Alaska: 1 region.*on the site: placed (top|bottom)-(left|right), (inside the main map's box|beside the main map); frame [0-9,]+ x [0-9,]+ km"
+                + "\\s+in print \\(two-columns\\): placed (top|bottom)-(left|right), (inside the main map's box|beside the main map); frame [0-9,]+ x [0-9,]+ km.*"),
                 out.toString());
     }
 
