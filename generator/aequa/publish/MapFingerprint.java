@@ -57,7 +57,7 @@ final class MapFingerprint {
             canonical(out, map.notices());
             for (MapPart part : map.parts()) {
                 canonical(out, java.util.Arrays.asList(part.id(), part.name(), part.keys(), part.areaScale(), part.frame(),
-                        part.nameBandM(), part.areaAudit()));
+                        part.nameBandM(), part.nameLines(), part.scaleBandM(), part.print(), part.areaAudit()));
                 text(out, part.projection().projection().wkt2());
                 out.writeDouble(part.projection().omegaMaxDeg());
                 out.writeDouble(part.projection().omegaMeanDeg());

@@ -232,6 +232,11 @@ final class SiteReport {
         number(frame, "minY", part.frame().minYM());
         number(frame, "maxX", part.frame().maxXM());
         number(frame, "maxY", part.frame().maxYM());
+        ObjectNode printFrame = node.putObject("printFrameM");
+        number(printFrame, "minX", part.print().frame().minXM());
+        number(printFrame, "minY", part.print().frame().minYM());
+        number(printFrame, "maxX", part.print().frame().maxXM());
+        number(printFrame, "maxY", part.print().frame().maxYM());
         return node;
     }
 

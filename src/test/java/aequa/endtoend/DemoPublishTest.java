@@ -214,6 +214,11 @@ class DemoPublishTest {
         for (JsonNode part : parts) {
             assertTrue(part.path("areaAudit").path("passed").asBoolean(), part.toString());
             assertTrue(part.path("projection").path("wkt2").asText().startsWith("PROJCRS"));
+            for (String frame : List.of("frameM", "printFrameM")) {
+                JsonNode f = part.path(frame);
+                assertTrue(f.path("minX").asDouble() < f.path("maxX").asDouble() && f.path("minY").asDouble() < f.path("maxY").asDouble(),
+                        frame + " of " + part.path("name").asText());
+            }
         }
         String svg = Files.readString(site.resolve("maps/library-cards/library-cards.svg"));
         assertTrue(svg.contains("id='regions-part-2'") && words(group(svg, "frame-part-2")).contains("(areas at 4 \u00d7 the main map)"),
