@@ -15,8 +15,8 @@ import org.locationtech.jts.index.strtree.STRtree;
  * Places the framed parts of a composite map around its main part, on the main part's plane (metres).
  *
  * <p>Each part's frame holds its regions with a margin, and a band at the top for its name: one line, or two
- * or three when the name is wider than the regions and than {@value #NAME_WRAP_SHARE} of the main part's larger
- * side (then the frame is as wide as the longest line, not the whole name). A part drawn at another area
+ * or three, breaking between words, when that makes the frame at least {@value #MORE_LINES_SAVING} smaller in
+ * area (then the frame is as wide as the longest line, not the whole name). A part drawn at another area
  * scale than the main part also has a band at the bottom for its own area-scale square. Parts are placed
  * one by one, largest first. The candidate places for a frame line it up with an edge of the main part's
  * extent, of the map so far, or of a frame already placed, inside or just outside them; a place is allowed
@@ -24,10 +24,11 @@ import org.locationtech.jts.index.strtree.STRtree;
  * places the one that leaves the map filling the most of its page wins (the page as wide as the map and at
  * most {@value #MAX_ASPECT} times as tall, the drawing's own limit); a preferred corner, when given, limits the
  * candidates to that quarter of the main part when any there is allowed. The winner is then slid towards the
- * main part's centre as far as it stays allowed, which tucks frames into empty corners. Every step is
- * arithmetic on fixed candidate lists, so the same parts always get the same places. A caller that knows how
- * small the map will be printed asks for a least name band, as a share of the map's drawn width; the bands,
- * names and area-scale bands then grow together and the layout is made again until the share holds.
+ * main part, across the side it lies beside (or diagonally from a corner), as far as it stays allowed, which
+ * tucks frames into empty corners. Every step is arithmetic on fixed candidate lists, so the same parts always
+ * get the same places. A caller that knows how small the map will be drawn asks for a least name band, as a
+ * share of the map's drawn width; the layout then searches the least growth of the bands, names and area-scale
+ * bands at which every frame finds a place on a page whose drawn width makes the band that share.
  */
 public final class PartLayout {
 
@@ -123,7 +124,11 @@ public final class PartLayout {
      * least {@code minBandShare} of the map's drawn width high: the map is drawn as wide as its block, or narrower
      * when it is taller than {@value #MAX_ASPECT} of its width, so a band of that share holds a name at the
      * smallest type the print allows however the layout turns out. Bands, names and area-scale bands grow
-     * together; the layout is made again until the share holds (at most {@value #BAND_ROUNDS} times).
+     * together, from the least growth at which the main part alone fits such a page, in steps of
+     * {@value #GROWTH_STEP} times until every frame finds a place on the page (so the frames cannot spread the map
+     * wider than its bands allow), then by halving the last step; the least growth found is the largest map.
+     * When no growth gives every frame a place (a word wider than the page), the frames keep the least growth on
+     * an unbounded page and a name may reach past its band.
      */
     public static List<Placement> place(List<Geometry> mainRegionsM, List<Inset> insets, double minBandShare) {
         Envelope main = new Envelope();
@@ -151,7 +156,7 @@ public final class PartLayout {
         }
         if (found == null) {
             // no page holds the names at their least share (a word longer than the print is wide): the layout
-            // keeps its own proportions at the least growth, and the drawing says where a name runs over
+            // keeps its own proportions at the least growth on an unbounded page, and a name may run past its band
             return place(main, index, insets, lowest, Double.POSITIVE_INFINITY);
         }
         for (int round = 0; round < BISECTIONS && !Double.isNaN(tooSmall); round++) {

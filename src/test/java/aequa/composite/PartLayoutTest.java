@@ -127,6 +127,22 @@ class PartLayoutTest {
         }
     }
 
+    /**
+     * A one-word name wider than any page the share allows (bands of 30 % of the drawn width hold about two
+     * characters a line) cannot fit however the map is drawn: the frames still get their places, clear of the main
+     * part and of each other, at the least growth. The name is invented.
+     */
+    @Test
+    void aWordWiderThanAnyPageStillGetsAPlace() {
+        List<PartLayout.Inset> insets = List.of(inset(new Envelope(0, 100_000, 0, 100_000), "Northwesternmostisland", false),
+                inset(new Envelope(0, 50_000, 0, 50_000), "Skerry", false));
+        List<PartLayout.Placement> placed = PartLayout.place(MAIN_REGIONS, insets, 0.3);
+        assertEquals(2, placed.size());
+        assertTrue(!placed.get(0).frameM().intersects(MAIN) && !placed.get(1).frameM().intersects(MAIN));
+        assertTrue(!placed.get(0).frameM().intersects(placed.get(1).frameM()));
+        assertEquals(1, placed.get(0).nameLines(), "one word keeps one line");
+    }
+
     /** A part named {@code name}, whose lines break between its words (two lines taken as the layout's estimate). */
     private static PartLayout.Inset inset(Envelope content, String name, boolean ownScale) {
         double nameM = PartLayout.nameWidthM(name, MAIN);
