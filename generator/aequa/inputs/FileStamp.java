@@ -38,7 +38,8 @@ public record FileStamp(String name, long sizeBytes, long modifiedNanos, String 
 
     /**
      * Stamps {@code file} now. When {@code previous} has the same size and time and was settled, its hash is
-     * reused and the file is not read; otherwise the file is read and hashed.
+     * reused and the file is not read; otherwise the file is read and hashed, once per process for a settled
+     * file of unchanged size and time ({@link SettledHashes}).
      */
     public static FileStamp of(Path file, String name, Optional<FileStamp> previous) throws IOException {
         long nowMillis = System.currentTimeMillis();
@@ -55,7 +56,15 @@ public record FileStamp(String name, long sizeBytes, long modifiedNanos, String 
                 && previous.get().modifiedNanos() == modifiedNanos) {
             return new FileStamp(name, size, modifiedNanos, previous.get().sha256(), settled);
         }
-        return new FileStamp(name, size, modifiedNanos, sha256(file), settled);
+        if (!settled) {
+            return new FileStamp(name, size, modifiedNanos, sha256(file), false);
+        }
+        Optional<String> known = SettledHashes.find(file, size, modifiedNanos);
+        String hash = known.isPresent() ? known.get() : sha256(file);
+        if (known.isEmpty()) {
+            SettledHashes.keep(file, size, modifiedNanos, hash);
+        }
+        return new FileStamp(name, size, modifiedNanos, hash, true);
     }
 
     /** True when both stamps describe the same bytes under the same name. */

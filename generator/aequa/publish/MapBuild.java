@@ -6,7 +6,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 
 import aequa.atlas.MapModel;
@@ -123,7 +122,7 @@ final class MapBuild {
         String svg;
         if (draw) {
             svg = makers.artwork().webSvg(map);
-            if (svg.toLowerCase(Locale.ROOT).contains("<script")) {
+            if (containsScriptTag(svg)) {
                 throw new IllegalStateException("the web SVG of map " + map.id() + " contains a script; refusing to inline it");
             }
             webSvg = MadeFile.of(files.webSvg(), svg);
@@ -146,6 +145,21 @@ final class MapBuild {
                     MadeFile.of(files.fragment(), renderer.renderFragment(site, page,
                             files.fragment().substring(prefix.length()), embed, FragmentSvg.of(svg))));
         }
+    }
+
+    /**
+     * Whether {@code svg} holds {@code <script} in any case ({@code <SCRIPT}, {@code <Script}), a tag that
+     * must never be inlined in a page. Compares at each {@code <} without copying the text (a web SVG of the
+     * US counties is about a megabyte); {@link String#regionMatches(boolean, int, String, int, int)} folds
+     * case both ways, so it finds every spelling a lower-case copy would, and a few more.
+     */
+    static boolean containsScriptTag(String svg) {
+        for (int at = svg.indexOf('<'); at >= 0; at = svg.indexOf('<', at + 1)) {
+            if (svg.regionMatches(true, at, "<script", 0, "<script".length())) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** The figures page and the figures as CSV, which need no picture. */

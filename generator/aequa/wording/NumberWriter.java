@@ -25,7 +25,8 @@ import aequa.classes.FigureText;
  * callers that show a status instead (a figure withheld, no data) test for it before calling. Downloads (CSV,
  * report.json) never go through this class: they keep full precision and a dot decimal.
  *
- * <p>Instances are immutable and thread-safe (ICU's {@link LocalizedNumberFormatter} is).
+ * <p>Instances are immutable and thread-safe (ICU's {@link LocalizedNumberFormatter} is); each keeps its
+ * formatters ({@link FormatterShelf}), so ICU compiles each once.
  */
 public final class NumberWriter {
 
@@ -38,14 +39,32 @@ public final class NumberWriter {
     /** Decimals beyond any double's significant digits: a value rounded to significant digits is zero only if it is. */
     private static final int ANY_SCALE = 400;
 
-    private final ULocale locale;
-    private final LocalizedNumberFormatter plain;
+    private final boolean rightToLeft;
     private final String[] digits;
+    private final FormatterShelf fixed;
+    private final FormatterShelf percent;
+    private final FormatterShelf degrees;
+    private final FormatterShelf areaKm2;
+    private final LocalizedNumberFormatter integer;
+    private final LocalizedNumberFormatter significant;
+    private final LocalizedNumberFormatter errorPercent;
+    private final LocalizedNumberFormatter distanceKm;
 
     NumberWriter(ULocale locale) {
-        this.locale = locale;
-        this.plain = NumberFormatter.withLocale(locale).roundingMode(RoundingMode.HALF_EVEN);
+        this.rightToLeft = locale.isRightToLeft();
         this.digits = digitsOf(locale);
+        LocalizedNumberFormatter plain = NumberFormatter.withLocale(locale).roundingMode(RoundingMode.HALF_EVEN);
+        this.fixed = new FormatterShelf(decimals -> plain.precision(Precision.fixedFraction(decimals)));
+        this.percent = new FormatterShelf(decimals -> plain.unit(NoUnit.PERCENT).precision(Precision.maxFraction(decimals)));
+        this.degrees = new FormatterShelf(decimals -> plain.unit(MeasureUnit.DEGREE)
+                .unitWidth(NumberFormatter.UnitWidth.NARROW).precision(Precision.maxFraction(decimals)));
+        this.areaKm2 = new FormatterShelf(decimals -> plain.unit(MeasureUnit.SQUARE_KILOMETER)
+                .unitWidth(NumberFormatter.UnitWidth.SHORT).precision(Precision.fixedFraction(decimals)));
+        this.integer = plain.precision(Precision.integer());
+        this.significant = plain.precision(Precision.maxSignificantDigits(SIGNIFICANT_DIGITS));
+        this.errorPercent = plain.unit(NoUnit.PERCENT).precision(Precision.maxSignificantDigits(2));
+        this.distanceKm = plain.unit(MeasureUnit.KILOMETER).unitWidth(NumberFormatter.UnitWidth.SHORT)
+                .precision(Precision.integer());
     }
 
     /** The ten digits of the locale's default numbering system (CLDR), or the ASCII digits for an algorithmic one. */
@@ -72,12 +91,12 @@ public final class NumberWriter {
         if (!Double.isFinite(value)) {
             return NOT_A_NUMBER;
         }
-        return write(plain.precision(Precision.fixedFraction(decimals)), value, decimals);
+        return write(fixed.forDecimals(decimals), value, decimals);
     }
 
     /** A whole number, grouped as the language groups ("1,234"; Spanish "1234"). */
     public String integer(long value) {
-        return write(plain.precision(Precision.integer()), value, 0);
+        return write(integer, value, 0);
     }
 
     /**
@@ -88,7 +107,7 @@ public final class NumberWriter {
         if (!Double.isFinite(value)) {
             return NOT_A_NUMBER;
         }
-        return write(plain.precision(Precision.maxSignificantDigits(SIGNIFICANT_DIGITS)), value, ANY_SCALE);
+        return write(significant, value, ANY_SCALE);
     }
 
     /** A mapped figure: the decimals of {@link FigureText#figureDecimals}, so legend, tooltips and tables agree. */
@@ -109,7 +128,7 @@ public final class NumberWriter {
         if (!Double.isFinite(percent)) {
             return NOT_A_NUMBER;
         }
-        return write(plain.unit(NoUnit.PERCENT).precision(Precision.maxFraction(maxDecimals)), percent, maxDecimals);
+        return write(this.percent.forDecimals(maxDecimals), percent, maxDecimals);
     }
 
     /**
@@ -120,7 +139,7 @@ public final class NumberWriter {
         if (!Double.isFinite(percent)) {
             return NOT_A_NUMBER;
         }
-        return write(plain.unit(NoUnit.PERCENT).precision(Precision.maxSignificantDigits(2)), percent, ANY_SCALE);
+        return write(errorPercent, percent, ANY_SCALE);
     }
 
     /** An angle in degrees with at most {@code maxDecimals} decimals, in CLDR's narrow form ("1.25°"). */
@@ -128,8 +147,7 @@ public final class NumberWriter {
         if (!Double.isFinite(degrees)) {
             return NOT_A_NUMBER;
         }
-        return write(plain.unit(MeasureUnit.DEGREE).unitWidth(NumberFormatter.UnitWidth.NARROW)
-                .precision(Precision.maxFraction(maxDecimals)), degrees, maxDecimals);
+        return write(this.degrees.forDecimals(maxDecimals), degrees, maxDecimals);
     }
 
     /** An area in km² with exactly {@code decimals} decimals, with the language's unit spacing ("1,234 km²"). */
@@ -137,8 +155,7 @@ public final class NumberWriter {
         if (!Double.isFinite(areaKm2)) {
             return NOT_A_NUMBER;
         }
-        return write(plain.unit(MeasureUnit.SQUARE_KILOMETER).unitWidth(NumberFormatter.UnitWidth.SHORT)
-                .precision(Precision.fixedFraction(decimals)), areaKm2, decimals);
+        return write(this.areaKm2.forDecimals(decimals), areaKm2, decimals);
     }
 
     /** A distance in km, whole, with the language's unit spacing. */
@@ -146,8 +163,7 @@ public final class NumberWriter {
         if (!Double.isFinite(km)) {
             return NOT_A_NUMBER;
         }
-        return write(plain.unit(MeasureUnit.KILOMETER).unitWidth(NumberFormatter.UnitWidth.SHORT)
-                .precision(Precision.integer()), km, 0);
+        return write(distanceKm, km, 0);
     }
 
     /**
@@ -184,7 +200,7 @@ public final class NumberWriter {
             shown = 0;
         }
         String text = formatter.format(shown == 0 ? 0.0 : shown).toString().replace('-', '\u2212');
-        return locale.isRightToLeft() ? LATIN_FIGURE.matcher(text).replaceAll("\u202a$0\u202c") : text;
+        return rightToLeft ? LATIN_FIGURE.matcher(text).replaceAll("\u202a$0\u202c") : text;
     }
 
     /** A figure in Latin digits with its sign, marks and percent sign (and the marks CLDR puts around them). */

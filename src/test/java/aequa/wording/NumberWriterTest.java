@@ -123,4 +123,34 @@ class NumberWriterTest {
         assertEquals("0.0039%", en.errorPercent(0.00391));
         assertEquals("1.25\u00b0", en.degrees(1.25, 2), "CLDR en narrow degree: {0}°");
     }
+
+    /**
+     * A writer reuses its ICU formatters, which ICU compiles after a few calls: the thousands of figures of a page
+     * must read exactly as the first one would. Checked against the JDK's own {@link java.text.DecimalFormat}
+     * (pattern #,##0.0…, half-even, English symbols) on seeded random figures, where a tie is practically
+     * impossible, and, for French, against the first call of a fresh writer.
+     */
+    @Test
+    void reusedFormattersWriteEveryFigureAsAFreshOne() {
+        NumberWriter en = writer("en");
+        java.util.Random random = new java.util.Random(12);
+        for (int decimals = 0; decimals <= 4; decimals++) {
+            java.text.DecimalFormat reference = new java.text.DecimalFormat(
+                    decimals == 0 ? "#,##0" : "#,##0." + "0".repeat(decimals),
+                    java.text.DecimalFormatSymbols.getInstance(Locale.ENGLISH));
+            reference.setRoundingMode(java.math.RoundingMode.HALF_EVEN);
+            for (int i = 0; i < 200; i++) {
+                double value = random.nextDouble() * Math.pow(10, random.nextInt(8));
+                assertEquals(reference.format(value), en.fixed(value, decimals), value + " at " + decimals + " decimals");
+            }
+        }
+        NumberWriter fr = writer("fr");
+        for (int i = 0; i < 50; i++) {
+            double value = -1234.5678 * (i + 1);
+            assertEquals(writer("fr").fixed(value, 2), fr.fixed(value, 2), "call " + i + " of one writer");
+            assertEquals(writer("fr").percent(value / 100, 1), fr.percent(value / 100, 1));
+            assertEquals(writer("fr").areaKm2(-value, 0), fr.areaKm2(-value, 0));
+            assertEquals(writer("fr").degrees(value / 1000, 3), fr.degrees(value / 1000, 3));
+        }
+    }
 }
