@@ -31,7 +31,7 @@ import aequa.drawing.Themes;
 
 /**
  * The names on a composite map's frames stay inside their frames in print, at the narrowest preset a desk uses for
- * a national map (two columns, 104 mm; common practice), on the US Census Bureau's 2017 counties
+ * a national map (two columns, 104 mm; common practice) and at one column, on the US Census Bureau's 2017 counties
  * (src/test/resources/geometry, source note there) with parts named from the counties' {@code state}: the
  * longest, "Guam and Commonwealth of the Northern Mariana Islands", ran out of its frame and across the next one
  * at 104 mm, since the type cannot shrink below the theme's smallest size. Text is measured with Java2D's own
@@ -68,6 +68,12 @@ class FrameNamesInPrintTest {
     @Test
     void namesFitTheirFramesAtTwoColumns() throws IOException {
         assertNamesInsideFrames("two-columns", PrintPreset.TWO_COLUMNS);
+    }
+
+    /** One column (50 mm; common practice for a newspaper's narrowest graphic): names at the smallest type are a third of the width. */
+    @Test
+    void namesFitTheirFramesAtOneColumn() throws IOException {
+        assertNamesInsideFrames("one-column", PrintPreset.ONE_COLUMN);
     }
 
     private static void assertNamesInsideFrames(String width, PrintPreset preset) throws IOException {
