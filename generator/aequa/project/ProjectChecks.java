@@ -123,8 +123,11 @@ final class ProjectChecks {
         if (map.insets() != null) {
             InsetsChecks.check(at + "/insets", map.insets(), this::error);
         }
-        if (map.colours().hue() < 0 || map.colours().hue() > 360) {
+        if (!(map.colours().hue() >= 0 && map.colours().hue() <= 360)) {
             error("project-bad-value", at + "/colours/hue", "'hue' must be between 0 and 360 degrees.", "");
+        }
+        if (!(map.colours().hueLow() >= 0 && map.colours().hueLow() <= 360)) {
+            error("project-bad-value", at + "/colours/hue-low", "'hue-low' must be between 0 and 360 degrees.", "");
         }
     }
 
