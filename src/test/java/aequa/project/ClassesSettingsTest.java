@@ -1,10 +1,8 @@
 package aequa.project;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 
@@ -12,7 +10,6 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 import aequa.findings.Finding;
-import aequa.findings.Findings;
 
 /**
  * The classes setting of a map is checked once, where the project file is read, each problem with its line:
@@ -24,15 +21,7 @@ class ClassesSettingsTest {
     Path dir;
 
     private List<Finding> load(String classes) throws IOException {
-        Files.writeString(dir.resolve("r.geojson"), "");
-        Files.writeString(dir.resolve("f.csv"), "");
-        Files.writeString(dir.resolve("aequa.yaml"), "regions:\n  r: { file: r.geojson, key: code }\n"
-                + "figures:\n  f: { file: f.csv, key: code }\n"
-                + "maps:\n  - id: m\n    regions: r\n    figures: f\n    indicator: x\n    classes: " + classes + "\n");
-        Findings findings = new Findings();
-        assertTrue(ProjectLoader.load(dir, findings).isEmpty() || findings.list().isEmpty(),
-                "a project with an error is not loaded");
-        return findings.list();
+        return OneMapProject.findings(dir, "classes", classes);
     }
 
     private List<String> codes(String classes) throws IOException {

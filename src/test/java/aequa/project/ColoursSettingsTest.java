@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 
@@ -12,7 +11,6 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 import aequa.findings.Finding;
-import aequa.findings.Findings;
 
 /**
  * A map's hues are angles on the OKLCh hue circle, 0 to 360 degrees (CSS Color Module Level 4, section 9.1:
@@ -26,15 +24,7 @@ class ColoursSettingsTest {
     Path dir;
 
     private List<Finding> load(String colours) throws IOException {
-        Files.writeString(dir.resolve("r.geojson"), "");
-        Files.writeString(dir.resolve("f.csv"), "");
-        Files.writeString(dir.resolve("aequa.yaml"), "regions:\n  r: { file: r.geojson, key: code }\n"
-                + "figures:\n  f: { file: f.csv, key: code }\n"
-                + "maps:\n  - id: m\n    regions: r\n    figures: f\n    indicator: x\n    colours: " + colours + "\n");
-        Findings findings = new Findings();
-        assertTrue(ProjectLoader.load(dir, findings).isEmpty() || findings.list().isEmpty(),
-                "a project with an error is not loaded");
-        return findings.list();
+        return OneMapProject.findings(dir, "colours", colours);
     }
 
     @Test
