@@ -73,23 +73,23 @@ public record MapModel(MapSpec spec, List<String> periods, ProjectionChoice proj
      * A translation, so every drawn area stays as audited. The map itself when print moves nothing.
      */
     public MapModel forPrint() {
-        if (parts.stream().noneMatch(MapPart::movedInPrint)) {
-            return parts.stream().allMatch(p -> p.frame().equals(p.print().frame())) ? this
-                    : new MapModel(spec, periods, projection, regions, classification, ramp, areaAudit, notices,
-                            parts.stream().map(MapPart::inPrint).toList(), outlinesM);
+        if (parts.stream().allMatch(p -> !p.movedInPrint() && p.frame().equals(p.print().frame()))) {
+            return this;
         }
-        Map<String, MapPart> partByKey = new HashMap<>();
-        parts.forEach(p -> p.keys().forEach(k -> partByKey.put(k, p)));
+        Map<String, MapPart> movedByKey = new HashMap<>();
+        parts.stream().filter(MapPart::movedInPrint).forEach(p -> p.keys().forEach(k -> movedByKey.put(k, p)));
         List<MapRegion> moved = regions.stream().map(r -> {
-            MapPart part = partByKey.get(r.key());
-            return part == null || !part.movedInPrint() ? r : new MapRegion(r.key(), r.name(), r.geodesicAreaKm2(),
-                    r.mapAreaRatio(), moved(r.planarM(), part), r.values());
+            MapPart part = movedByKey.get(r.key());
+            return part == null ? r : new MapRegion(r.key(), r.name(), r.geodesicAreaKm2(), r.mapAreaRatio(),
+                    moved(r.planarM(), part), r.values());
         }).toList();
+        // a group outline lies in one part: in the frame of a framed part that print moves, or else where it is
         List<Geometry> outlines = new ArrayList<>();
         for (int i = 0; i < outlinesM.getNumGeometries(); i++) {
             Geometry line = outlinesM.getGeometryN(i);
             Coordinate c = line.getEnvelopeInternal().centre();
-            MapPart part = c == null ? null : parts.stream().filter(p -> !p.main() && p.frame().contains(c.x, c.y)).findFirst().orElse(null);
+            MapPart part = c == null ? null : parts.stream()
+                    .filter(p -> p.movedInPrint() && p.frame().contains(c.x, c.y)).findFirst().orElse(null);
             outlines.add(part == null ? line : moved(line, part));
         }
         Geometry movedOutlines = outlines.isEmpty() ? outlinesM : outlinesM.getFactory().buildGeometry(outlines);

@@ -13,7 +13,6 @@ import aequa.composite.CompositePlanner;
 import aequa.drawing.PrintPreset;
 import aequa.drawing.PrintSize;
 import aequa.drawing.Themes;
-import aequa.drawing.WebSize;
 import aequa.composite.PartPlan;
 import aequa.ellipsoid.LonLatArea;
 import aequa.ellipsoid.LonLatDensifier;
@@ -22,6 +21,7 @@ import aequa.inputs.regions.Region;
 import aequa.project.ChecksSpec;
 import aequa.project.InsetsSpec;
 import aequa.project.SiteSpec;
+import aequa.publish.DrawingSettings;
 import aequa.projection.ProjectionRequest;
 
 /**
@@ -31,6 +31,9 @@ import aequa.projection.ProjectionRequest;
  * main part's plane), for a person or a script.
  */
 final class PartsReport {
+
+    /** The site settings of a project whose file sets none. */
+    private static final SiteSpec DEFAULT_SITE = new SiteSpec(null, null, null, null, null);
 
     private PartsReport() {
     }
@@ -63,17 +66,11 @@ final class PartsReport {
         return String.format(Locale.ROOT, "%,.0f x %,.0f km", (f.maxXM() - f.minXM()) / 1000, (f.maxYM() - f.minYM()) / 1000);
     }
 
-    /** The print width a project has when its file does not set one. */
-    private static String defaultPrintWidth() {
-        return new SiteSpec(null, null, null, null, null).printWidth();
-    }
-
     /** The frames' least name bands as a project with the default site and print settings lays them out. */
     private static FrameNameBands defaultFrameNameBands() {
-        SiteSpec site = new SiteSpec(null, null, null, null, null);
-        PrintSize print = PrintSize.of(PrintPreset.fromConfigName(site.printWidth()).orElseThrow());
-        return new FrameNameBands(WebSize.STANDARD.frameNameBandShare(Themes.bundled(site.theme())),
-                print.frameNameBandShare(Themes.bundled(site.printTheme())));
+        PrintSize print = PrintSize.of(PrintPreset.fromConfigName(DEFAULT_SITE.printWidth()).orElseThrow());
+        return new DrawingSettings(Themes.bundled(DEFAULT_SITE.theme()), Themes.bundled(DEFAULT_SITE.printTheme()), print)
+                .frameNameBands();
     }
 
     /**
@@ -109,11 +106,24 @@ final class PartsReport {
                 MapPart placed = report.placed().get(parts.indexOf(p));
                 MapPart main = report.placed().get(0);
                 s.append(String.format(Locale.ROOT, "      on the site: placed %s; frame %s%n", placement(placed, main), size(placed.frame())));
-                s.append(String.format(Locale.ROOT, "      in print (%s): placed %s; frame %s%n", defaultPrintWidth(),
+                s.append(String.format(Locale.ROOT, "      in print (%s): placed %s; frame %s%n", DEFAULT_SITE.printWidth(),
                         placement(placed.inPrint(), main.inPrint()), size(placed.print().frame())));
             }
         }
         return s.toString();
+    }
+
+    /** Where {@code placed} sits against {@code main}, for a script: its quarter (a framed part's) and its frame. */
+    private static Map<String, Object> placementJson(MapPart placed, MapPart main) {
+        Map<String, Object> placement = new LinkedHashMap<>();
+        if (!placed.main()) {
+            String words = placement(placed, main);
+            placement.put("corner", words.substring(0, words.indexOf(',')));
+            placement.put("insideMainBox", words.contains("inside"));
+        }
+        MapPart.Frame f = placed.frame();
+        placement.put("frameM", List.of(f.minXM(), f.minYM(), f.maxXM(), f.maxYM()));
+        return placement;
     }
 
     static List<Map<String, Object>> json(Parts report) {
@@ -136,24 +146,9 @@ final class PartsReport {
             int index = parts.indexOf(p);
             if (index < report.placed().size()) {
                 MapPart placed = report.placed().get(index);
-                MapPart.Frame f = placed.frame();
-                Map<String, Object> placement = new LinkedHashMap<>();
-                if (!p.main()) {
-                    String words = placement(placed, report.placed().get(0));
-                    placement.put("corner", words.substring(0, words.indexOf(',')));
-                    placement.put("insideMainBox", words.contains("inside"));
-                }
-                placement.put("frameM", List.of(f.minXM(), f.minYM(), f.maxXM(), f.maxYM()));
-                part.put("placement", placement);
-                MapPart.Frame pf = placed.print().frame();
-                Map<String, Object> print = new LinkedHashMap<>();
-                if (!p.main()) {
-                    String words = placement(placed.inPrint(), report.placed().get(0).inPrint());
-                    print.put("corner", words.substring(0, words.indexOf(',')));
-                    print.put("insideMainBox", words.contains("inside"));
-                }
-                print.put("frameM", List.of(pf.minXM(), pf.minYM(), pf.maxXM(), pf.maxYM()));
-                part.put("printPlacement", print);
+                MapPart main = report.placed().get(0);
+                part.put("placement", placementJson(placed, main));
+                part.put("printPlacement", placementJson(placed.inPrint(), main.inPrint()));
             }
             return part;
         }).toList();

@@ -5,12 +5,10 @@ import java.util.Optional;
 
 import aequa.atlas.Atlas;
 import aequa.atlas.AtlasLoader;
-import aequa.atlas.FrameNameBands;
 import aequa.atlas.LoadOptions;
 import aequa.drawing.PrintSize;
 import aequa.drawing.Theme;
 import aequa.drawing.Themes;
-import aequa.drawing.WebSize;
 import aequa.findings.Finding;
 import aequa.findings.Findings;
 import aequa.inputs.CacheFolder;
@@ -105,8 +103,7 @@ public final class CheckStep {
                              Findings findings) {
         LoadOptions options = new LoadOptions(settings.theme().colours().background(), PreviousProjections.read(outDir))
                 .withCache(CacheFolder.of(project.dir()), cacheUse)
-                .withFrameNameBands(new FrameNameBands(WebSize.STANDARD.frameNameBandShare(settings.theme()),
-                        settings.printSize().frameNameBandShare(settings.printTheme())));
+                .withFrameNameBands(settings.frameNameBands());
         return AtlasLoader.load(project, options, findings);
     }
 }
